@@ -1,0 +1,98 @@
+#pragma once
+// What the kernel makes of a scene: tool moves, the exact as-cut profile, the 3D surface with
+// feed marks, the comparison with the drawing, and findings. Plain values; mm and radians.
+#include "swarf/sim/scene.h"
+
+#include <Eigen/Core>
+#include <string>
+#include <vector>
+
+namespace swarf {
+
+/// One straight move of the tool, as the machine model makes it from the dial readings.
+struct ToolMove {
+    int pass = -1;                   ///< index into Scene::plan.passes
+    Eigen::Vector2d tipFrom{0, 0};   ///< imaginary tip (z, x) at the start, mm
+    Eigen::Vector2d tipTo{0, 0};     ///< imaginary tip (z, x) at the end, mm
+    double feedMmPerRev = 0.1;
+    /// Dial readings (mm of dial) at the start and end, for display.
+    double crossFrom = 0, crossTo = 0, compoundFrom = 0, compoundTo = 0, saddleFrom = 0,
+           saddleTo = 0;
+};
+
+/// A radius sampled along the axis: radiusMm[i] at z = z0Mm + i·dzMm.
+struct Profile {
+    double z0Mm = 0;
+    double dzMm = 0.002;
+    std::vector<double> radiusMm;
+
+    double zAt(std::size_t i) const { return z0Mm + static_cast<double>(i) * dzMm; }
+    /// Linear interpolation; clamps outside.
+    double radiusAt(double zMm) const;
+    /// Volume of the solid of revolution, mm³ (each interval taken as a frustum).
+    double volumeMm3() const;
+};
+
+/// The 3D as-cut surface: radius R(z, φ) at z = z0 + i·dz, φ = 2π j / nPhi.
+struct HeightMap {
+    double z0Mm = 0;
+    double dzMm = 0.01;
+    int nz = 0;
+    int nPhi = 0;
+    std::vector<float> radiusMm;  ///< radiusMm[i * nPhi + j]
+    float at(int i, int j) const { return radiusMm[static_cast<std::size_t>(i) * nPhi + j]; }
+};
+
+/// Kinds of finding about the cut. These are results, not errors.
+enum class FindingKind {
+    LeftOn,          ///< metal left on after the last pass, beyond tolerance
+    Overcut,         ///< cut below the drawing, beyond tolerance: scrap
+    Rubbing,         ///< trailing edge or flank rubs: the cone is steeper than the tool can follow
+    JawCrash,        ///< the tool reaches the chuck jaws
+    PastStock,       ///< the move runs past the stock's free end or through the centre
+    CompoundTravel,  ///< a compound reading beyond its travel
+    DepthOfCut,      ///< depth of cut beyond the cutting edge length
+    AirCut,          ///< the pass cuts nothing
+};
+
+/// "left_on", "overcut", ... as written in result.json.
+const char* findingKindName(FindingKind kind);
+
+/// One finding, tied to the pass that caused it (−1 if none).
+struct Finding {
+    FindingKind kind = FindingKind::LeftOn;
+    int pass = -1;
+    std::string message;
+    double zMm = 0;       ///< where along the axis, if it has a place
+    double valueMm = 0;   ///< its size, if it has one
+};
+
+/// The as-cut part against one feature of the drawing.
+struct FeatureReport {
+    int feature = -1;                   ///< index into Scene::part.features
+    double maxLeftOnMm = 0;             ///< largest + deviation normal to the surface (≥ 0)
+    double maxOvercutMm = 0;            ///< largest − deviation, as a positive number (≥ 0)
+    double asCutDiameterMm = 0;         ///< cylinder: mean diameter; cone: at the gauge plane
+    double asCutHalfAngleRad = 0;       ///< cone: fitted half angle as cut
+    bool withinTolerance = false;
+};
+
+/// Everything the kernel found.
+struct CutResult {
+    std::vector<ToolMove> moves;
+    Profile stock;                      ///< stock radius on the same samples as asCut
+    Profile nominal;                    ///< drawing radius (NaN where the drawing says nothing)
+    Profile asCut;                      ///< exact axisymmetric as-cut profile
+    std::vector<Profile> afterPass;     ///< as-cut profile after each pass
+    std::vector<double> deviationMm;    ///< signed normal deviation per asCut sample; NaN off-feature
+    HeightMap surface;                  ///< 3D surface with feed marks
+    std::vector<FeatureReport> features;
+    std::vector<Finding> findings;
+    bool withinTolerance = false;       ///< the verdict
+    double gaugeZMm = 0, gaugeNominalDiameterMm = 0, gaugeAsCutDiameterMm = 0;
+    double maxLeftOnMm = 0, maxOvercutMm = 0;
+    double stockVolumeMm3 = 0, asCutVolumeMm3 = 0, removedVolumeMm3 = 0, leftoverVolumeMm3 = 0;
+    double rtUm = 0, raUm = 0;          ///< theoretical roughness of the finishing pass
+};
+
+} // namespace swarf

@@ -1,0 +1,179 @@
+#pragma once
+// The scene: stock, drawing, tool, set-up and plan, as plain values in mm and radians.
+// Read from TOML by swarf::io::readScene (sim/io); validated by validate().
+//
+// Coordinates, used everywhere in swarf:
+//   z  axial position, mm, measured from the part's datum face (its finished free end face)
+//      toward the chuck. The stock's free end is at z = −stock.faceAllowanceMm; the jaws' face
+//      is at z = −faceAllowanceMm + stickOutMm.
+//   x  horizontal distance from the spindle axis, mm (the cross-slide direction), on the
+//      operator's side; a point at x with the tool tip at height h off centre cuts radius
+//      sqrt(x² + h²).
+//   A tool position is its imaginary tip: the corner where the tangents to the nose at the
+//   lowest x and at the leading z meet. Dials are zeroed on that point.
+#include "swarf/sim/cone.h"
+#include "swarf/sim/error.h"
+#include "swarf/sim/units.h"
+
+#include <optional>
+#include <string>
+#include <vector>
+
+namespace swarf {
+
+/// The bar in the chuck.
+struct Stock {
+    double diameterMm = 0;       ///< bar diameter, mm
+    double lengthMm = 0;         ///< whole bar length, mm (the rest of the bar is in the jaws/spindle)
+    double stickOutMm = 0;       ///< from the jaws' face to the free end, mm
+    double faceAllowanceMm = 0;  ///< stock beyond the datum face, mm (the free end is at z = −this)
+    std::string material;        ///< free text
+    bool tailstockSupport = false;  ///< work supported by a centre in the tailstock
+    SourceLoc where;
+
+    double freeEndZMm() const { return -faceAllowanceMm; }
+    double jawZMm() const { return -faceAllowanceMm + stickOutMm; }
+};
+
+/// ISO 2768-1 general tolerance class.
+enum class Iso2768 { f, m, c, v };
+
+/// Kinds of drawing feature along the axis.
+enum class FeatureKind { Cylinder, Cone, Chamfer, Face };
+
+/// One feature of the drawing, between zStartMm and zEndMm (zStart < zEnd; equal for a face).
+/// A chamfer is stored as a cone (its half angle and diameter at its small end).
+struct Feature {
+    FeatureKind kind = FeatureKind::Cylinder;
+    std::string name;          ///< as the scene names it, or "feature N"
+    double zStartMm = 0, zEndMm = 0;
+    double diameterMm = 0;     ///< Cylinder: the diameter. Face: the outer diameter of the face.
+    Cone cone;                 ///< Cone and Chamfer
+    std::string coneGivenAs;   ///< how the scene gave the cone ("half_angle", "standard Morse 3", ...)
+    double toleranceMm = 0;    ///< ± on diameter (cylinder diameter, cone gauge diameter), mm
+    double angleToleranceRad = 0;  ///< ± on the half angle (cone, chamfer), rad
+    bool toleranceFromClass = true;  ///< true if taken from the ISO 2768 class
+    SourceLoc where;
+
+    /// Nominal radius at z (mm) for Cylinder, Cone, Chamfer; precondition z in [zStart, zEnd].
+    double radiusAt(double zMm) const;
+    /// Half angle of the surface from the axis (0 for a cylinder), rad.
+    double surfaceHalfAngleRad() const;
+};
+
+/// The drawing: features along the axis from the datum face.
+struct Part {
+    std::vector<Feature> features;   ///< in increasing z
+    Iso2768 toleranceClass = Iso2768::m;
+    SourceLoc where;
+
+    /// Nominal radius at z: of the feature covering z (the larger where two meet). Empty outside.
+    std::optional<double> nominalRadiusAt(double zMm) const;
+    /// The first cone feature (the one the job is about), or nullptr.
+    const Feature* mainCone() const;
+    double zMinMm() const;
+    double zMaxMm() const;
+};
+
+/// Which way a tool is handed (ISO 1832): R feeds toward the chuck, L toward the tailstock.
+enum class Hand { R, L, N };
+
+/// The insert and its holder.
+struct Tool {
+    char shape = 'D';              ///< ISO 1832 shape letter, or 0 when given by includedAngleRad
+    double includedAngleRad = 0;   ///< insert corner angle ε
+    double noseRadiusMm = 0.4;     ///< r
+    double enteringAngleRad = 0;   ///< holder entering angle κr, measured from the feed direction
+    Hand hand = Hand::R;
+    double edgeLengthMm = 15;      ///< cutting edge length (insert size), mm
+    double tipHeightMm = 0;        ///< tip above (+) or below (−) centre, mm
+    double thicknessMm = 4.76;     ///< insert thickness, for drawing it
+    std::string holderCode;        ///< ISO 5608 holder letter if given ("J"), for messages
+    SourceLoc where;
+};
+
+/// How the compound's angle scale is graduated.
+enum class CompoundScale { FromAxis, FromCrossSlide };
+/// Whether a cross-slide reading is a change of diameter or of radius.
+enum class DialMode { Diameter, Radius };
+
+/// One handwheel slide.
+struct Slide {
+    double mmPerDivision = 0.02;   ///< one dial division, mm (on diameter for a diameter dial)
+    int divisionsPerTurn = 100;    ///< divisions on the dial before it wraps
+    double backlashMm = 0;         ///< lost motion when the handwheel reverses, mm of slide travel
+    double travelMm = 1e9;         ///< usable travel from the zero reading either way, mm
+};
+
+/// The lathe as set up. Readings of all three slides are zero when the imaginary tip is at
+/// (zeroZMm, zeroDiameterMm / 2), each slide having last moved in its increasing direction.
+struct Setup {
+    double compoundReadingRad = 0;          ///< the compound angle read on its scale
+    CompoundScale compoundScale = CompoundScale::FromAxis;
+    double compoundErrorRad = 0;            ///< true angle from the axis minus the intended one
+    Widens compoundAdvanceToward = Widens::TowardTailstock;  ///< TowardChuck: advancing moves +z
+    Slide compound{0.02, 100, 0, 100};
+    Slide cross{0.02, 100, 0, 150};
+    DialMode crossDial = DialMode::Diameter;
+    Slide saddle{0.1, 200, 0, 1e9};
+    double zeroDiameterMm = 0;              ///< diameter at which the cross-slide reads zero
+    double zeroZMm = 0;                     ///< z at which the saddle reads zero
+    std::optional<double> spindleRpm;       ///< for the sheet only
+    SourceLoc where;
+
+    /// The compound's true angle from the spindle axis, rad (reading converted, error added).
+    double compoundAxisAngleRad() const;
+};
+
+/// What a person does in one pass.
+enum class PassKind {
+    Compound,    ///< cross-slide and saddle locked, compound wound from → to
+    Saddle,      ///< straight turning: saddle wound from → to
+    CrossSlide,  ///< facing or plunging: cross-slide wound from → to
+    Path,        ///< CNC: straight moves through imaginary-tip points
+};
+
+/// One pass of the plan. Readings are in mm of dial (diameter mm for a diameter dial).
+struct Pass {
+    PassKind kind = PassKind::Compound;
+    std::string note;                 ///< what the person does, in words
+    double crossMm = 0;               ///< cross-slide reading while the pass runs (if not moving)
+    double compoundMm = 0;            ///< compound reading (if not moving)
+    double saddleMm = 0;              ///< saddle reading (if not moving)
+    double fromMm = 0, toMm = 0;      ///< the moving slide's readings
+    double feedMmPerRev = 0.1;
+    std::vector<std::pair<double, double>> pathZX;  ///< Path: (z, x radius) of the imaginary tip
+    SourceLoc where;
+};
+
+/// The pass plan.
+struct Plan {
+    std::vector<Pass> passes;
+    SourceLoc where;
+};
+
+/// Options for the simulation.
+struct SimOptions {
+    double profileStepMm = 0.002;     ///< axial sample spacing of the exact profile
+    int angleSamples = 180;           ///< samples around the part for the 3D surface
+};
+
+/// A whole scene.
+struct Scene {
+    std::string name;
+    std::string description;
+    std::string file;                 ///< the file it came from
+    Units units = Units::Mm;
+    Stock stock;
+    Part part;
+    Tool tool;
+    Setup setup;
+    Plan plan;
+    SimOptions sim;
+    std::vector<double> gaugeBlocksMm;  ///< the gauge block set for sine bar stacks (empty: built-in)
+
+    /// Checks ranges and consistency; throws InputError naming the key and its location.
+    void validate() const;
+};
+
+} // namespace swarf

@@ -1,0 +1,53 @@
+#pragma once
+// The insert's outline in the tool plane (z, x), relative to the nose centre: a nose arc of
+// radius r between the leading (main) and trailing straight edges, from the ISO 1832 corner
+// angle and the holder's entering angle. Convex.
+#include "swarf/sim/scene.h"
+
+#include <Eigen/Core>
+#include <limits>
+#include <vector>
+
+namespace swarf {
+
+/// One piece of the outline's boundary, counter-clockwise in (z, x).
+struct OutlinePiece {
+    enum class Kind { Segment, Arc } kind = Kind::Segment;
+    Eigen::Vector2d a, b;        ///< Segment: ends. Arc: start and end points.
+    Eigen::Vector2d centre{0, 0};  ///< Arc only
+    double radius = 0;           ///< Arc only
+    double startRad = 0, sweepRad = 0;  ///< Arc only: polar angle of a about centre, CCW sweep
+};
+
+/// The insert outline of a Tool. Immutable value; all lengths mm, nose centre at the origin.
+class ToolOutline {
+  public:
+    /// Builds the outline; the Tool must have been validated.
+    explicit ToolOutline(const Tool& tool);
+
+    double noseRadiusMm() const { return r_; }
+    /// Offset from the nose centre to the imaginary tip (z, x), mm.
+    Eigen::Vector2d imaginaryTip() const { return tip_; }
+    /// Lowest x of the outline at axial offset u from the nose centre; +inf outside [uMin, uMax].
+    double lowerEnvelope(double uMm) const;
+    double uMinMm() const { return uMin_; }
+    double uMaxMm() const { return uMax_; }
+    /// The outline point minimising x − slope·u: where a move of slope dx/dz touches the
+    /// swept envelope.
+    Eigen::Vector2d support(double slope) const;
+    /// The closed boundary, counter-clockwise, as pieces.
+    const std::vector<OutlinePiece>& boundary() const { return pieces_; }
+    /// The closed boundary as a polygon whose chords stay within maxChordErrorMm of the arc.
+    std::vector<Eigen::Vector2d> polygon(double maxChordErrorMm = 1e-4) const;
+    /// Angle of the leading edge from +z (= κr for a right-hand tool), rad.
+    double leadingEdgeAngleRad() const { return leadAngle_; }
+    /// Angle of the trailing edge from +z, rad (κr + ε for a right-hand tool).
+    double trailingEdgeAngleRad() const { return trailAngle_; }
+
+  private:
+    double r_ = 0, uMin_ = 0, uMax_ = 0, leadAngle_ = 0, trailAngle_ = 0;
+    Eigen::Vector2d tip_{0, 0};
+    std::vector<OutlinePiece> pieces_;
+};
+
+} // namespace swarf

@@ -1,0 +1,44 @@
+// Formatting lengths and angles for people.
+#include "swarf/sim/units.h"
+
+#include <cmath>
+#include <cstdio>
+
+namespace swarf {
+
+std::string formatLength(double mm, Units u, int digits) {
+    if (digits < 0) digits = u == Units::Inch ? 4 : 3;
+    char buf[64];
+    std::snprintf(buf, sizeof buf, "%.*f %s", digits, fromMm(mm, u), unitName(u));
+    return buf;
+}
+
+std::string formatSmallLength(double mm, Units u) {
+    char buf[64];
+    if (u == Units::Inch) {
+        // The trade reads small inch lengths in thousandths ("thou").
+        std::snprintf(buf, sizeof buf, "%.2f thou", mm / kMmPerInch * 1000.0);
+    } else {
+        std::snprintf(buf, sizeof buf, "%.1f µm", mm * 1000.0);
+    }
+    return buf;
+}
+
+std::string formatDms(double rad, int secondDecimals) {
+    const bool neg = rad < 0;
+    double deg = std::fabs(radToDeg(rad));
+    const double scale = std::pow(10.0, secondDecimals);
+    // Round to the shown precision first, so that 59.99″ does not print as 60.0″.
+    double totalSec = std::round(deg * 3600.0 * scale) / scale;
+    int d = static_cast<int>(totalSec / 3600.0);
+    totalSec -= d * 3600.0;
+    int m = static_cast<int>(totalSec / 60.0);
+    double s = totalSec - m * 60.0;
+    if (s < 0) s = 0;
+    char buf[64];
+    std::snprintf(buf, sizeof buf, "%s%d°%02d′%0*.*f″", neg ? "-" : "", d, m,
+                  secondDecimals > 0 ? secondDecimals + 3 : 2, secondDecimals, s);
+    return buf;
+}
+
+} // namespace swarf

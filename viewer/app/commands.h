@@ -1,0 +1,14 @@
+#pragma once
+// Subcommands of the swarf executable. Each lives in its own cmd_<name>.cpp and registers
+// itself on the app; its callback throws swarf::Error on failure and sets exitCode otherwise.
+#include <CLI/CLI.hpp>
+
+namespace swarf::app {
+
+void registerCheck(CLI::App& app, int& exitCode);  ///< swarf check SCENE
+void registerTaper(CLI::App& app, int& exitCode);  ///< swarf taper ... (bench calculator)
+void registerRun(CLI::App& app, int& exitCode);    ///< swarf run SCENE --out DIR
+void registerView(CLI::App& app, int& exitCode);   ///< swarf view SCENE
+void registerPlan(CLI::App& app, int& exitCode);   ///< swarf plan SCENE --out DIR
+
+} // namespace swarf::app

@@ -1,0 +1,37 @@
+// swarf: plan, simulate and check cones turned on a lathe.
+#include "commands.h"
+#include "swarf/sim/error.h"
+
+#include <cstdio>
+#include <exception>
+
+int main(int argc, char** argv) {
+    CLI::App app{"swarf: plan, simulate and check cones (tapers) turned on a lathe"};
+    app.require_subcommand(1);
+    app.set_version_flag("--version", "swarf 0.1.0");
+    int exitCode = swarf::kExitOk;
+    swarf::app::registerCheck(app, exitCode);
+    swarf::app::registerTaper(app, exitCode);
+    swarf::app::registerRun(app, exitCode);
+    swarf::app::registerView(app, exitCode);
+    swarf::app::registerPlan(app, exitCode);
+    try {
+        app.parse(argc, argv);
+    } catch (const CLI::CallForHelp& e) {
+        return app.exit(e);
+    } catch (const CLI::CallForAllHelp& e) {
+        return app.exit(e);
+    } catch (const CLI::CallForVersion& e) {
+        return app.exit(e);
+    } catch (const CLI::ParseError& e) {
+        app.exit(e);
+        return swarf::kExitUsage;
+    } catch (const swarf::Error& e) {
+        std::fprintf(stderr, "swarf: %s\n", e.what());
+        return e.exitCode();
+    } catch (const std::exception& e) {
+        std::fprintf(stderr, "swarf: internal error: %s\n", e.what());
+        return swarf::kExitInternal;
+    }
+    return exitCode;
+}
