@@ -152,6 +152,29 @@ struct Plan {
     SourceLoc where;
 };
 
+/// How the planner should plan (scene section [planning]); lengths mm.
+struct PlanningOptions {
+    double maxDepthMm = 1.0;           ///< largest depth of cut per roughing pass, normal to the cone
+    double finishAllowanceMm = 0.1;    ///< left for the finishing pass, normal to the cone
+    double roughFeedMmPerRev = 0.15;
+    double finishFeedMmPerRev = 0.08;
+    /// How the cone is placed: zero the dials on a finished diameter and face, or turn a
+    /// reference shoulder at the gauge plane to the gauge diameter and work from it.
+    enum class Placing { ZeroOnDiameter, ReferenceShoulder } placing = Placing::ZeroOnDiameter;
+    /// Rough with the compound parallel to the cone, or with stepped saddle passes first.
+    enum class Roughing { Compound, SaddleSteps } roughing = Roughing::Compound;
+    double rollDiameterMm = 0;         ///< rolls for the over-rolls check; 0: choose one
+    SourceLoc where;
+};
+
+/// What a scene is made to show ([expect]); the scene tests check it.
+struct Expect {
+    std::optional<bool> withinTolerance;  ///< verdict, if the scene states one
+    std::vector<std::string> findings;    ///< finding kinds that must be raised ("left_on", ...)
+    bool noFindings = false;              ///< true: no finding may be raised
+    SourceLoc where;
+};
+
 /// Options for the simulation.
 struct SimOptions {
     double profileStepMm = 0.002;     ///< axial sample spacing of the exact profile
@@ -170,6 +193,8 @@ struct Scene {
     Setup setup;
     Plan plan;
     SimOptions sim;
+    PlanningOptions planning;
+    Expect expect;
     std::vector<double> gaugeBlocksMm;  ///< the gauge block set for sine bar stacks (empty: built-in)
 
     /// Checks ranges and consistency; throws InputError naming the key and its location.
