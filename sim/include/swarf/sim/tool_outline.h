@@ -45,9 +45,18 @@ class ToolOutline {
     double trailingEdgeAngleRad() const { return trailAngle_; }
 
   private:
+    /// One piece of the lower chain over [u0, u1]: a line x = x0 + slope·(u − u0), or the
+    /// lower half of a circle (centre cz, cx; radius rad).
+    struct LowerPiece {
+        double u0 = 0, u1 = 0;
+        bool arc = false;
+        double x0 = 0, slope = 0;         // line
+        double cz = 0, cx = 0, rad = 0;   // arc
+    };
     double r_ = 0, uMin_ = 0, uMax_ = 0, leadAngle_ = 0, trailAngle_ = 0;
     Eigen::Vector2d tip_{0, 0};
     std::vector<OutlinePiece> pieces_;
+    std::vector<LowerPiece> lower_;   // sorted by u0, covering [uMin_, uMax_]
 };
 
 } // namespace swarf
