@@ -33,14 +33,20 @@ struct Profile {
     double volumeMm3() const;
 };
 
-/// The 3D as-cut surface: radius R(z, φ) at z = z0 + i·dz, φ = 2π j / nPhi.
+/// The 3D as-cut surface: radius R(z, φ) at row z (zMm[i] if given, else z0 + i·dz) and
+/// φ = 2π j / nPhi. The kernel spaces its rows per region (fine where a feed leaves the final
+/// surface, to resolve the cusps, coarser elsewhere) and fills zMm; z0Mm is then the first row
+/// and dzMm the finest spacing used.
 struct HeightMap {
     double z0Mm = 0;
     double dzMm = 0.01;
     int nz = 0;
     int nPhi = 0;
     std::vector<float> radiusMm;  ///< radiusMm[i * nPhi + j]
+    std::vector<double> zMm;      ///< z of each row, increasing (nz values), or empty: uniform
     float at(int i, int j) const { return radiusMm[static_cast<std::size_t>(i) * nPhi + j]; }
+    /// z of row i, mm.
+    double rowZ(int i) const { return zMm.empty() ? z0Mm + i * dzMm : zMm[static_cast<std::size_t>(i)]; }
 };
 
 /// Kinds of finding about the cut. These are results, not errors.

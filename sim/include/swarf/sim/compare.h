@@ -1,0 +1,45 @@
+#pragma once
+// The as-cut part against the drawing: signed deviation normal to each nominal feature
+// (+ metal left on, − overcut), the diameter as cut at the gauge plane, the fitted half angle,
+// and a verdict per feature against its tolerance.
+//
+// A diameter tolerance ±t on a surface at half angle θ is a band of ±(t/2)·cos θ normal to it.
+// Internal corners (a feature's end against a larger neighbour or a face) keep the nose radius
+// as any turned corner does: samples within one nose radius of such a corner are shown in the
+// deviation but left out of the feature's verdict and its largest left-on.
+#include "swarf/sim/cut.h"
+#include "swarf/sim/scene.h"
+
+#include <vector>
+
+namespace swarf {
+
+/// Index of the radial feature (cylinder, cone, chamfer) that gives the nominal radius at z
+/// (the larger where two meet), or −1.
+int featureAt(const Part& part, double zMm);
+
+/// The drawing's radius on the grid's samples; NaN where the drawing gives none.
+Profile nominalOnGrid(const Part& part, const Profile& grid);
+
+/// Signed deviation normal to the nominal surface per sample, mm: (R − Rn)·cos θ of the feature
+/// at that sample; NaN off the drawing.
+std::vector<double> normalDeviation(const Part& part, const Profile& nominal, const Profile& asCut);
+
+/// Half-width of a feature's tolerance band normal to its surface, mm: (t/2)·cos θ (for a face
+/// the axial ±t).
+double normalBandMm(const Feature& feature);
+
+/// True where sample i of the grid counts toward its feature's verdict (not within one nose
+/// radius of an internal corner).
+std::vector<bool> verdictMask(const Part& part, const Profile& grid, double noseRadiusMm);
+
+/// Per-feature reports: largest left-on and overcut, diameter as cut (cylinder: mean; cone: at
+/// the gauge plane), fitted half angle (least squares over the counted samples) and verdict.
+std::vector<FeatureReport> compareFeatures(const Scene& scene, const Profile& asCut,
+                                           const std::vector<double>& deviationMm,
+                                           const std::vector<bool>& mask);
+
+/// Volume of metal left on outside the drawing, mm³: ∫ π (R² − Rn²) where R > Rn.
+double leftoverVolumeMm3(const Profile& nominal, const Profile& asCut);
+
+} // namespace swarf

@@ -1,0 +1,188 @@
+// The 3D as-cut surface with feed marks (see height_map.h).
+#include "swarf/sim/height_map.h"
+
+#include <algorithm>
+#include <cmath>
+#include <limits>
+#include <thread>
+
+namespace swarf {
+namespace {
+
+constexpr double kInf = std::numeric_limits<double>::infinity();
+
+// Largest vertical cusp a move with feed f can leave (with margin), mm.
+double cuspBoundMm(double f, double r, double cosAlpha) {
+    if (f <= 0) return 0;
+    const double h = 0.5 * f;
+    if (h >= r) return f;
+    const double rt = h * h / (r + std::sqrt(r * r - h * h));
+    return 1.5 * rt / std::max(cosAlpha, 0.05) + 1e-6;
+}
+
+double cosOfMove(const MoveSweep& s) {
+    const Eigen::Vector2d d = s.centreTo - s.centreFrom;
+    const double len = d.norm();
+    return len > 0 ? std::abs(d.x()) / len : 1.0;
+}
+
+} // namespace
+
+double cuspRowSpacingMm(double feedMmPerRev, double cosAlpha) {
+    return 0.004 * feedMmPerRev * std::max(cosAlpha, 0.05);
+}
+
+double markedRadiusMm(const ToolOutline& outline, const MoveSweep& s, double f, double h,
+                      double zMm, double phiRad) {
+    const Eigen::Vector2d d = s.centreTo - s.centreFrom;
+    const double len = d.norm();
+    auto xAt = [&](double sPos) {
+        const Eigen::Vector2d p = s.centreFrom + (len > 0 ? sPos / len : 0.0) * d;
+        return outline.lowerEnvelope(zMm - p.x()) + p.y();
+    };
+    if (len <= 1e-12) return cutRadiusMm(xAt(0), h);
+    if (f <= 0) return cutRadiusMm(sweptLowestX(outline, s, zMm), h);
+    // Continuous optimum: where the support point sits over z (monotone along a vertical move).
+    double sStar;
+    const double dzu = d.x() / len;
+    if (std::abs(d.x()) > 1e-12) {
+        sStar = (zMm - s.support.x() - s.centreFrom.x()) / dzu;
+    } else {
+        sStar = d.y() < 0 ? len : 0.0;
+    }
+    const double phiF = f * phiRad / (2.0 * kPi);
+    double x;
+    if (phiF >= len || sStar >= len) {
+        x = xAt(len);  // the dwell at the end is the position nearest the optimum
+    } else if (sStar <= phiF) {
+        x = xAt(phiF);
+    } else {
+        const double k = std::floor((sStar - phiF) / f);
+        const double sa = phiF + k * f;
+        const double sb = std::min(sa + f, len);
+        x = std::min(xAt(sa), xAt(sb));
+    }
+    return cutRadiusMm(x, h);
+}
+
+HeightMap buildHeightMap(const Scene& scene, const ToolOutline& outline,
+                         const std::vector<ToolMove>& moves, const ExactSweep& sweep,
+                         const ProgressFn& progress) {
+    const Profile& g = sweep.asCut;
+    const std::size_t n = g.radiusMm.size();
+    const std::size_t count = sweep.cuts.size();
+    const double h = scene.tool.tipHeightMm, r = outline.noseRadiusMm();
+    const double stockR = 0.5 * scene.stock.diameterMm;
+
+    std::vector<MoveSweep> ms(count);
+    std::vector<double> cosA(count), bound(count);
+    double cusp = 1e-6;
+    for (std::size_t k = 0; k < count; ++k) {
+        ms[k] = prepareMove(outline, moves[k]);
+        cosA[k] = cosOfMove(ms[k]);
+        const bool vertical = std::abs(ms[k].centreTo.x() - ms[k].centreFrom.x()) <= 1e-12;
+        cusp = std::max(cusp, vertical ? 0.0 : cuspBoundMm(moves[k].feedMmPerRev, r, cosA[k]));
+    }
+
+    HeightMap map;
+    map.nPhi = std::max(1, scene.sim.angleSamples);
+    // Rows: fine where one feed move leaves the final surface on both sides of an interval.
+    map.dzMm = g.dzMm;
+    for (std::size_t i = 0; i + 1 < n; ++i) {
+        const int m0 = sweep.finalMove[i], m1 = sweep.finalMove[i + 1];
+        double step = g.dzMm;
+        if (m0 >= 0 && m0 == m1 && moves[m0].feedMmPerRev > 0 &&
+            std::abs(ms[m0].centreTo.x() - ms[m0].centreFrom.x()) > 1e-12) {
+            step = std::min(step, cuspRowSpacingMm(moves[m0].feedMmPerRev, cosA[m0]));
+        }
+        const int sub = std::max(1, static_cast<int>(std::ceil(g.dzMm / step - 1e-9)));
+        for (int j = 0; j < sub; ++j) map.zMm.push_back(g.zAt(i) + g.dzMm * j / sub);
+        map.dzMm = std::min(map.dzMm, g.dzMm / sub);
+    }
+    if (n > 0) map.zMm.push_back(g.zAt(n - 1));
+    map.nz = static_cast<int>(map.zMm.size());
+    map.z0Mm = map.zMm.empty() ? g.z0Mm : map.zMm.front();
+    map.radiusMm.assign(static_cast<std::size_t>(map.nz) * map.nPhi, static_cast<float>(stockR));
+
+    std::vector<double> phi(map.nPhi);
+    for (int j = 0; j < map.nPhi; ++j) phi[j] = 2.0 * kPi * j / map.nPhi;
+
+    auto work = [&](std::size_t a, std::size_t b, bool report) {
+        std::vector<std::size_t> relevant;
+        std::vector<double> env(count);
+        for (std::size_t i = a; i < b; ++i) {
+            const double z = map.zMm[i];
+            double finalR = stockR;
+            for (std::size_t k = 0; k < count; ++k) {
+                env[k] = kInf;
+                if (z < ms[k].zLoMm || z > ms[k].zHiMm) continue;
+                env[k] = cutRadiusMm(sweptLowestX(outline, ms[k], z), h);
+                finalR = std::min(finalR, env[k]);
+            }
+            relevant.clear();
+            for (std::size_t k = 0; k < count; ++k)
+                if (env[k] <= finalR + cusp) relevant.push_back(k);
+            float* row = &map.radiusMm[i * map.nPhi];
+            for (int j = 0; j < map.nPhi; ++j) {
+                double R = stockR;
+                for (std::size_t k : relevant)
+                    R = std::min(R, markedRadiusMm(outline, ms[k], moves[k].feedMmPerRev, h, z, phi[j]));
+                row[j] = static_cast<float>(R);
+            }
+            if (report && progress && (i - a) % 2048 == 0) progress(double(i - a) / double(b - a));
+        }
+    };
+    const std::size_t nz = map.zMm.size();
+    if (nz < 2000) {
+        work(0, nz, true);
+    } else {
+        const std::size_t mid = nz / 2;
+        std::thread t(work, mid, nz, false);
+        work(0, mid, true);
+        t.join();
+    }
+    if (progress) progress(1.0);
+    return map;
+}
+
+Roughness measureRoughness(const HeightMap& map, const ToolOutline& outline, const MoveSweep& s,
+                           double h, double zLoMm, double zHiMm) {
+    Roughness out;
+    std::vector<int> rows;
+    for (int i = 0; i < map.nz; ++i) {
+        const double z = map.rowZ(i);
+        if (z >= zLoMm && z <= zHiMm) rows.push_back(i);
+    }
+    if (rows.size() < 3) return out;
+    const double cosA = cosOfMove(s);
+    std::vector<double> base(rows.size()), w(rows.size());
+    for (std::size_t k = 0; k < rows.size(); ++k) {
+        base[k] = cutRadiusMm(sweptLowestX(outline, s, map.rowZ(rows[k])), h);
+        // Trapezoid weights on the (uneven) rows.
+        const double zPrev = map.rowZ(rows[k > 0 ? k - 1 : k]);
+        const double zNext = map.rowZ(rows[k + 1 < rows.size() ? k + 1 : k]);
+        w[k] = 0.5 * (zNext - zPrev);
+    }
+    double rtSum = 0, raSum = 0;
+    for (int j = 0; j < map.nPhi; ++j) {
+        double lo = kInf, hi = -kInf, sw = 0, sm = 0;
+        for (std::size_t k = 0; k < rows.size(); ++k) {
+            const double e = map.at(rows[k], j) - base[k];
+            lo = std::min(lo, e);
+            hi = std::max(hi, e);
+            sw += w[k];
+            sm += w[k] * e;
+        }
+        const double mean = sm / sw;
+        double sa = 0;
+        for (std::size_t k = 0; k < rows.size(); ++k)
+            sa += w[k] * std::abs(map.at(rows[k], j) - base[k] - mean);
+        rtSum += hi - lo;
+        raSum += sa / sw;
+    }
+    out.rtUm = 1000.0 * cosA * rtSum / map.nPhi;
+    out.raUm = 1000.0 * cosA * raSum / map.nPhi;
+    return out;
+}
+
+} // namespace swarf
