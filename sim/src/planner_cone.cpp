@@ -1,0 +1,333 @@
+// planCone: choose the references, order the operations, plan the passes, work out the checks.
+#include "planner_build.h"
+
+#include "swarf/sim/compound_setting.h"
+#include "swarf/sim/nose_offset.h"
+#include "swarf/sim/roll_check.h"
+#include "swarf/sim/roughness.h"
+#include "swarf/sim/sine_bar.h"
+
+#include <algorithm>
+#include <cmath>
+#include <cstdio>
+
+namespace swarf {
+namespace {
+
+void step(ConePlan& out, PlanStep::Kind kind, std::string text) {
+    PlanStep s;
+    s.kind = kind;
+    s.text = std::move(text);
+    out.steps.push_back(std::move(s));
+}
+
+const Feature* coneToPlan(const Part& part, int& index) {
+    const Feature* f = part.mainCone();
+    if (!f) {
+        for (const Feature& x : part.features)
+            if (x.kind == FeatureKind::Chamfer) {
+                f = &x;
+                break;
+            }
+    }
+    index = -1;
+    for (std::size_t i = 0; i < part.features.size(); ++i)
+        if (&part.features[i] == f) index = static_cast<int>(i);
+    return f;
+}
+
+// A roll diameter about a fifth of the cone's length, from sizes commonly kept.
+double chooseRollMm(double coneLengthMm, Units u) {
+    const double mm[] = {1, 1.5, 2, 3, 4, 5, 6, 8, 10, 12, 16, 20, 25};
+    const double in[] = {0.0625, 0.125, 0.1875, 0.25, 0.375, 0.5, 0.75, 1.0};
+    double best = u == Units::Inch ? in[0] * kMmPerInch : mm[0];
+    if (u == Units::Inch) {
+        for (double d : in)
+            if (d * kMmPerInch <= 0.2 * coneLengthMm) best = d * kMmPerInch;
+    } else {
+        for (double d : mm)
+            if (d <= 0.2 * coneLengthMm) best = d;
+    }
+    return best;
+}
+
+// A length rounded down to a whole mm, or a tenth of an inch.
+double roundStackMm(double mm, Units u) {
+    const double q = u == Units::Inch ? 0.1 * kMmPerInch : 1.0;
+    return std::max(0.0, std::floor(mm / q + 1e-9) * q);
+}
+
+void fillChecks(ConePlan& out, const Scene& sc, const Feature& f) {
+    const Cone& cone = f.cone;
+    const double th = cone.halfAngleRad;
+    const double allowance = sc.planning.finishAllowanceMm;
+    const Units u = sc.units;
+    const double len = f.zEndMm - f.zStartMm;
+    // Diameter at a reference plane: the gauge plane, kept a little inside the cone.
+    const double inset = std::min(1.0, len / 4.0);
+    out.checkZMm = std::clamp(cone.gaugeZMm, f.zStartMm + inset, f.zEndMm - inset);
+    out.checkDiameterFinishedMm = cone.diameterAt(out.checkZMm);
+    out.checkDiameterRoughMm = out.checkDiameterFinishedMm + 2.0 * allowance / std::cos(th);
+
+    // Over two rolls, the cone standing on its small end.
+    const double g = cone.growthSign();
+    const double zSmall = g > 0 ? f.zStartMm : f.zEndMm;
+    const double d = sc.planning.rollDiameterMm > 0 ? sc.planning.rollDiameterMm : chooseRollMm(len, u);
+    const double stack1 = roundStackMm(0.2 * len - d / 2.0, u);
+    const double stack2 = std::max(stack1 + (u == Units::Inch ? 2.54 : 1.0),
+                                   roundStackMm(0.75 * len - d / 2.0, u));
+    const RollReadings rr = rollReadingsForCone(cone.diameterAt(zSmall), th, d, stack1, stack2);
+    out.rolls.rollDiameterMm = d;
+    out.rolls.height1Mm = rr.centreHeight1Mm;
+    out.rolls.height2Mm = rr.centreHeight2Mm;
+    out.rolls.z1Mm = zSmall + g * rr.centreHeight1Mm;
+    out.rolls.z2Mm = zSmall + g * rr.centreHeight2Mm;
+    out.rolls.reading1Mm = rr.reading1Mm;
+    out.rolls.reading2Mm = rr.reading2Mm;
+    out.rolls.roughExtraMm = 2.0 * allowance / std::cos(th);
+
+    // Sine bar that sets the compound at θ from the spindle axis.
+    const auto bars = commonSineBars();
+    const std::string want = u == Units::Inch ? "5 in" : "100 mm";
+    SineBar bar = bars.front();
+    for (const SineBar& b : bars)
+        if (b.name == want) bar = b;
+    out.sineBar.barLengthMm = bar.lengthMm;
+    out.sineBar.angleRad = th;
+    out.sineBar.stackMm = sineBarStackMm(bar.lengthMm, th);
+    GaugeBlockSet set = u == Units::Inch ? commonInchBlockSet() : commonMetricBlockSet();
+    if (!sc.gaugeBlocksMm.empty()) {
+        set.name = "the scene's gauge blocks";
+        set.sizes.clear();
+        for (double b : sc.gaugeBlocksMm) set.sizes.push_back(fromMm(b, u));
+        set.units = u;
+    }
+    const GaugeStack gs = combineGaugeBlocks(out.sineBar.stackMm, set);
+    if (gs.found)
+        for (double b : gs.blocks) out.sineBar.blocksMm.push_back(toMm(b, set.units));
+
+    // Theoretical roughness of the finishing pass (references R2).
+    const double feed = sc.planning.finishFeedMmPerRev, r = sc.tool.noseRadiusMm;
+    if (feed > 0 && feed < 2.0 * r) {
+        out.rtMm = rtExactMm(feed, r);
+        out.raMm = raExactMm(feed, r);
+    }
+}
+
+} // namespace
+
+ConePlan planCone(const Scene& scene) {
+    ConePlan out;
+    out.scene = scene;
+    out.scene.plan.passes.clear();
+    const Units u = scene.units;
+    auto L = [u](double mm) { return formatLength(mm, u); };
+
+    int index = -1;
+    const Feature* fp = coneToPlan(scene.part, index);
+    if (!fp) {
+        out.problems.push_back("the drawing has no cone or chamfer to plan");
+        return out;
+    }
+    const Feature& f = *fp;
+    out.featureIndex = index;
+    const Cone& cone = f.cone;
+    const double th = cone.halfAngleRad, g = cone.growthSign();
+    out.halfAngleRad = th;
+
+    // Can the insert follow the cone? The path climbs toward the chuck when g > 0.
+    const double pathAngle = g * th;
+    if (!toolFollowsSlope(scene.tool, pathAngle)) {
+        out.problems.push_back(
+            "the insert and holder cannot follow this cone: a path at " + formatDms(th, 0) +
+            (g > 0 ? " climbing" : " descending") +
+            " toward the chuck would bring the insert's trailing or leading edge onto the cone "
+            "behind the nose (it would rub and cut below the drawing). Nothing was planned.");
+        out.suggestions = suggestTools(scene.tool, pathAngle);
+        return out;
+    }
+
+    Setup& setup = out.scene.setup;
+    setup.compoundReadingRad = compoundScaleReadingRad(th, setup.compoundScale);
+    setup.compoundAdvanceToward = g > 0 ? Widens::TowardTailstock : Widens::TowardChuck;
+    out.compoundReadingRad = setup.compoundReadingRad;
+
+    const TipSide side = scene.tool.hand == Hand::L ? TipSide::TailstockSide : TipSide::ChuckSide;
+    const NoseOffsets no = noseRadiusOffsets(scene.tool.noseRadiusMm, th, cone.widens, side);
+    out.noseNormalErrorMm = no.normalErrorMm;
+    out.noseOffsetAxialMm = no.zShiftSign * no.dzMm;
+
+    detail::PlanBuilder b(scene, out, f);
+    out.noseOffsetRadialMm = b.noseRadialMm();
+    const double stockD = scene.stock.diameterMm;
+    const double z0 = scene.stock.freeEndZMm();
+
+    // Cylinders to turn first: the finished diameter to zero on, and anything smaller than the bar
+    // that a saddle pass from the free end can reach without cutting into what lies before it.
+    std::vector<const Feature*> cylinders;
+    const Feature* longest = nullptr;
+    for (const Feature& c : scene.part.features) {
+        if (c.kind != FeatureKind::Cylinder) continue;
+        if (!longest || c.zEndMm - c.zStartMm > longest->zEndMm - longest->zStartMm) longest = &c;
+        if (c.diameterMm > stockD + 1e-6) {
+            out.cautions.push_back("the cylinder '" + c.name + "' (Ø" + L(c.diameterMm) +
+                                   ") is larger than the bar: it cannot be turned from it");
+            continue;
+        }
+        if (c.diameterMm > stockD - 1e-6) continue;  // the bar's own diameter
+        bool reachable = true;
+        for (const Feature& o : scene.part.features)
+            if (o.zEndMm <= c.zStartMm + 1e-9 && o.kind != FeatureKind::Face)
+                reachable = reachable && std::max(o.radiusAt(o.zStartMm), o.radiusAt(o.zEndMm)) <=
+                                             c.diameterMm / 2.0 + 1e-6;
+        if (!reachable) {
+            out.cautions.push_back("the cylinder '" + c.name +
+                                   "' lies behind larger diameters: it is not planned here");
+            continue;
+        }
+        cylinders.push_back(&c);
+    }
+    std::sort(cylinders.begin(), cylinders.end(),
+              [](const Feature* x, const Feature* y) { return x->diameterMm > y->diameterMm; });
+
+    auto placing = scene.planning.placing;
+    if (placing == PlanningOptions::Placing::ReferenceShoulder && g < 0) {
+        out.cautions.push_back("a reference shoulder needs the cone's small end toward the "
+                               "tailstock; this cone narrows toward the chuck, so the dials are "
+                               "zeroed on a finished diameter and face instead");
+        placing = PlanningOptions::Placing::ZeroOnDiameter;
+    }
+    if (placing == PlanningOptions::Placing::ReferenceShoulder) {
+        double zRef = std::clamp(cone.gaugeZMm, f.zStartMm, f.zEndMm);
+        if (zRef - f.zStartMm < 2.0) zRef = f.zEndMm;  // too short a reference: use the large end
+        const double div = scene.setup.saddle.mmPerDivision;
+        zRef = std::clamp(z0 + std::round((zRef - z0) / div) * div, f.zStartMm, f.zEndMm);
+        out.referenceZMm = zRef;
+        out.referenceDiameterMm = cone.diameterAt(zRef);
+    } else {
+        out.referenceZMm = 0.0;
+        out.referenceDiameterMm = longest ? longest->diameterMm : stockD;
+    }
+    setup.zeroDiameterMm = out.referenceDiameterMm;
+    setup.zeroZMm = out.referenceZMm;
+    b.setZero(setup.zeroDiameterMm, setup.zeroZMm);
+    out.stage0CrossOffsetMm = (stockD - setup.zeroDiameterMm) / (2.0 * b.crossK());
+    out.stage0SaddleOffsetMm = setup.zeroZMm - z0;
+
+    // 1. The compound.
+    step(out, PlanStep::Kind::SetCompound,
+         std::string("Swing the compound to ") + formatDms(setup.compoundReadingRad, 0) +
+             (setup.compoundScale == CompoundScale::FromAxis ? " on its scale (read from the spindle axis)"
+                                                            : " on its scale (read from the cross-slide)") +
+             ", so that winding it in moves the tool toward the " +
+             (g > 0 ? "tailstock" : "chuck") + " and in toward the axis: half angle θ = " +
+             formatDms(th, 1) + ". Set it exactly with the sine bar (see the checks), lock it.");
+    if (z0 < -1e-9)
+        out.cautions.push_back("the bar stands " + L(-z0) +
+                               " beyond the datum face: face it to length first (not planned)");
+
+    // 2. Touch off on the bar and its end.
+    const bool stage0 = !cylinders.empty() || placing == PlanningOptions::Placing::ReferenceShoulder;
+    step(out, PlanStep::Kind::TouchOff,
+         "With the compound at 0: touch the tool on the bar (Ø" + L(stockD) +
+             ", measure it) and zero the cross-slide dial; touch the end face and zero the saddle "
+             "dial. Approach every reading from below (wind back past it, then forward to it).");
+
+    for (const Feature* c : cylinders) {
+        const auto after = scene.part.nominalRadiusAt(c->zEndMm + 0.01);
+        const bool shoulder = after && *after > c->diameterMm / 2.0 + 1e-6;
+        b.turnCylinder(c->diameterMm / 2.0, c->zEndMm, shoulder,
+                       "turn '" + c->name + "' to Ø" + L(c->diameterMm), 0);
+    }
+    if (placing == PlanningOptions::Placing::ReferenceShoulder) {
+        b.turnCylinder(out.referenceDiameterMm / 2.0, out.referenceZMm, true,
+                       "turn the reference diameter Ø" + L(out.referenceDiameterMm) +
+                           " up to a shoulder at " + L(out.referenceZMm),
+                       0);
+        step(out, PlanStep::Kind::Measure,
+             "Measure the reference diameter with a micrometer: Ø" + L(out.referenceDiameterMm) +
+                 ". Check the shoulder stands " + L(out.referenceZMm) + " from the datum face.");
+        step(out, PlanStep::Kind::TouchOff,
+             "Work from the reference: touch the tool on the reference diameter and set the "
+             "cross-slide dial to 0 (if it measured Ø d instead, set the dial to read (" +
+             L(out.referenceDiameterMm) + " − d)" + (b.crossK() < 1 ? "" : " / 2") +
+             "); touch the shoulder face and zero the saddle dial.");
+    } else if (stage0) {
+        step(out, PlanStep::Kind::Measure,
+             "Measure the finished diameter with a micrometer: Ø" + L(out.referenceDiameterMm) + ".");
+        step(out, PlanStep::Kind::TouchOff,
+             "Work from the finished diameter: touch the tool on it and set the cross-slide dial "
+             "to 0 (if it measured Ø d instead, set the dial to read (" +
+                 L(out.referenceDiameterMm) + " − d)" + (b.crossK() < 1 ? "" : " / 2") +
+                 "); the saddle stays zeroed on the datum face.");
+    }
+
+    // 3. Roughing.
+    const double allowance = scene.planning.finishAllowanceMm;
+    if (scene.planning.roughing == PlanningOptions::Roughing::SaddleSteps) {
+        if (g > 0)
+            b.saddleSteps();
+        else
+            out.cautions.push_back("stepped saddle roughing needs the cone's small end toward "
+                                   "the tailstock; roughed with the compound instead");
+    }
+    b.planSettings();
+    if (out.compoundSettings > 1)
+        out.cautions.push_back(
+            "the compound's travel (" + L(scene.setup.compound.travelMm) + ") is shorter than the " +
+            "cone's length along its slant (" + L(out.compoundRunMm) + "): each pass is cut in " +
+            std::to_string(out.compoundSettings) +
+            " settings of the saddle, moving and locking it between them; expect a faint mark "
+            "where the settings meet. A taper attachment (or a tailstock set-over between "
+            "centres) would cut it in one stroke.");
+    const double thick = b.maxNormalThickness();
+    int n = thick > allowance + 1e-9
+                ? static_cast<int>(std::ceil((thick - allowance) / scene.planning.maxDepthMm - 1e-9))
+                : 0;
+    int made = 0;
+    for (int i = 1; i <= n; ++i) {
+        const double left = allowance + (thick - allowance) * (n - i) / n;
+        if (b.compoundPass(left, false, "cone roughing pass", i, n)) ++made;
+    }
+    out.roughingPasses = made;
+
+    // 4. Checks before the finishing pass, then the finish.
+    fillChecks(out, scene, f);
+    step(out, PlanStep::Kind::Measure,
+         "Before finishing, check the diameter at " + L(out.checkZMm) + " from the datum face: Ø" +
+             L(out.checkDiameterRoughMm) + " now (Ø" + L(out.checkDiameterFinishedMm) +
+             " when finished).");
+    step(out, PlanStep::Kind::Measure,
+         "Check the angle over two Ø" + L(out.rolls.rollDiameterMm) + " rolls at roll-centre heights " +
+             L(out.rolls.height1Mm) + " and " + L(out.rolls.height2Mm) +
+             " above the small end face: the readings must differ by " +
+             L(out.rolls.reading2Mm - out.rolls.reading1Mm) + " (now " +
+             L(out.rolls.reading1Mm + out.rolls.roughExtraMm) + " and " +
+             L(out.rolls.reading2Mm + out.rolls.roughExtraMm) + "; finished " +
+             L(out.rolls.reading1Mm) + " and " + L(out.rolls.reading2Mm) +
+             "). If the difference is off, correct the compound's angle before finishing.");
+    b.compoundPass(0.0, true, "cone finishing pass (nose-radius offset applied)", 1, 1);
+    step(out, PlanStep::Kind::Measure,
+         "Measure the finished cone: Ø" + L(out.checkDiameterFinishedMm) + " at " + L(out.checkZMm) +
+             ", over the rolls " + L(out.rolls.reading1Mm) + " and " + L(out.rolls.reading2Mm) + ".");
+
+    if (scene.tool.tipHeightMm != 0)
+        out.cautions.push_back("the tool tip is " + L(std::fabs(scene.tool.tipHeightMm)) +
+                               (scene.tool.tipHeightMm > 0 ? " above" : " below") +
+                               " centre: a straight pass then cuts a slightly hollow cone; set it "
+                               "on centre if you can");
+    for (const Pass& p : out.scene.plan.passes)
+        if (std::fabs(p.crossMm) > scene.setup.cross.travelMm) {
+            out.cautions.push_back("a cross-slide reading is beyond its travel");
+            break;
+        }
+    out.planned = !out.scene.plan.passes.empty();
+    // What the plan claims; `swarf run` on the planned scene checks it.
+    out.scene.expect = Expect{};
+    out.scene.expect.withinTolerance = true;
+    out.scene.expect.noFindings = true;
+    if (!out.planned) out.problems.push_back("there is no metal to remove: nothing was planned");
+    return out;
+}
+
+} // namespace swarf
