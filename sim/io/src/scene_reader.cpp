@@ -1,9 +1,188 @@
-// Placeholder until the scene reader lands (issue 2).
+// Reading a scene file: parse the TOML, read every section, convert to mm and radians, validate.
 #include "swarf/io/scene_reader.h"
 
+#include "scene_sections.h"
+#include "swarf/io/did_you_mean.h"
+
+#include <cmath>
+#include <fstream>
+#include <sstream>
+
 namespace swarf::io {
-Scene readSceneText(const std::string&, const std::string& fileName) {
-    throw InputError({fileName, 0, 0}, "", "", "scene reading is not done yet");
+
+namespace detail {
+
+void requirePositive(const Fields& f, std::string_view key, double value, bool zeroAllowed) {
+    if (zeroAllowed)
+        f.require(value >= 0, key, "expected 0 or more");
+    else
+        f.require(value > 0, key, "expected more than 0");
 }
-Scene readScene(const std::string& path) { return readSceneText("", path); }
+
+} // namespace detail
+
+namespace {
+
+using detail::Fields;
+
+Stock readStock(const Fields& root) {
+    const toml::table* t = root.subtable("stock");
+    if (!t) root.missing("stock", "a [stock] table: the bar");
+    Fields f(*t, "stock", root.context(),
+             {"diameter", "length", "stick_out", "face_allowance", "material", "tailstock"});
+    Stock s;
+    s.where = f.where();
+    s.diameterMm = f.requiredLength("diameter", "the bar diameter");
+    detail::requirePositive(f, "diameter", s.diameterMm);
+    s.lengthMm = f.requiredLength("length", "the whole bar length");
+    detail::requirePositive(f, "length", s.lengthMm);
+    s.stickOutMm = f.requiredLength("stick_out", "from the jaws' face to the free end");
+    detail::requirePositive(f, "stick_out", s.stickOutMm);
+    f.require(s.stickOutMm <= s.lengthMm + 1e-9, "stick_out",
+              "expected at most the bar length (" + detail::valueText(*f.node("length")) + " " +
+                  f.unit() + "): the bar cannot stick out further than it is long");
+    s.faceAllowanceMm = f.length("face_allowance", "stock beyond the datum face").value_or(0.0);
+    detail::requirePositive(f, "face_allowance", s.faceAllowanceMm, true);
+    f.require(s.faceAllowanceMm < s.stickOutMm, "face_allowance", "expected less than the stick-out");
+    s.material = f.string("material", "free text").value_or("");
+    s.tailstockSupport = f.boolean("tailstock").value_or(false);
+    return s;
+}
+
+PlanningOptions readPlanning(const Fields& root) {
+    PlanningOptions p;
+    const toml::table* t = root.subtable("planning");
+    if (!t) return p;
+    Fields f(*t, "planning", root.context(),
+             {"max_depth", "finish_allowance", "rough_feed", "finish_feed", "placing", "roughing",
+              "roll_diameter"});
+    p.where = f.where();
+    p.maxDepthMm = f.length("max_depth", "largest depth per roughing pass").value_or(p.maxDepthMm);
+    detail::requirePositive(f, "max_depth", p.maxDepthMm);
+    p.finishAllowanceMm = f.length("finish_allowance", "left for finishing").value_or(p.finishAllowanceMm);
+    detail::requirePositive(f, "finish_allowance", p.finishAllowanceMm, true);
+    f.require(p.finishAllowanceMm < p.maxDepthMm, "finish_allowance", "expected less than max_depth");
+    p.roughFeedMmPerRev = f.length("rough_feed", "roughing feed per rev").value_or(p.roughFeedMmPerRev);
+    detail::requirePositive(f, "rough_feed", p.roughFeedMmPerRev);
+    p.finishFeedMmPerRev = f.length("finish_feed", "finishing feed per rev").value_or(p.finishFeedMmPerRev);
+    detail::requirePositive(f, "finish_feed", p.finishFeedMmPerRev);
+    if (auto s = f.choice("placing", {"zero_on_diameter", "reference_shoulder"}))
+        p.placing = *s == "zero_on_diameter" ? PlanningOptions::Placing::ZeroOnDiameter
+                                             : PlanningOptions::Placing::ReferenceShoulder;
+    if (auto s = f.choice("roughing", {"compound", "saddle_steps"}))
+        p.roughing = *s == "compound" ? PlanningOptions::Roughing::Compound
+                                      : PlanningOptions::Roughing::SaddleSteps;
+    p.rollDiameterMm = f.length("roll_diameter", "roll diameter for over-rolls checks").value_or(0.0);
+    detail::requirePositive(f, "roll_diameter", p.rollDiameterMm, true);
+    return p;
+}
+
+SimOptions readSim(const Fields& root) {
+    SimOptions s;
+    const toml::table* t = root.subtable("sim");
+    if (!t) return s;
+    Fields f(*t, "sim", root.context(), {"profile_step", "angle_samples"});
+    s.profileStepMm = f.length("profile_step", "axial sample spacing").value_or(s.profileStepMm);
+    f.require(s.profileStepMm >= 1e-4 && s.profileStepMm <= 1.0, "profile_step",
+              "expected from 0.0001 mm to 1 mm");
+    if (auto n = f.integer("angle_samples", "samples around the part")) {
+        f.require(*n >= 8 && *n <= 3600, "angle_samples", "expected a whole number from 8 to 3600");
+        s.angleSamples = static_cast<int>(*n);
+    }
+    return s;
+}
+
+Expect readExpect(const Fields& root) {
+    Expect e;
+    const toml::table* t = root.subtable("expect");
+    if (!t) return e;
+    Fields f(*t, "expect", root.context(), {"verdict", "findings", "no_findings"});
+    e.where = f.where();
+    if (auto v = f.choice("verdict", {"in_tolerance", "out_of_tolerance"}))
+        e.withinTolerance = *v == "in_tolerance";
+    static const std::vector<std::string> kinds = {"left_on", "overcut", "rubbing", "jaw_crash",
+                                                   "past_stock", "compound_travel",
+                                                   "depth_of_cut", "air_cut"};
+    if (const toml::array* a = f.array("findings", "finding kinds")) {
+        for (const toml::node& n : *a) {
+            const auto* s = n.as_string();
+            bool ok = false;
+            for (const auto& k : kinds) ok = ok || (s && s->get() == k);
+            if (!ok)
+                throw InputError(detail::locOf(n.source(), root.context().file), "expect.findings",
+                                 detail::valueText(n),
+                                 "expected a finding kind: " + suggestion(s ? s->get() : "", kinds));
+            e.findings.push_back(s->get());
+        }
+    }
+    e.noFindings = f.boolean("no_findings").value_or(false);
+    f.require(!(e.noFindings && !e.findings.empty()), "no_findings",
+              "expected false when findings are listed (the two contradict)");
+    return e;
+}
+
+std::vector<double> readGaugeBlocks(const Fields& root) {
+    std::vector<double> sizes;
+    const toml::table* t = root.subtable("gauge_blocks");
+    if (!t) return sizes;
+    Fields f(*t, "gauge_blocks", root.context(), {"sizes"});
+    const toml::array* a = f.array("sizes", "block sizes");
+    if (!a) f.missing("sizes", "a list of gauge block sizes in " + f.unit());
+    f.require(!a->empty(), "sizes", "expected at least one block size");
+    for (const toml::node& n : *a) {
+        std::optional<double> v;
+        if (auto i = n.as_integer()) v = static_cast<double>(i->get());
+        if (auto d = n.as_floating_point()) v = d->get();
+        if (!v || !(*v > 0))
+            throw InputError(detail::locOf(n.source(), root.context().file), "gauge_blocks.sizes",
+                             detail::valueText(n), "expected a block size, a length more than 0 in " + f.unit());
+        sizes.push_back(toMm(*v, root.context().units));
+    }
+    return sizes;
+}
+
+} // namespace
+
+Scene readSceneText(const std::string& text, const std::string& fileName) {
+    toml::table doc;
+    try {
+        doc = toml::parse(text, fileName);
+    } catch (const toml::parse_error& e) {
+        const auto& b = e.source().begin;
+        throw InputError({fileName, static_cast<int>(b.line), static_cast<int>(b.column)}, "", "",
+                         "not valid TOML: " + std::string(e.description()));
+    }
+    detail::ReadContext ctx{fileName, Units::Mm};
+    Fields root(doc, "", ctx,
+                {"name", "description", "units", "stock", "part", "tool", "setup", "plan",
+                 "planning", "sim", "expect", "gauge_blocks"});
+    Scene scene;
+    scene.file = fileName;
+    if (auto u = root.choice("units", {"mm", "inch"})) ctx.units = *u == "inch" ? Units::Inch : Units::Mm;
+    scene.units = ctx.units;
+    std::string base = fileName;
+    if (auto slash = base.find_last_of('/'); slash != std::string::npos) base = base.substr(slash + 1);
+    scene.name = root.string("name", "a title").value_or(base);
+    scene.description = root.string("description", "what the scene is for").value_or("");
+    scene.stock = readStock(root);
+    scene.part = detail::readPart(root, scene.stock);
+    scene.tool = detail::readTool(root);
+    scene.setup = detail::readSetup(root);
+    scene.plan = detail::readPlan(root);
+    scene.planning = readPlanning(root);
+    scene.sim = readSim(root);
+    scene.expect = readExpect(root);
+    scene.gaugeBlocksMm = readGaugeBlocks(root);
+    scene.validate();
+    return scene;
+}
+
+Scene readScene(const std::string& path) {
+    std::ifstream in(path, std::ios::binary);
+    if (!in) throw InputError({path, 0, 0}, "", "", "cannot open the scene file");
+    std::ostringstream ss;
+    ss << in.rdbuf();
+    return readSceneText(ss.str(), path);
+}
+
 } // namespace swarf::io

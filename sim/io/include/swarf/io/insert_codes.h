@@ -1,0 +1,41 @@
+#pragma once
+// ISO 1832 insert shape letters and designations, and ISO 5608 holder letters (references R8).
+#include <optional>
+#include <string>
+#include <string_view>
+
+namespace swarf::io {
+
+/// Included (corner) angle ε in degrees of an ISO 1832 shape letter: C 80, D 55, E 75, K 55,
+/// S 90, T 60, V 35, W 80; R (round) gives 180 (no corner). Empty for any other letter.
+std::optional<double> shapeIncludedAngleDeg(char letter);
+
+/// Entering angle κr in degrees of an ISO 5608 holder style letter (A 90, B 75, D 45, E 60,
+/// F 90, G 90, J 93, K 75, L 95, N 63, S 45, T 60, Y 85, H and Q 107.5, P 117.5, V 72.5).
+/// Empty for any other letter.
+std::optional<double> holderEnteringAngleDeg(char letter);
+
+/// What an ISO 1832 metric insert designation ("DCMT 11T304", "CNMG120408") says.
+struct InsertCode {
+    char shape = 0;            ///< shape letter (first character)
+    double edgeLengthMm = 0;   ///< from the size code (whole mm of the cutting edge length)
+    double thicknessMm = 0;    ///< from the thickness code (02, T2, 03, T3, 04, 05, 06, 07, 09)
+    double noseRadiusMm = 0;   ///< from the corner radius code (04 → 0.4 mm; 00 sharp; M0 round)
+};
+
+/// Parses an ISO 1832 metric designation: four letters, then size, thickness and corner radius
+/// codes of two characters each, spaces ignored, anything after the radius code ignored (chip
+/// breaker suffixes). Empty if it is not one.
+std::optional<InsertCode> parseInsertCode(std::string_view code);
+
+/// Diameter of the insert's inscribed circle (mm) from its corner angle ε (rad) and cutting
+/// edge length (mm): a rhombus or square has IC = l·sin ε, a triangle (T) l/√3, a trigon (W)
+/// is taken as l·sin ε·2/3 (approximate); for a round insert l is its diameter. Derived.
+double inscribedCircleMm(char shape, double includedRad, double edgeLengthMm);
+
+/// The largest nose radius (mm) an insert of this shape, corner angle and edge length can have:
+/// the nose circle must fit inside the inscribed circle, and its tangent points must lie on the
+/// edges (r / tan(ε/2) ≤ l). Derived from plane geometry.
+double maxNoseRadiusMm(char shape, double includedRad, double edgeLengthMm);
+
+} // namespace swarf::io

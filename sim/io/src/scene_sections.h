@@ -1,0 +1,21 @@
+#pragma once
+// Internal to swarf_io: readers of the sections of a scene file, one per part of the Scene.
+#include "toml_fields.h"
+
+#include "swarf/sim/scene.h"
+
+namespace swarf::io::detail {
+
+/// [part] and its [[part.feature]] array.
+Part readPart(const Fields& root, const Stock& stock);
+/// [tool].
+Tool readTool(const Fields& root);
+/// [setup] with [setup.compound], [setup.cross], [setup.saddle].
+Setup readSetup(const Fields& root);
+/// [[plan.pass]] (the [plan] table may be absent: an empty plan).
+Plan readPlan(const Fields& root);
+
+/// Checks that a present number is > 0 (or ≥ 0 when zeroAllowed).
+void requirePositive(const Fields& f, std::string_view key, double value, bool zeroAllowed = false);
+
+} // namespace swarf::io::detail
