@@ -1,0 +1,85 @@
+#include "swarf/geometry/run_solids.h"
+
+#include "occt_support.h"
+
+#include "swarf/geometry/step_file.h"
+#include "swarf/geometry/surface_stl.h"
+
+#include <BRepPrimAPI_MakeCylinder.hxx>
+#include <gp_Ax2.hxx>
+
+#include <algorithm>
+#include <filesystem>
+
+namespace swarf::geometry {
+namespace {
+
+// A cylinder around everything between two planes, to cut the drawing's extent out.
+Solid slab(double z0Mm, double z1Mm, double radiusMm) {
+    return guarded("drawing extent", [&] {
+        BRepPrimAPI_MakeCylinder cyl(gp_Ax2(gp_Pnt(0, 0, z0Mm), gp_Dir(0, 0, 1)), radiusMm,
+                                     z1Mm - z0Mm);
+        cyl.Build();
+        require(cyl.IsDone() == Standard_True, "drawing extent", "making the cylinder failed");
+        return wrap(cyl.Shape());
+    });
+}
+
+} // namespace
+
+RunSolids makeRunSolids(const Scene& scene, const CutResult& result, const ProfileFitOptions& fit) {
+    RunSolids s;
+    s.stock = stockSolid(scene.stock);
+    s.nominal = nominalSolid(scene.part);
+    s.asCut = profileSolid(result.asCut, fit);
+    const auto outline = nominalOutline(scene.part);
+    double rMax = scene.stock.diameterMm / 2;
+    for (const auto& p : outline) rMax = std::max(rMax, p.second);
+    for (double r : result.asCut.radiusMm) rMax = std::max(rMax, r);
+    const Solid extent = slab(outline.front().first, outline.back().first, rMax + 1.0);
+    s.leftover = s.asCut.solid.common(extent).minus(s.nominal);
+    s.overcut = s.nominal.minus(s.asCut.solid);
+    s.stockVolumeMm3 = s.stock.volumeMm3();
+    s.nominalVolumeMm3 = s.nominal.volumeMm3();
+    s.asCutVolumeMm3 = s.asCut.solid.volumeMm3();
+    s.leftoverVolumeMm3 = s.leftover.volumeMm3();
+    s.overcutVolumeMm3 = s.overcut.volumeMm3();
+    return s;
+}
+
+RunSolidsReport writeRunSolids(const Scene& scene, const CutResult& result,
+                               const std::string& outDir, const RunSolidsOptions& options) {
+    const RunSolids s = makeRunSolids(scene, result, options.fit);
+    RunSolidsReport r;
+    const auto file = [&](const char* name) { return (std::filesystem::path(outDir) / name).string(); };
+    r.files.push_back(file("as-cut.step"));
+    writeStep(r.files.back(), {{"as-cut", s.asCut.solid}});
+    if (options.writeNominal) {
+        r.files.push_back(file("nominal.step"));
+        writeStep(r.files.back(), {{"nominal", s.nominal}});
+    }
+    if (options.writeLeftover && !s.leftover.empty()) {
+        r.files.push_back(file("leftover.step"));
+        writeStep(r.files.back(), {{"leftover", s.leftover}});
+    }
+    if (options.writeOvercut && !s.overcut.empty()) {
+        r.files.push_back(file("overcut.step"));
+        writeStep(r.files.back(), {{"overcut", s.overcut}});
+    }
+    if (options.writeSurfaceStl && result.surface.nz >= 2) {
+        r.files.push_back(file("surface.stl"));
+        r.surfaceTriangles = writeSurfaceStl(result.surface, r.files.back());
+    }
+    r.stockVolumeMm3 = s.stockVolumeMm3;
+    r.nominalVolumeMm3 = s.nominalVolumeMm3;
+    r.asCutVolumeMm3 = s.asCutVolumeMm3;
+    r.leftoverVolumeMm3 = s.leftoverVolumeMm3;
+    r.overcutVolumeMm3 = s.overcutVolumeMm3;
+    r.fitErrorMm = s.asCut.maxFitErrorMm;
+    r.lineCount = s.asCut.lineCount;
+    r.arcCount = s.asCut.arcCount;
+    r.splineCount = s.asCut.splineCount;
+    return r;
+}
+
+} // namespace swarf::geometry
