@@ -8,6 +8,9 @@
 #include <Interface_Static.hxx>
 #include <STEPControl_Reader.hxx>
 #include <STEPControl_Writer.hxx>
+#include <StepBasic_Product.hxx>
+#include <StepData_StepModel.hxx>
+#include <TCollection_HAsciiString.hxx>
 #include <TopoDS_Compound.hxx>
 
 #include <filesystem>
@@ -19,6 +22,21 @@ namespace {
 std::mutex& translatorMutex() {
     static std::mutex m;
     return m;
+}
+
+// The translator names products "<name> <n>"; give the new ones exactly the solid's name.
+void nameNewProducts(STEPControl_Writer& writer, const std::string& name) {
+    const Handle(StepData_StepModel) model = writer.Model();
+    const Handle(TCollection_HAsciiString) text = new TCollection_HAsciiString(name.c_str());
+    for (int i = 1; i <= model->NbEntities(); ++i) {
+        const Handle(StepBasic_Product) product = Handle(StepBasic_Product)::DownCast(model->Value(i));
+        if (product.IsNull() || product->Name()->IsSameString(text)) continue;
+        const TCollection_AsciiString current = product->Name()->String();
+        // Products named earlier in this file carry another solid's name: leave them.
+        if (current.Search((name + " ").c_str()) != 1) continue;
+        product->SetName(text);
+        product->SetId(text);
+    }
 }
 } // namespace
 
@@ -41,6 +59,7 @@ void writeStep(const std::string& path, const std::vector<NamedSolid>& solids) {
                 require(st == IFSelect_RetDone, what,
                         "the translator could not take the solid \"" + s.name + "\"");
                 ++written;
+                nameNewProducts(writer, s.name);
             }
             require(written > 0, what, "there is no solid to write");
             if (writer.Write(tmp.c_str()) != IFSelect_RetDone) {
