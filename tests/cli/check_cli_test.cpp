@@ -1,0 +1,83 @@
+// `swarf check`: exit 0 and a summary on stdout for a good scene; exit 2 and the message on
+// stderr (nothing on stdout) for a bad one.
+#include <catch2/catch.hpp>
+
+#include <cstdio>
+#include <fstream>
+#include <sstream>
+#include <string>
+#include <sys/wait.h>
+
+namespace {
+
+struct Run {
+    int exitCode = -1;
+    std::string out, err;
+};
+
+std::string slurp(const std::string& path) {
+    std::ifstream in(path);
+    std::stringstream ss;
+    ss << in.rdbuf();
+    return ss.str();
+}
+
+// Runs SWARF_BINARY with the arguments; stdout through popen, stderr into a temporary file.
+Run runSwarf(const std::string& args) {
+    const std::string errFile = "check_cli_test.stderr.txt";
+    const std::string cmd = std::string("'") + SWARF_BINARY + "' " + args + " 2>" + errFile;
+    Run r;
+    FILE* p = popen(cmd.c_str(), "r");
+    REQUIRE(p != nullptr);
+    char buf[4096];
+    std::size_t n;
+    while ((n = std::fread(buf, 1, sizeof buf, p)) > 0) r.out.append(buf, n);
+    const int status = pclose(p);
+    r.exitCode = WIFEXITED(status) ? WEXITSTATUS(status) : -1;
+    r.err = slurp(errFile);
+    std::remove(errFile.c_str());
+    return r;
+}
+
+} // namespace
+
+TEST_CASE("swarf check accepts the demo scene and prints the cone in every form", "[cli][check]") {
+    const Run r = runSwarf(std::string("check '") + SWARF_SCENES_DIR + "/fixture-arbor.toml'");
+    INFO(r.out << r.err);
+    CHECK(r.exitCode == 0);
+    CHECK(r.err.empty());
+    CHECK(r.out.find("gauge plane z = 40.000 mm") != std::string::npos);
+    CHECK(r.out.find("ratio 1:10.0000") != std::string::npos);
+    // derived: 1:10 → half angle atan(0.05) = 2°51′44.7″, included 5°43′29.3″
+    CHECK(r.out.find("2°51′44.7″") != std::string::npos);
+    // Source: references R3 (ISO 1119: 1:10 → 5°43′29.3176″ included)
+    CHECK(r.out.find("5°43′29.3″") != std::string::npos);
+    CHECK(r.out.find("taper per foot 1.20000 in/ft") != std::string::npos);
+    // Source: references R8 (93° holder with a 55° insert: trailing-edge limit 32°)
+    CHECK(r.out.find("= 32.00°") != std::string::npos);
+    CHECK(r.out.find("4 pass(es)") != std::string::npos);
+}
+
+TEST_CASE("swarf check shows an inch scene in inch", "[cli][check]") {
+    const Run r = runSwarf(std::string("check '") + SWARF_SCENES_DIR + "/taper-shank-morse.toml'");
+    INFO(r.out << r.err);
+    CHECK(r.exitCode == 0);
+    CHECK(r.out.find("gauge diameter 0.7000 in") != std::string::npos);  // Source: references R3
+    CHECK(r.out.find(" mm") == std::string::npos);
+}
+
+TEST_CASE("swarf check refuses a bad scene with exit code 2 and the message on stderr", "[cli][check]") {
+    const std::string bad = std::string(SWARF_TEST_DATA_DIR) + "/bad_scenes/two-taper-forms.toml";
+    const Run r = runSwarf("check '" + bad + "'");
+    CHECK(r.exitCode == 2);
+    CHECK(r.out.empty());
+    CHECK(r.err.find(bad + ":21:9:") != std::string::npos);
+    CHECK(r.err.find("part.feature[1].ratio") != std::string::npos);
+    CHECK(r.err.find("only one way to give the taper") != std::string::npos);
+}
+
+TEST_CASE("swarf check on a missing file is bad input too", "[cli][check]") {
+    const Run r = runSwarf("check /nonexistent/scene.toml");
+    CHECK(r.exitCode == 2);
+    CHECK(r.err.find("/nonexistent/scene.toml") != std::string::npos);
+}
