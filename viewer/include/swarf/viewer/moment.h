@@ -1,0 +1,60 @@
+#pragma once
+// One moment of the plan as the viewer shows it, without any VTK type: the profile the part is
+// drawn from, its deviation from the drawing, where the tool is and what the dials read. The
+// window, the snapshots and the tests all go through describeMoment(), so the tests can check
+// the data handed to VTK without looking at pixels.
+#include "swarf/sim/cut.h"
+#include "swarf/sim/scene.h"
+
+#include <Eigen/Core>
+#include <string>
+#include <vector>
+
+namespace swarf::viewer {
+
+/// What the viewer shows at one position of the pass slider.
+///
+/// The slider runs from 0 (the bar before the first pass) to N = number of passes. The whole
+/// number k (1..N) is the moment pass k (1-based) has just ended; k + f (0 < f < 1) is the
+/// fraction f of the way through pass k + 1, measured along the tool's path in that pass.
+struct MomentView {
+    double position = 0;        ///< the slider position this describes, clamped to [0, N]
+    int passCount = 0;          ///< N
+    int pass = -1;              ///< 0-based pass under way or just ended; −1 before the first
+    double passFraction = 0;    ///< how far through `pass`, 0..1
+    std::string passKind;       ///< "compound", "saddle", "cross-slide" or "path"; "" before
+    std::string passNote;       ///< what the person does in this pass (Pass::note)
+    double feedMmPerRev = 0;    ///< feed of the pass, mm/rev (0 before the first pass)
+    Profile profile;            ///< the as-cut profile at this moment (exact, axisymmetric)
+    /// Signed deviation from the drawing per profile sample, mm, normal to the drawn surface:
+    /// + metal left on, − overcut; NaN where the drawing says nothing.
+    std::vector<double> deviationMm;
+    bool finished = false;      ///< true at position N: the part as the plan leaves it
+    Eigen::Vector2d tipZX{0, 0};  ///< imaginary tip of the tool now (z, x), mm
+    /// Dial readings now, mm of dial (interpolated along the current move).
+    double crossMm = 0, compoundMm = 0, saddleMm = 0;
+};
+
+/// Describes the moment at slider `position` (clamped to [0, N]). Whole positions use the
+/// kernel's afterPass profiles; positions inside a pass use profileUpTo(); position N uses
+/// the final asCut profile and the kernel's deviation. `result` must come from simulate() on
+/// the same scene (or be built with the same sampling: stock, nominal and afterPass on one
+/// grid).
+MomentView describeMoment(const Scene& scene, const CutResult& result, double position);
+
+/// Signed deviation of `profile` from `nominal` (same sampling expected; otherwise the
+/// nominal is interpolated), mm, measured normal to the nominal surface; NaN where the nominal
+/// is NaN.
+std::vector<double> deviationFromNominal(const Profile& profile, const Profile& nominal);
+
+/// Linear interpolation of a profile at z, mm; clamps outside; NaN if empty. (Kept here so the
+/// viewer does not depend on kernel code beyond its entry points.)
+double profileRadiusAt(const Profile& profile, double zMm);
+
+/// Indices into result.moves of the moves that make pass `pass` (0-based), in order.
+std::vector<std::size_t> movesOfPass(const CutResult& result, int pass);
+
+/// "compound", "saddle", "cross-slide" or "path".
+const char* passKindName(PassKind kind);
+
+} // namespace swarf::viewer

@@ -1,0 +1,37 @@
+#pragma once
+// Headless pictures of a result, for `swarf run` and the report: rendered off screen (under a
+// virtual display where none exists) and written as PNG files.
+#include "swarf/sim/cut.h"
+#include "swarf/sim/scene.h"
+
+#include <string>
+#include <vector>
+
+namespace swarf::viewer {
+
+/// What to render.
+struct SnapshotOptions {
+    int widthPx = 1200;          ///< size of each picture, pixels (≥ 64)
+    int heightPx = 800;
+    double magnification = 200;  ///< deviation magnification of the section picture
+};
+
+/// The files written (full paths) and their size.
+struct SnapshotReport {
+    std::string partPng;     ///< the whole part, oblique, with the stock outline and tool paths
+    std::string conePng;     ///< the cone close up, feed marks visible
+    std::string sectionPng;  ///< the half profile with the deviation magnified
+    std::string chartPng;    ///< deviation along the cone
+    int widthPx = 0, heightPx = 0;
+    /// All four paths, in the order above.
+    std::vector<std::string> files() const { return {partPng, conePng, sectionPng, chartPng}; }
+};
+
+/// Renders the finished part into outDir as part.png, cone.png, section.png and chart.png
+/// (each written atomically: name.tmp, then rename). Creates outDir if needed. Calls
+/// ensureDisplay(). Throws RenderError if nothing can be rendered, OutputError if a file
+/// cannot be written.
+SnapshotReport renderSnapshots(const Scene& scene, const CutResult& result,
+                               const std::string& outDir, const SnapshotOptions& options = {});
+
+} // namespace swarf::viewer

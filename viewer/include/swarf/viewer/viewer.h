@@ -1,0 +1,64 @@
+#pragma once
+// The interactive window: the as-cut part coloured by deviation, the pass slider with the dial
+// readings, the magnified section and the deviation chart. Keys are listed in viewer/KEYS.md
+// and by the help key in the window.
+#include "swarf/sim/cut.h"
+#include "swarf/sim/scene.h"
+#include "swarf/viewer/moment.h"
+
+#include <Eigen/Core>
+#include <memory>
+#include <vector>
+#include <string>
+
+namespace swarf::viewer {
+
+/// Options of the window.
+struct ViewerOptions {
+    double magnification = 200;  ///< deviation magnification of the section view (> 0)
+    int widthPx = 1600;          ///< window size, pixels
+    int heightPx = 1000;
+    double startPosition = -1;   ///< slider position to open at; < 0: the finished part
+    bool offScreen = false;      ///< render off screen (benchmarks, tests); still needs a display
+};
+
+/// One open viewer: the window, its renderers and the current moment. Not copyable. All calls
+/// from the thread that made it. A display must exist (see ensureDisplay()).
+class ViewerSession {
+  public:
+    /// Builds the window for a scene and its result (the result is copied).
+    ViewerSession(const Scene& scene, const CutResult& result, const ViewerOptions& options = {});
+    ~ViewerSession();
+    ViewerSession(const ViewerSession&) = delete;
+    ViewerSession& operator=(const ViewerSession&) = delete;
+
+    /// Moves the slider to `position` (see MomentView) and updates the drawn data; does not
+    /// render.
+    void setPosition(double position);
+    /// The moment shown now.
+    const MomentView& moment() const;
+    /// Number of passes (the slider's upper end).
+    int passCount() const;
+    /// Draws one frame.
+    void render();
+    /// Turns the 3D camera about the vertical by `degrees` (benchmarks, demos).
+    void orbit(double degrees);
+    /// Writes the whole window as a PNG (atomically). Throws OutputError.
+    void saveSnapshot(const std::string& path);
+    /// The part mesh handed to VTK, read back along one meridian: (z, radius) per drawn row,
+    /// mm. Lets tests check what is drawn without looking at pixels.
+    std::vector<Eigen::Vector2d> drawnSection() const;
+    /// Runs the interactive loop until the window is closed.
+    void run();
+
+  private:
+    struct Impl;
+    std::unique_ptr<Impl> impl_;
+};
+
+/// Opens the window for a scene and its result and returns when it is closed. Starts a virtual
+/// display if none exists (then nothing is visible: use renderSnapshots instead).
+/// Throws RenderError if no display can be had.
+void runViewer(const Scene& scene, const CutResult& result, const ViewerOptions& options = {});
+
+} // namespace swarf::viewer

@@ -1,0 +1,78 @@
+#pragma once
+// Internal to the viewer (VTK types allowed): everything drawn for one scene and result, in
+// three renderers (the 3D part, the magnified section, the deviation chart), updated to one
+// moment of the plan. Used by the window, the snapshots and the benchmark.
+#include "swarf/sim/cut.h"
+#include "swarf/sim/scene.h"
+#include "swarf/viewer/colour_map.h"
+#include "swarf/viewer/moment.h"
+
+#include <vtkSmartPointer.h>
+
+#include <memory>
+#include <string>
+
+class vtkRenderer;
+class vtkRenderWindow;
+
+namespace swarf::viewer::detail {
+
+/// Which layers of the 3D view are shown.
+struct Layers {
+    bool part = true, ghost = true, leftover = true, stock = true, insert = true, paths = true,
+         scalarBar = true, cutaway = true;
+};
+
+/// Standard camera views of the 3D renderer.
+enum class View { Front, Top, End, Iso, Cone };
+
+class PartScene {
+  public:
+    /// Builds every actor; the moment starts at the end of the plan.
+    PartScene(const Scene& scene, const CutResult& result, double magnification);
+    ~PartScene();
+    PartScene(const PartScene&) = delete;
+    PartScene& operator=(const PartScene&) = delete;
+
+    /// Moves to slider position `position` (see MomentView) and updates every actor's data.
+    void setPosition(double position);
+    const MomentView& moment() const;
+    int passCount() const;
+
+    /// Fine mode draws the part's surface at full axial resolution over the main cone only, so
+    /// feed marks show in a close-up; coarse mode draws the whole part with fewer rows.
+    void setFine(bool fine);
+    void setLayers(const Layers& layers);
+    const Layers& layers() const;
+    void setMagnification(double factor);
+    double magnification() const;
+
+    void view(View v);  ///< sets the 3D camera
+    void resetSection();  ///< fits the section camera to the cone
+
+    vtkRenderer* main() const;
+    vtkRenderer* section() const;
+    vtkRenderer* chart() const;
+
+    /// Sizes the text for a picture or window `heightPx` pixels high.
+    void setTextScale(int heightPx);
+    void setHelpVisible(bool on);
+    bool helpVisible() const;
+    /// Shows a one-line message in the 3D view (e.g. "saved ..."); empty hides it.
+    void setStatus(const std::string& text);
+    /// Text of the panel with the pass, the note and the dial readings.
+    std::string panelText() const;
+    const DeviationScale& scale() const;
+    /// The part mesh as handed to VTK, read back along its first meridian: (z, radius) of every
+    /// drawn row, mm. For tests: the rendered part's profile.
+    std::vector<Eigen::Vector2d> drawnSection() const;
+
+  private:
+    struct Impl;
+    std::unique_ptr<Impl> impl_;
+};
+
+/// The keys of the window, one per line ("key  what it does"), for the help overlay.
+const char* helpText();
+
+} // namespace swarf::viewer::detail

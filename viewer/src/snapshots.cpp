@@ -1,0 +1,78 @@
+// Headless PNG pictures of a result (see snapshots.h).
+#include "swarf/viewer/snapshots.h"
+
+#include "atomic_file.h"
+#include "part_scene.h"
+#include "swarf/sim/error.h"
+#include "swarf/viewer/display.h"
+
+#include <vtkNew.h>
+#include <vtkRenderWindow.h>
+#include <vtkRenderer.h>
+
+#include <algorithm>
+#include <filesystem>
+#include <functional>
+
+namespace swarf::viewer {
+
+namespace {
+
+// Renders one renderer alone into an off-screen window of the given size and writes it.
+void shoot(vtkRenderer* renderer, int w, int h, const std::string& path,
+           const std::function<void()>& beforeRender = {}) {
+    vtkNew<vtkRenderWindow> window;
+    window->SetOffScreenRendering(1);
+    window->SetSize(w, h);
+    window->SetMultiSamples(4);
+    const double* vp = renderer->GetViewport();
+    const double saved[4] = {vp[0], vp[1], vp[2], vp[3]};
+    renderer->SetViewport(0, 0, 1, 1);
+    window->AddRenderer(renderer);
+    if (beforeRender) beforeRender();
+    detail::writeWindowPng(window, path);
+    window->RemoveRenderer(renderer);
+    renderer->SetViewport(saved[0], saved[1], saved[2], saved[3]);
+    window->Finalize();
+}
+
+} // namespace
+
+SnapshotReport renderSnapshots(const Scene& scene, const CutResult& result,
+                               const std::string& outDir, const SnapshotOptions& options) {
+    ensureDisplay();
+    detail::makeDirectory(outDir);
+    namespace fs = std::filesystem;
+    const int w = std::max(64, options.widthPx), h = std::max(64, options.heightPx);
+    SnapshotReport rep;
+    rep.widthPx = w;
+    rep.heightPx = h;
+    rep.partPng = (fs::path(outDir) / "part.png").string();
+    rep.conePng = (fs::path(outDir) / "cone.png").string();
+    rep.sectionPng = (fs::path(outDir) / "section.png").string();
+    rep.chartPng = (fs::path(outDir) / "chart.png").string();
+
+    detail::PartScene part(scene, result, options.magnification);
+    part.setTextScale(h);
+    // The whole part, oblique, with the cut-away, stock outline, insert and paths.
+    shoot(part.main(), w, h, rep.partPng, [&] { part.view(detail::View::Iso); });
+
+    // The cone close up at full resolution: the deviation colours and the feed marks, nothing
+    // in front of them.
+    detail::Layers close = part.layers();
+    close.cutaway = false;
+    close.ghost = false;
+    close.paths = false;
+    close.stock = false;
+    close.insert = false;
+    part.setLayers(close);
+    part.setFine(true);
+    shoot(part.main(), w, h, rep.conePng, [&] { part.view(detail::View::Cone); });
+
+    shoot(part.section(), w, std::max(64, h / 2), rep.sectionPng, [&] { part.resetSection(); });
+    shoot(part.chart(), w, std::max(64, h / 2), rep.chartPng);
+    rep.heightPx = h;
+    return rep;
+}
+
+} // namespace swarf::viewer
