@@ -1,14 +1,56 @@
-// swarf view: NOT DONE YET (placeholder until its issue lands).
+// swarf view SCENE: reads the scene, runs the simulation and opens the 3D window.
 #include "commands.h"
+#include "swarf/io/scene_reader.h"
 #include "swarf/sim/error.h"
+#include "swarf/sim/kernel.h"
+#include "swarf/viewer/display.h"
+#include "swarf/viewer/viewer.h"
+
+#include <cstdlib>
+#include <memory>
+#include <string>
 
 namespace swarf::app {
 
 void registerView(CLI::App& app, int& exitCode) {
-    auto* cmd = app.add_subcommand("view", "(not done yet)");
-    cmd->callback([&exitCode] {
-        (void)exitCode;
-        throw Error("'swarf view' is not done yet", kExitInternal);
+    auto* cmd = app.add_subcommand(
+        "view", "Open the 3D window: the part as cut, coloured by deviation, pass by pass "
+                "(keys: press h in the window)");
+    struct Args {
+        std::string scene;
+        std::string screenshot;
+        viewer::ViewerOptions options;
+    };
+    auto args = std::make_shared<Args>();
+    cmd->add_option("scene", args->scene, "Scene file (.toml)")->required();
+    cmd->add_option("--magnify", args->options.magnification,
+                    "Magnification of the deviation in the section view")
+        ->check(CLI::Range(1.0, 1e6))
+        ->capture_default_str();
+    cmd->add_option("--at", args->options.startPosition,
+                    "Open at this point of the plan: 0 before the first pass, k after pass k, "
+                    "k.5 half way through pass k+1 (default: the finished part)");
+    cmd->add_option("--screenshot", args->screenshot,
+                    "Render the window once off screen into this PNG and exit (no window)");
+    cmd->callback([args, &exitCode] {
+        const Scene scene = io::readScene(args->scene);
+        const CutResult result = simulate(scene);
+        if (!args->screenshot.empty()) {
+            viewer::ViewerOptions o = args->options;
+            o.offScreen = true;
+            viewer::ensureDisplay();
+            viewer::ViewerSession session(scene, result, o);
+            session.saveSnapshot(args->screenshot);
+            exitCode = kExitOk;
+            return;
+        }
+        const char* display = std::getenv("DISPLAY");
+        if (!display || !*display)
+            throw RenderError("'swarf view' needs a screen and DISPLAY is not set; "
+                              "'swarf run' writes the pictures and report.html without one, and "
+                              "'swarf view SCENE --screenshot FILE.png' renders the window to a file");
+        viewer::runViewer(scene, result, args->options);
+        exitCode = kExitOk;
     });
 }
 
