@@ -69,7 +69,7 @@ bool PlanBuilder::endIsFree(bool highEnd) const {
     if (!nb) return true;  // the drawing says nothing there
     const bool largeEnd = (g_ > 0) == highEnd;
     // A convex corner (the neighbour no larger than the cone's large end) lets the tool run on.
-    return largeEnd && *nb <= coneR(highEnd ? zHi_ : zLo_) + 1e-6;
+    return largeEnd && *nb <= coneR(highEnd ? zHi_ : zLo_) + 1e-3;
 }
 
 std::optional<std::pair<double, double>> PlanBuilder::tipRange(double normalLeftMm) const {

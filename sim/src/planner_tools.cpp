@@ -103,13 +103,19 @@ std::vector<std::string> suggestTools(const Tool& tool, double pathAngleRad, int
             const double kappa = holderKappaRad(p.holder);
             const double eps = shapeIncludedRad(p.shape);
             if (!follows(kappa, eps, hand, pathAngleRad, kEdgeClearanceRad)) continue;
-            const double limit = descentLimitRad(kappa, eps, kEdgeClearanceRad);
+            // Half angles it follows (with clearance) for a cone narrowing / widening toward the
+            // chuck; a left-hand tool is the mirror image.
+            const double down = descentLimitRad(kappa, eps, kEdgeClearanceRad);
+            const double up = kappa - kEdgeClearanceRad;
+            const double narrowing = hand == Hand::L ? up : down;
+            const double widening = hand == Hand::L ? down : up;
             std::snprintf(buf, sizeof buf,
                           "shape %c insert (%.0f° corner, ISO 1832) in a style %c holder "
-                          "(entering angle %.1f°, ISO 5608), hand %c: follows paths from %.1f° "
-                          "descending to %.1f° climbing in its feed direction",
-                          p.shape, radToDeg(eps), p.holder, radToDeg(kappa), hand == Hand::L ? 'L' : 'R',
-                          radToDeg(limit), radToDeg(kappa - kEdgeClearanceRad));
+                          "(entering angle %.1f°, ISO 5608), hand %c: follows cones narrowing "
+                          "toward the chuck up to %.1f° half angle and widening toward it up to %.1f°",
+                          p.shape, radToDeg(eps), p.holder, radToDeg(kappa),
+                          hand == Hand::L ? 'L' : 'R', std::min(radToDeg(narrowing), 90.0),
+                          std::min(radToDeg(widening), 90.0));
             out.emplace_back(buf);
         }
     }

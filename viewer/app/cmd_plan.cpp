@@ -1,15 +1,109 @@
-// swarf plan: NOT DONE YET (placeholder until its issue lands).
+// swarf plan SCENE --out DIR: plan the drawing's cone on the scene's lathe, write the planned
+// scene and the set-up sheet, then run the planned scene (as written) through the kernel and
+// print its verdict, so the plan proves itself.
 #include "commands.h"
+#include "swarf/io/scene_reader.h"
+#include "swarf/io/scene_writer.h"
 #include "swarf/sim/error.h"
+#include "swarf/sim/kernel.h"
+#include "swarf/sim/planner.h"
+#include "swarf/viewer/setup_sheet.h"
+
+#include <fmt/core.h>
+
+#include <filesystem>
+#include <memory>
+#include <string>
 
 namespace swarf::app {
+namespace {
+
+struct PlanArgs {
+    std::string scene;
+    std::string outDir;
+};
+
+void makeDir(const std::string& dir) {
+    std::error_code ec;
+    std::filesystem::create_directories(dir, ec);
+    if (ec || !std::filesystem::is_directory(dir))
+        throw OutputError("cannot create the output folder " + dir + (ec ? ": " + ec.message() : ""));
+}
+
+std::vector<std::string> headerFor(const ConePlan& plan, const std::string& from) {
+    std::vector<std::string> h = {
+        "Planned by `swarf plan` from " + from + ". Run it with `swarf run`.",
+        "The passes follow the set-up sheet written beside this file; readings are approached",
+        "from below (wind back past each, then forward to it).",
+        "",
+        "CAUTION: this is a simulation of the tool path only. It does not model cutting forces,",
+        "deflection, chatter or tool wear. Keep guards closed, take the chuck key out, no gloves or",
+        "loose clothing near rotating work, wear eye protection, take speeds and feeds from the",
+        "tooling supplier, and defer to your shop's rules, local codes and licensed practice.",
+    };
+    for (const std::string& c : plan.cautions) h.push_back("Note: " + c);
+    return h;
+}
+
+int runPlan(const PlanArgs& a) {
+    const Scene scene = io::readScene(a.scene);  // bad input throws before anything is written
+    const ConePlan plan = planCone(scene);
+    makeDir(a.outDir);
+    const std::filesystem::path dir(a.outDir);
+    const Units u = scene.units;
+
+    if (!plan.planned) {
+        io::writeTextAtomically((dir / "setup-sheet.txt").string(), viewer::setupSheetText(plan));
+        io::writeTextAtomically((dir / "setup-sheet.html").string(), viewer::setupSheetHtml(plan));
+        fmt::print("{}: NOT PLANNED\n", scene.name);
+        for (const std::string& p : plan.problems) fmt::print("  {}\n", p);
+        if (!plan.suggestions.empty()) {
+            fmt::print("  Inserts and holders that can follow this cone:\n");
+            for (const std::string& s : plan.suggestions) fmt::print("  - {}\n", s);
+        }
+        fmt::print("wrote {} and {}\n", (dir / "setup-sheet.txt").string(),
+                   (dir / "setup-sheet.html").string());
+        return kExitOk;
+    }
+
+    const std::string plannedPath = (dir / "planned.toml").string();
+    io::writeScene(plan.scene, plannedPath, headerFor(plan, a.scene));
+    // Prove the plan as written: read the file back and simulate it.
+    const Scene written = io::readScene(plannedPath);
+    const CutResult result = simulate(written);
+    io::writeTextAtomically((dir / "setup-sheet.txt").string(), viewer::setupSheetText(plan, &result));
+    io::writeTextAtomically((dir / "setup-sheet.html").string(), viewer::setupSheetHtml(plan, &result));
+
+    fmt::print("{}: {} passes ({} cone roughing, {} stepped saddle, compound in {} setting{})\n",
+               scene.name, plan.scene.plan.passes.size(), plan.roughingPasses,
+               plan.saddleStepPasses, plan.compoundSettings, plan.compoundSettings == 1 ? "" : "s");
+    fmt::print("  compound {} on its scale; finishing pass offset {} on radius for the nose\n",
+               formatDms(plan.compoundReadingRad, 0), formatLength(plan.noseOffsetRadialMm, u));
+    for (const std::string& c : plan.cautions) fmt::print("  note: {}\n", c);
+    fmt::print("simulated: {}\n", result.withinTolerance ? "WITHIN TOLERANCE" : "OUT OF TOLERANCE");
+    fmt::print("  gauge diameter as cut {} (drawing {}), left on at most {}, overcut at most {}\n",
+               formatLength(result.gaugeAsCutDiameterMm, u), formatLength(result.gaugeNominalDiameterMm, u),
+               formatSmallLength(result.maxLeftOnMm, u), formatSmallLength(result.maxOvercutMm, u));
+    for (const Finding& f : result.findings)
+        fmt::print("  finding {} (pass {}): {}\n", findingKindName(f.kind), f.pass + 1, f.message);
+    if (result.findings.empty()) fmt::print("  no findings\n");
+    fmt::print("wrote {}, {}, {}\n", plannedPath, (dir / "setup-sheet.txt").string(),
+               (dir / "setup-sheet.html").string());
+    return kExitOk;
+}
+
+} // namespace
 
 void registerPlan(CLI::App& app, int& exitCode) {
-    auto* cmd = app.add_subcommand("plan", "(not done yet)");
-    cmd->callback([&exitCode] {
-        (void)exitCode;
-        throw Error("'swarf plan' is not done yet", kExitInternal);
-    });
+    auto args = std::make_shared<PlanArgs>();
+    auto* cmd = app.add_subcommand(
+        "plan", "plan the drawing's cone in handwheel readings, write the planned scene and the "
+                "set-up sheet, and simulate the plan");
+    cmd->add_option("scene", args->scene, "the scene file (TOML) with drawing, stock, tool, set-up")
+        ->required();
+    cmd->add_option("--out,-o", args->outDir, "folder for planned.toml and setup-sheet.txt/.html")
+        ->required();
+    cmd->callback([args, &exitCode] { exitCode = runPlan(*args); });
 }
 
 } // namespace swarf::app
