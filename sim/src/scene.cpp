@@ -10,9 +10,11 @@ namespace swarf {
 double Feature::radiusAt(double zMm) const {
     switch (kind) {
     case FeatureKind::Cone:
-    case FeatureKind::Chamfer: return cone.diameterAt(zMm) / 2.0;
+    case FeatureKind::Chamfer:
+        return cone.diameterAt(zMm) / 2.0;
     case FeatureKind::Cylinder:
-    case FeatureKind::Face: return diameterMm / 2.0;
+    case FeatureKind::Face:
+        return diameterMm / 2.0;
     }
     return diameterMm / 2.0;
 }
@@ -20,9 +22,12 @@ double Feature::radiusAt(double zMm) const {
 double Feature::surfaceHalfAngleRad() const {
     switch (kind) {
     case FeatureKind::Cone:
-    case FeatureKind::Chamfer: return cone.halfAngleRad;
-    case FeatureKind::Face: return kPi / 2.0;
-    case FeatureKind::Cylinder: return 0.0;
+    case FeatureKind::Chamfer:
+        return cone.halfAngleRad;
+    case FeatureKind::Face:
+        return kPi / 2.0;
+    case FeatureKind::Cylinder:
+        return 0.0;
     }
     return 0.0;
 }
@@ -31,36 +36,42 @@ std::optional<double> Part::nominalRadiusAt(double zMm) const {
     constexpr double eps = 1e-9;
     std::optional<double> r;
     for (const Feature& f : features) {
-        if (zMm < f.zStartMm - eps || zMm > f.zEndMm + eps) continue;
+        if (zMm < f.zStartMm - eps || zMm > f.zEndMm + eps)
+            continue;
         const double z = std::clamp(zMm, f.zStartMm, f.zEndMm);
         const double here = f.radiusAt(z);
-        if (!r || here > *r) r = here;
+        if (!r || here > *r)
+            r = here;
     }
     return r;
 }
 
 const Feature* Part::mainCone() const {
     for (const Feature& f : features)
-        if (f.kind == FeatureKind::Cone) return &f;
+        if (f.kind == FeatureKind::Cone)
+            return &f;
     return nullptr;
 }
 
 double Part::zMinMm() const {
     double z = features.empty() ? 0.0 : features.front().zStartMm;
-    for (const Feature& f : features) z = std::min(z, f.zStartMm);
+    for (const Feature& f : features)
+        z = std::min(z, f.zStartMm);
     return z;
 }
 
 double Part::zMaxMm() const {
     double z = features.empty() ? 0.0 : features.front().zEndMm;
-    for (const Feature& f : features) z = std::max(z, f.zEndMm);
+    for (const Feature& f : features)
+        z = std::max(z, f.zEndMm);
     return z;
 }
 
 double Setup::compoundAxisAngleRad() const {
     // A scale graduated from the cross-slide reads ψ = 90° − θ.
-    const double intended =
-        compoundScale == CompoundScale::FromAxis ? compoundReadingRad : kPi / 2.0 - compoundReadingRad;
+    const double intended = compoundScale == CompoundScale::FromAxis
+                                ? compoundReadingRad
+                                : kPi / 2.0 - compoundReadingRad;
     return intended + compoundErrorRad;
 }
 
@@ -71,14 +82,16 @@ struct Checker {
     Units units;
     void len(bool ok, const SourceLoc& where, const std::string& key, double mm,
              const std::string& expected) const {
-        if (ok) return;
+        if (ok)
+            return;
         char buf[64];
         std::snprintf(buf, sizeof buf, "%.6g", fromMm(mm, units));
         throw InputError(where, key, buf, expected);
     }
     void num(bool ok, const SourceLoc& where, const std::string& key, double v,
              const std::string& expected) const {
-        if (ok) return;
+        if (ok)
+            return;
         char buf[64];
         std::snprintf(buf, sizeof buf, "%.6g", v);
         throw InputError(where, key, buf, expected);
@@ -91,7 +104,8 @@ struct Checker {
 
 void checkSlide(const Checker& c, const SourceLoc& w, const std::string& name, const Slide& s) {
     c.len(s.mmPerDivision > 0, w, name + ".per_division", s.mmPerDivision, "expected more than 0");
-    c.num(s.divisionsPerTurn > 0, w, name + ".divisions", s.divisionsPerTurn, "expected more than 0");
+    c.num(s.divisionsPerTurn > 0, w, name + ".divisions", s.divisionsPerTurn,
+          "expected more than 0");
     c.len(s.backlashMm >= 0, w, name + ".backlash", s.backlashMm, "expected 0 or more");
     c.len(s.travelMm > 0, w, name + ".travel", s.travelMm, "expected more than 0");
 }
@@ -108,7 +122,8 @@ void Scene::validate() const {
     c.len(stock.stickOutMm > 0 && stock.stickOutMm <= stock.lengthMm + 1e-9, sw, "stock.stick_out",
           stock.stickOutMm, "expected more than 0 and at most the bar length");
     c.len(stock.faceAllowanceMm >= 0 && stock.faceAllowanceMm < stock.stickOutMm, sw,
-          "stock.face_allowance", stock.faceAllowanceMm, "expected 0 or more, less than the stick-out");
+          "stock.face_allowance", stock.faceAllowanceMm,
+          "expected 0 or more, less than the stick-out");
 
     c.num(!part.features.empty(), part.where, "part.feature", 0, "expected at least one feature");
     for (std::size_t i = 0; i < part.features.size(); ++i) {
@@ -116,7 +131,8 @@ void Scene::validate() const {
         const std::string k = "part.feature[" + std::to_string(i + 1) + "]";
         const SourceLoc& w = f.where;
         const bool face = f.kind == FeatureKind::Face;
-        c.len(f.zStartMm >= -1e-9, w, k + ".from", f.zStartMm, "expected 0 or more (from the datum face)");
+        c.len(f.zStartMm >= -1e-9, w, k + ".from", f.zStartMm,
+              "expected 0 or more (from the datum face)");
         c.len(face ? f.zEndMm == f.zStartMm : f.zEndMm > f.zStartMm, w, k + ".to", f.zEndMm,
               "expected more than from");
         if (i > 0)
@@ -135,10 +151,12 @@ void Scene::validate() const {
                   "expected more than 0");
             if (f.kind == FeatureKind::Cone)
                 c.len(cone.gaugeZMm >= f.zStartMm - 1e-9 && cone.gaugeZMm <= f.zEndMm + 1e-9, w,
-                      k + ".gauge_plane", cone.gaugeZMm, "expected a plane within the cone's from and to");
+                      k + ".gauge_plane", cone.gaugeZMm,
+                      "expected a plane within the cone's from and to");
             const double dMin = std::min(cone.diameterAt(f.zStartMm), cone.diameterAt(f.zEndMm));
             const double dMax = std::max(cone.diameterAt(f.zStartMm), cone.diameterAt(f.zEndMm));
-            c.len(dMin > 0, w, k + ".from", f.zStartMm, "expected the cone to keep a diameter over its length");
+            c.len(dMin > 0, w, k + ".from", f.zStartMm,
+                  "expected the cone to keep a diameter over its length");
             c.len(dMax <= stock.diameterMm + 1e-9, w, k, dMax,
                   "expected the part no larger than the bar (" + u + ")");
         } else {
@@ -161,8 +179,8 @@ void Scene::validate() const {
         c.deg(tool.enteringAngleRad + tool.includedAngleRad < kPi, tw, "tool.entering_angle",
               tool.enteringAngleRad, "expected entering angle + insert angle below 180 degrees");
     c.len(tool.thicknessMm > 0, tw, "tool.thickness", tool.thicknessMm, "expected more than 0");
-    c.len(std::fabs(tool.tipHeightMm) < stock.diameterMm / 2, tw, "tool.tip_height", tool.tipHeightMm,
-          "expected less than the bar radius off centre");
+    c.len(std::fabs(tool.tipHeightMm) < stock.diameterMm / 2, tw, "tool.tip_height",
+          tool.tipHeightMm, "expected less than the bar radius off centre");
 
     const SourceLoc& uw = setup.where;
     const double alpha = setup.compoundAxisAngleRad();
@@ -179,19 +197,22 @@ void Scene::validate() const {
         const std::string k = "plan.pass[" + std::to_string(i + 1) + "]";
         c.len(p.feedMmPerRev > 0, p.where, k + ".feed", p.feedMmPerRev, "expected more than 0");
         if (p.kind == PassKind::Path) {
-            c.num(p.pathZX.size() >= 2, p.where, k + ".points", static_cast<double>(p.pathZX.size()),
-                  "expected at least two points");
+            c.num(p.pathZX.size() >= 2, p.where, k + ".points",
+                  static_cast<double>(p.pathZX.size()), "expected at least two points");
             for (const auto& [z, x] : p.pathZX)
                 c.len(x >= 0, p.where, k + ".points", 2 * x, "expected diameters of 0 or more");
         } else {
-            c.len(p.toMm != p.fromMm, p.where, k + ".to", p.toMm, "expected a reading other than from");
+            c.len(p.toMm != p.fromMm, p.where, k + ".to", p.toMm,
+                  "expected a reading other than from");
         }
     }
 
     const SourceLoc& pw = planning.where;
-    c.len(planning.maxDepthMm > 0, pw, "planning.max_depth", planning.maxDepthMm, "expected more than 0");
+    c.len(planning.maxDepthMm > 0, pw, "planning.max_depth", planning.maxDepthMm,
+          "expected more than 0");
     c.len(planning.finishAllowanceMm >= 0 && planning.finishAllowanceMm < planning.maxDepthMm, pw,
-          "planning.finish_allowance", planning.finishAllowanceMm, "expected 0 or more, less than max_depth");
+          "planning.finish_allowance", planning.finishAllowanceMm,
+          "expected 0 or more, less than max_depth");
     c.len(planning.roughFeedMmPerRev > 0, pw, "planning.rough_feed", planning.roughFeedMmPerRev,
           "expected more than 0");
     c.len(planning.finishFeedMmPerRev > 0, pw, "planning.finish_feed", planning.finishFeedMmPerRev,
@@ -199,8 +220,10 @@ void Scene::validate() const {
     c.len(planning.rollDiameterMm >= 0, pw, "planning.roll_diameter", planning.rollDiameterMm,
           "expected 0 or more");
 
-    c.len(sim.profileStepMm > 0, {file, 0, 0}, "sim.profile_step", sim.profileStepMm, "expected more than 0");
-    c.num(sim.angleSamples >= 8, {file, 0, 0}, "sim.angle_samples", sim.angleSamples, "expected 8 or more");
+    c.len(sim.profileStepMm > 0, {file, 0, 0}, "sim.profile_step", sim.profileStepMm,
+          "expected more than 0");
+    c.num(sim.angleSamples >= 8, {file, 0, 0}, "sim.angle_samples", sim.angleSamples,
+          "expected 8 or more");
     c.num(!(expect.noFindings && !expect.findings.empty()), expect.where, "expect.no_findings", 1,
           "expected false when findings are listed");
     for (double b : gaugeBlocksMm)

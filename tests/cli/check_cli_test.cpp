@@ -31,7 +31,8 @@ Run runSwarf(const std::string& args) {
     REQUIRE(p != nullptr);
     char buf[4096];
     std::size_t n;
-    while ((n = std::fread(buf, 1, sizeof buf, p)) > 0) r.out.append(buf, n);
+    while ((n = std::fread(buf, 1, sizeof buf, p)) > 0)
+        r.out.append(buf, n);
     const int status = pclose(p);
     r.exitCode = WIFEXITED(status) ? WEXITSTATUS(status) : -1;
     r.err = slurp(errFile);
@@ -62,11 +63,12 @@ TEST_CASE("swarf check shows an inch scene in inch", "[cli][check]") {
     const Run r = runSwarf(std::string("check '") + SWARF_SCENES_DIR + "/taper-shank-morse.toml'");
     INFO(r.out << r.err);
     CHECK(r.exitCode == 0);
-    CHECK(r.out.find("gauge diameter 0.7000 in") != std::string::npos);  // Source: references R3
+    CHECK(r.out.find("gauge diameter 0.7000 in") != std::string::npos); // Source: references R3
     CHECK(r.out.find(" mm") == std::string::npos);
 }
 
-TEST_CASE("swarf check refuses a bad scene with exit code 2 and the message on stderr", "[cli][check]") {
+TEST_CASE("swarf check refuses a bad scene with exit code 2 and the message on stderr",
+          "[cli][check]") {
     const std::string bad = std::string(SWARF_TEST_DATA_DIR) + "/bad_scenes/two-taper-forms.toml";
     const Run r = runSwarf("check '" + bad + "'");
     CHECK(r.exitCode == 2);

@@ -28,7 +28,8 @@ BadScene readHeader(const fs::path& p) {
     while (std::getline(in, line) && line.rfind("# ", 0) == 0) {
         auto take = [&](const char* tag, std::string& into) {
             const std::string t = std::string("# ") + tag + ": ";
-            if (line.rfind(t, 0) == 0) into = line.substr(t.size());
+            if (line.rfind(t, 0) == 0)
+                into = line.substr(t.size());
         };
         take("expect", b.expect);
         take("at", b.at);
@@ -40,14 +41,17 @@ BadScene readHeader(const fs::path& p) {
 std::vector<BadScene> corpus() {
     std::vector<BadScene> all;
     for (const auto& e : fs::directory_iterator(fs::path(SWARF_TEST_DATA_DIR) / "bad_scenes"))
-        if (e.path().extension() == ".toml") all.push_back(readHeader(e.path()));
-    std::sort(all.begin(), all.end(), [](const BadScene& a, const BadScene& b) { return a.path < b.path; });
+        if (e.path().extension() == ".toml")
+            all.push_back(readHeader(e.path()));
+    std::sort(all.begin(), all.end(),
+              [](const BadScene& a, const BadScene& b) { return a.path < b.path; });
     return all;
 }
 
 } // namespace
 
-TEST_CASE("the bad-scene corpus has at least 25 scenes, each with its expected message", "[io][bad]") {
+TEST_CASE("the bad-scene corpus has at least 25 scenes, each with its expected message",
+          "[io][bad]") {
     const auto all = corpus();
     CHECK(all.size() >= 25);
     for (const BadScene& b : all) {
@@ -57,7 +61,8 @@ TEST_CASE("the bad-scene corpus has at least 25 scenes, each with its expected m
     }
 }
 
-TEST_CASE("every bad scene is refused with file:line:column, key and the expected text", "[io][bad]") {
+TEST_CASE("every bad scene is refused with file:line:column, key and the expected text",
+          "[io][bad]") {
     for (const BadScene& b : corpus()) {
         const std::string file = b.path.string();
         INFO(file);

@@ -8,9 +8,9 @@ using namespace swarf::io;
 TEST_CASE("edit distance", "[io][did_you_mean]") {
     CHECK(editDistance("", "") == 0);
     CHECK(editDistance("abc", "") == 3);
-    CHECK(editDistance("kitten", "sitting") == 3);  // from memory: the textbook example
+    CHECK(editDistance("kitten", "sitting") == 3); // from memory: the textbook example
     CHECK(editDistance("diamter", "diameter") == 1);
-    CHECK(editDistance("Stick_Out", "stick_out") == 0);  // case-insensitive
+    CHECK(editDistance("Stick_Out", "stick_out") == 0); // case-insensitive
 }
 
 TEST_CASE("closest match suggests likely misspellings only", "[io][did_you_mean]") {
@@ -18,7 +18,7 @@ TEST_CASE("closest match suggests likely misspellings only", "[io][did_you_mean]
     CHECK(closestMatch("diamter", keys) == "diameter");
     CHECK(closestMatch("stickout", keys) == "stick_out");
     CHECK(closestMatch("lenght", keys) == "length");
-    CHECK(closestMatch("diam", keys) == "diameter");  // a part of the word
+    CHECK(closestMatch("diam", keys) == "diameter"); // a part of the word
     CHECK(closestMatch("colour", keys).empty());
     CHECK(closestMatch("x", {}).empty());
 }
@@ -28,7 +28,8 @@ TEST_CASE("suggestion text lists the choices", "[io][did_you_mean]") {
     CHECK(suggestion("axial", words) == "one of axis, cross_slide; did you mean 'axis'?");
     CHECK(suggestion("zzzzzzz", words) == "one of axis, cross_slide");
     std::vector<std::string> many;
-    for (int i = 0; i < 20; ++i) many.push_back("name" + std::to_string(i));
+    for (int i = 0; i < 20; ++i)
+        many.push_back("name" + std::to_string(i));
     const std::string s = suggestion("name19", many);
     CHECK(s.find("(20 in all)") != std::string::npos);
     CHECK(s.find("did you mean 'name19'") != std::string::npos);

@@ -17,7 +17,7 @@ TEST_CASE("ISO 1832 shape letters give the included angle", "[io][insert]") {
     CHECK(shapeIncludedAngleDeg('T') == 60.0);
     CHECK(shapeIncludedAngleDeg('V') == 35.0);
     CHECK(shapeIncludedAngleDeg('W') == 80.0);
-    CHECK(shapeIncludedAngleDeg('K') == 55.0);  // from memory (parallelogram K, 55°)
+    CHECK(shapeIncludedAngleDeg('K') == 55.0); // from memory (parallelogram K, 55°)
     CHECK(shapeIncludedAngleDeg('d') == 55.0);
     CHECK_FALSE(shapeIncludedAngleDeg('X').has_value());
 }
@@ -47,11 +47,11 @@ TEST_CASE("ISO 1832 designations", "[io][insert]") {
     CHECK(d->shape == 'D');
     CHECK(d->edgeLengthMm == 11);
     CHECK(d->thicknessMm == Approx(3.97));
-    CHECK(d->noseRadiusMm == Approx(0.4));  // Source: references R8 (code 04 → 0.4 mm)
+    CHECK(d->noseRadiusMm == Approx(0.4)); // Source: references R8 (code 04 → 0.4 mm)
     auto c = parseInsertCode("cnmg120408-pm");
     REQUIRE(c);
     CHECK(c->shape == 'C');
-    CHECK(c->noseRadiusMm == Approx(0.8));  // Source: references R8 (code 08 → 0.8 mm)
+    CHECK(c->noseRadiusMm == Approx(0.8)); // Source: references R8 (code 08 → 0.8 mm)
     auto r = parseInsertCode("RCMT 10T3M0");
     REQUIRE(r);
     CHECK(r->noseRadiusMm == Approx(5.0));
@@ -68,6 +68,7 @@ TEST_CASE("largest nose radius an insert can have", "[io][insert]") {
     // derived: an equilateral triangle of side l has an inscribed circle l/√3 across
     CHECK(inscribedCircleMm('T', 60 * deg, 16.5) == Approx(16.5 / std::sqrt(3.0)));
     // derived: a narrow corner limits by tangent length: r ≤ l·tan(ε/2) for 35° and l = 2
-    CHECK(maxNoseRadiusMm('V', 35 * deg, 2) == Approx(std::min(2 * std::sin(35 * deg) / 2, 2 * std::tan(17.5 * deg))));
+    CHECK(maxNoseRadiusMm('V', 35 * deg, 2) ==
+          Approx(std::min(2 * std::sin(35 * deg) / 2, 2 * std::tan(17.5 * deg))));
     CHECK(maxNoseRadiusMm('R', 180 * deg, 10) == Approx(5));
 }

@@ -9,7 +9,6 @@
 
 using namespace swarf;
 
-
 namespace {
 
 // A scene that uses every key of scenes/README.md at least once (values invented).
@@ -224,6 +223,7 @@ TEST_CASE("every key of the scene format is read", "[io][scene]") {
     CHECK(ch.toleranceMm == 0.1);
     CHECK(ch.angleToleranceRad == Approx(degToRad(1)));
     CHECK_FALSE(ch.toleranceFromClass);
+    CHECK_FALSE(ch.angleToleranceFromClass);
 
     const Feature& cyl = s.part.features[1];
     CHECK(cyl.kind == FeatureKind::Cylinder);
@@ -245,7 +245,7 @@ TEST_CASE("every key of the scene format is read", "[io][scene]") {
     CHECK(cone.coneGivenAs == "half angle");
 
     CHECK(s.tool.shape == 'V');
-    CHECK(s.tool.includedAngleRad == Approx(degToRad(35)));  // Source: references R8
+    CHECK(s.tool.includedAngleRad == Approx(degToRad(35))); // Source: references R8
     CHECK(s.tool.noseRadiusMm == 0.2);
     CHECK(s.tool.enteringAngleRad == Approx(degToRad(72.5)));
     CHECK(s.tool.hand == Hand::L);
@@ -293,7 +293,7 @@ TEST_CASE("every key of the scene format is read", "[io][scene]") {
     CHECK(path.kind == PassKind::Path);
     REQUIRE(path.pathZX.size() == 3);
     CHECK(path.pathZX[0].first == 62);
-    CHECK(path.pathZX[0].second == 18.5);  // diameter 37 → radius
+    CHECK(path.pathZX[0].second == 18.5); // diameter 37 → radius
     CHECK(path.pathZX[2].second == 15);
     CHECK(path.feedMmPerRev == 0.07);
 
@@ -322,13 +322,14 @@ TEST_CASE("defaults of an omitted key", "[io][scene]") {
     const Feature& f = s.part.features.at(0);
     CHECK(f.name == "feature 1");
     CHECK(f.toleranceFromClass);
+    CHECK(f.angleToleranceFromClass);
     // Source: references R9 (ISO 2768-1 class m, over 6 up to 30 mm: ±0.2)
     CHECK(f.toleranceMm == Approx(0.2));
     // Source: references R9 (ISO 2768-1 class m, shorter leg 10–50 mm: ±30′)
     CHECK(f.angleToleranceRad == Approx(degToRad(0.5)));
     CHECK(s.tool.hand == Hand::R);
     CHECK(s.tool.tipHeightMm == 0);
-    CHECK(s.tool.includedAngleRad == Approx(degToRad(80)));  // Source: references R8
+    CHECK(s.tool.includedAngleRad == Approx(degToRad(80))); // Source: references R8
     CHECK(s.setup.compoundScale == CompoundScale::FromAxis);
     CHECK(s.setup.compoundErrorRad == 0);
     CHECK(s.setup.crossDial == DialMode::Diameter);
@@ -471,13 +472,13 @@ sizes = [2.54, 2.54254, 25.4]
     same(fa.zEndMm, fb.zEndMm);
     same(fa.cone.gaugeZMm, fb.cone.gaugeZMm);
     same(fa.cone.gaugeDiameterMm, fb.cone.gaugeDiameterMm);
-    same(fa.cone.halfAngleRad, fb.cone.halfAngleRad);  // taper per foot is in/ft in both
+    same(fa.cone.halfAngleRad, fb.cone.halfAngleRad); // taper per foot is in/ft in both
     same(fa.toleranceMm, fb.toleranceMm);
     same(fa.angleToleranceRad, fb.angleToleranceRad);
     same(a.tool.noseRadiusMm, b.tool.noseRadiusMm);
     same(a.tool.edgeLengthMm, b.tool.edgeLengthMm);
     same(a.tool.tipHeightMm, b.tool.tipHeightMm);
-    same(a.tool.enteringAngleRad, degToRad(95));  // Source: references R8 (holder L, 95°)
+    same(a.tool.enteringAngleRad, degToRad(95)); // Source: references R8 (holder L, 95°)
     same(a.setup.compoundAxisAngleRad(), b.setup.compoundAxisAngleRad());
     same(a.setup.compound.mmPerDivision, b.setup.compound.mmPerDivision);
     same(a.setup.compound.backlashMm, b.setup.compound.backlashMm);
@@ -507,9 +508,11 @@ sizes = [2.54, 2.54254, 25.4]
     same(a.planning.rollDiameterMm, b.planning.rollDiameterMm);
     same(a.sim.profileStepMm, b.sim.profileStepMm);
     REQUIRE(a.gaugeBlocksMm.size() == 3);
-    for (int i = 0; i < 3; ++i) same(a.gaugeBlocksMm[i], b.gaugeBlocksMm[i]);
+    for (int i = 0; i < 3; ++i)
+        same(a.gaugeBlocksMm[i], b.gaugeBlocksMm[i]);
     // Defaults follow the scene's units: a 0.001 in dial division when none is given.
-    const Scene c = io::readSceneText(replaced(inch, "per_division = 0.001\nbacklash", "backlash"), "c.toml");
+    const Scene c =
+        io::readSceneText(replaced(inch, "per_division = 0.001\nbacklash", "backlash"), "c.toml");
     same(c.setup.compound.mmPerDivision, 0.0254);
 }
 
@@ -553,10 +556,11 @@ TEST_CASE("a standard taper fills in the taper and its gauge diameter", "[io][sc
 }
 
 TEST_CASE("an ISO 1832 insert code gives shape, nose radius and size", "[io][scene][tool]") {
-    const std::string text = replaced(kMinimal, "shape = \"C\"\nnose_radius = 0.8", "insert = \"CNMG 120408\"");
+    const std::string text =
+        replaced(kMinimal, "shape = \"C\"\nnose_radius = 0.8", "insert = \"CNMG 120408\"");
     const Scene s = io::readSceneText(text, "insert.toml");
     CHECK(s.tool.shape == 'C');
-    CHECK(s.tool.noseRadiusMm == Approx(0.8));  // Source: references R8 (code 08 → 0.8 mm)
+    CHECK(s.tool.noseRadiusMm == Approx(0.8)); // Source: references R8 (code 08 → 0.8 mm)
     CHECK(s.tool.edgeLengthMm == 12);
     CHECK(s.tool.thicknessMm == Approx(4.76));
     // A code and a nose radius that disagree are an error.

@@ -13,7 +13,8 @@ namespace fs = std::filesystem;
 TEST_CASE("every scene in scenes/ reads without error", "[io][scenes]") {
     int count = 0;
     for (const auto& e : fs::directory_iterator(SWARF_SCENES_DIR)) {
-        if (e.path().extension() != ".toml") continue;
+        if (e.path().extension() != ".toml")
+            continue;
         ++count;
         const std::string file = e.path().string();
         INFO(file);
@@ -30,7 +31,8 @@ TEST_CASE("every scene in scenes/ reads without error", "[io][scenes]") {
 }
 
 TEST_CASE("the demo scene reads as written", "[io][scenes]") {
-    const swarf::Scene s = swarf::io::readScene(std::string(SWARF_SCENES_DIR) + "/fixture-arbor.toml");
+    const swarf::Scene s =
+        swarf::io::readScene(std::string(SWARF_SCENES_DIR) + "/fixture-arbor.toml");
     CHECK(s.units == swarf::Units::Mm);
     const swarf::Feature* cone = s.part.mainCone();
     REQUIRE(cone != nullptr);
@@ -38,13 +40,14 @@ TEST_CASE("the demo scene reads as written", "[io][scenes]") {
     CHECK(cone->cone.halfAngleRad == Approx(std::atan(0.05)));
     CHECK(cone->cone.diameterAt(0) == Approx(25.0));
     CHECK(cone->cone.diameterAt(50) == Approx(30.0));
-    CHECK(s.tool.enteringAngleRad == Approx(swarf::degToRad(93)));  // Source: references R8 (J)
-    CHECK(s.tool.includedAngleRad == Approx(swarf::degToRad(55)));  // Source: references R8 (D)
+    CHECK(s.tool.enteringAngleRad == Approx(swarf::degToRad(93))); // Source: references R8 (J)
+    CHECK(s.tool.includedAngleRad == Approx(swarf::degToRad(55))); // Source: references R8 (D)
     CHECK(s.plan.passes.size() == 4);
 }
 
 TEST_CASE("the inch scene converts to mm once", "[io][scenes][units]") {
-    const swarf::Scene s = swarf::io::readScene(std::string(SWARF_SCENES_DIR) + "/taper-shank-morse.toml");
+    const swarf::Scene s =
+        swarf::io::readScene(std::string(SWARF_SCENES_DIR) + "/taper-shank-morse.toml");
     CHECK(s.units == swarf::Units::Inch);
     CHECK(s.stock.diameterMm == Approx(0.75 * 25.4));
     const swarf::Feature* cone = s.part.mainCone();

@@ -62,7 +62,7 @@ TEST_CASE("validate names the key and the item's location", "[sim][scene]") {
     CHECK(validateMessage(s).find("setup.compound.angle = 90") != std::string::npos);
 
     s = goodScene();
-    s.tool.enteringAngleRad = degToRad(130);  // 130 + 55 ≥ 180
+    s.tool.enteringAngleRad = degToRad(130); // 130 + 55 ≥ 180
     CHECK(validateMessage(s).find("tool.entering_angle") != std::string::npos);
 
     s = goodScene();
@@ -94,7 +94,7 @@ TEST_CASE("feature radius, half angle and part extent", "[sim][scene]") {
     const Scene s = goodScene();
     const Feature& f = s.part.features[0];
     CHECK(f.radiusAt(40) == Approx(14.5));
-    CHECK(f.radiusAt(0) == Approx(12.5));  // derived: 1:10 over 40 mm takes 4 mm off the diameter
+    CHECK(f.radiusAt(0) == Approx(12.5)); // derived: 1:10 over 40 mm takes 4 mm off the diameter
     CHECK(f.surfaceHalfAngleRad() == Approx(std::atan(0.05)));
     CHECK(s.part.zMinMm() == 0);
     CHECK(s.part.zMaxMm() == 50);

@@ -10,74 +10,120 @@ namespace swarf::io {
 
 std::optional<double> shapeIncludedAngleDeg(char letter) {
     switch (std::toupper(static_cast<unsigned char>(letter))) {
-    case 'C': return 80.0;
-    case 'D': return 55.0;
-    case 'E': return 75.0;
-    case 'K': return 55.0;
-    case 'S': return 90.0;
-    case 'T': return 60.0;
-    case 'V': return 35.0;
-    case 'W': return 80.0;
-    case 'R': return 180.0;
-    default: return std::nullopt;
+    case 'C':
+        return 80.0;
+    case 'D':
+        return 55.0;
+    case 'E':
+        return 75.0;
+    case 'K':
+        return 55.0;
+    case 'S':
+        return 90.0;
+    case 'T':
+        return 60.0;
+    case 'V':
+        return 35.0;
+    case 'W':
+        return 80.0;
+    case 'R':
+        return 180.0;
+    default:
+        return std::nullopt;
     }
 }
 
 std::optional<double> holderEnteringAngleDeg(char letter) {
     switch (std::toupper(static_cast<unsigned char>(letter))) {
-    case 'A': return 90.0;
-    case 'B': return 75.0;
-    case 'D': return 45.0;
-    case 'E': return 60.0;
-    case 'F': return 90.0;
-    case 'G': return 90.0;
-    case 'J': return 93.0;
-    case 'K': return 75.0;
-    case 'L': return 95.0;
-    case 'N': return 63.0;
-    case 'S': return 45.0;
-    case 'T': return 60.0;
-    case 'Y': return 85.0;
-    case 'H': return 107.5;
-    case 'Q': return 107.5;
-    case 'P': return 117.5;
-    case 'V': return 72.5;
-    default: return std::nullopt;
+    case 'A':
+        return 90.0;
+    case 'B':
+        return 75.0;
+    case 'D':
+        return 45.0;
+    case 'E':
+        return 60.0;
+    case 'F':
+        return 90.0;
+    case 'G':
+        return 90.0;
+    case 'J':
+        return 93.0;
+    case 'K':
+        return 75.0;
+    case 'L':
+        return 95.0;
+    case 'N':
+        return 63.0;
+    case 'S':
+        return 45.0;
+    case 'T':
+        return 60.0;
+    case 'Y':
+        return 85.0;
+    case 'H':
+        return 107.5;
+    case 'Q':
+        return 107.5;
+    case 'P':
+        return 117.5;
+    case 'V':
+        return 72.5;
+    default:
+        return std::nullopt;
     }
 }
 
 std::optional<InsertCode> parseInsertCode(std::string_view code) {
     std::string s;
     for (char c : code)
-        if (c != ' ' && c != '-') s += static_cast<char>(std::toupper(static_cast<unsigned char>(c)));
-    if (s.size() < 10) return std::nullopt;
+        if (c != ' ' && c != '-')
+            s += static_cast<char>(std::toupper(static_cast<unsigned char>(c)));
+    if (s.size() < 10)
+        return std::nullopt;
     for (int i = 0; i < 4; ++i)
-        if (!std::isalpha(static_cast<unsigned char>(s[i]))) return std::nullopt;
-    if (!shapeIncludedAngleDeg(s[0])) return std::nullopt;
+        if (!std::isalpha(static_cast<unsigned char>(s[i])))
+            return std::nullopt;
+    if (!shapeIncludedAngleDeg(s[0]))
+        return std::nullopt;
     auto digit = [](char c) { return std::isdigit(static_cast<unsigned char>(c)) != 0; };
     InsertCode out;
     out.shape = s[0];
     // Size: two digits, whole mm of the edge length (for round inserts, the diameter).
-    if (!digit(s[4]) || !digit(s[5])) return std::nullopt;
+    if (!digit(s[4]) || !digit(s[5]))
+        return std::nullopt;
     out.edgeLengthMm = (s[4] - '0') * 10 + (s[5] - '0');
     // Thickness: "T3" is 3.97 mm, "03" 3.18 mm and so on (nominal inch fractions).
     const std::string t = s.substr(6, 2);
-    if (t == "01") out.thicknessMm = 1.59;
-    else if (t == "T1") out.thicknessMm = 1.98;
-    else if (t == "02") out.thicknessMm = 2.38;
-    else if (t == "T2") out.thicknessMm = 2.78;
-    else if (t == "03") out.thicknessMm = 3.18;
-    else if (t == "T3") out.thicknessMm = 3.97;
-    else if (t == "04") out.thicknessMm = 4.76;
-    else if (t == "05") out.thicknessMm = 5.56;
-    else if (t == "06") out.thicknessMm = 6.35;
-    else if (t == "07") out.thicknessMm = 7.94;
-    else if (t == "09") out.thicknessMm = 9.52;
-    else return std::nullopt;
+    if (t == "01")
+        out.thicknessMm = 1.59;
+    else if (t == "T1")
+        out.thicknessMm = 1.98;
+    else if (t == "02")
+        out.thicknessMm = 2.38;
+    else if (t == "T2")
+        out.thicknessMm = 2.78;
+    else if (t == "03")
+        out.thicknessMm = 3.18;
+    else if (t == "T3")
+        out.thicknessMm = 3.97;
+    else if (t == "04")
+        out.thicknessMm = 4.76;
+    else if (t == "05")
+        out.thicknessMm = 5.56;
+    else if (t == "06")
+        out.thicknessMm = 6.35;
+    else if (t == "07")
+        out.thicknessMm = 7.94;
+    else if (t == "09")
+        out.thicknessMm = 9.52;
+    else
+        return std::nullopt;
     // Corner radius: two digits in tenths of a mm; "M0" marks a round insert.
     const std::string r = s.substr(8, 2);
     if (r == "M0") {
-        if (out.shape != 'R') return std::nullopt;
+        if (out.shape != 'R')
+            return std::nullopt;
         out.noseRadiusMm = out.edgeLengthMm / 2.0;
     } else if (digit(r[0]) && digit(r[1])) {
         out.noseRadiusMm = ((r[0] - '0') * 10 + (r[1] - '0')) / 10.0;
@@ -89,11 +135,15 @@ std::optional<InsertCode> parseInsertCode(std::string_view code) {
 
 double inscribedCircleMm(char shape, double includedRad, double edgeLengthMm) {
     switch (std::toupper(static_cast<unsigned char>(shape))) {
-    case 'R': return edgeLengthMm;
-    case 'T': return edgeLengthMm / std::sqrt(3.0);
-    case 'W': return edgeLengthMm * std::sin(includedRad) * 2.0 / 3.0;
+    case 'R':
+        return edgeLengthMm;
+    case 'T':
+        return edgeLengthMm / std::sqrt(3.0);
+    case 'W':
+        return edgeLengthMm * std::sin(includedRad) * 2.0 / 3.0;
     default:
-        if (includedRad >= std::numbers::pi) return edgeLengthMm;
+        if (includedRad >= std::numbers::pi)
+            return edgeLengthMm;
         // Rhombus or square, also for an insert given by its included angle alone.
         return edgeLengthMm * std::sin(includedRad);
     }

@@ -11,9 +11,12 @@ namespace swarf::io::detail {
 
 namespace {
 
-const std::vector<std::string_view> kCompoundPassKeys = {"kind", "note", "cross", "saddle", "from", "to", "feed"};
-const std::vector<std::string_view> kSaddlePassKeys = {"kind", "note", "cross", "compound", "from", "to", "feed"};
-const std::vector<std::string_view> kCrossPassKeys = {"kind", "note", "compound", "saddle", "from", "to", "feed"};
+const std::vector<std::string_view> kCompoundPassKeys = {"kind", "note", "cross", "saddle",
+                                                         "from", "to",   "feed"};
+const std::vector<std::string_view> kSaddlePassKeys = {"kind", "note", "cross", "compound",
+                                                       "from", "to",   "feed"};
+const std::vector<std::string_view> kCrossPassKeys = {"kind", "note", "compound", "saddle",
+                                                      "from", "to",   "feed"};
 
 std::string fmtNum(double v) {
     char buf[64];
@@ -39,7 +42,8 @@ void readSlide(const Fields& f, Slide& s, double defaultPerDivisionMm, double de
 
 Tool readTool(const Fields& root) {
     const toml::table* t = root.subtable("tool");
-    if (!t) root.missing("tool", "a [tool] table: the insert and holder");
+    if (!t)
+        root.missing("tool", "a [tool] table: the insert and holder");
     Fields f(*t, "tool", root.context(),
              {"shape", "included_angle", "insert", "nose_radius", "entering_angle", "holder",
               "hand", "edge_length", "tip_height", "thickness"});
@@ -62,7 +66,8 @@ Tool readTool(const Fields& root) {
                   "expected an ISO 1832 shape letter: C, D, E, K, R, S, T, V or W");
         tool.shape = static_cast<char>(std::toupper(static_cast<unsigned char>((*s)[0])));
         f.require(!code || code->shape == tool.shape, "shape",
-                  std::string("expected '") + (code ? code->shape : ' ') + "' as the insert code says");
+                  std::string("expected '") + (code ? code->shape : ' ') +
+                      "' as the insert code says");
         tool.includedAngleRad = degToRad(*shapeIncludedAngleDeg(tool.shape));
     } else if (auto a = f.angle("included_angle", "the insert's corner angle ε")) {
         f.require(*a > 0 && *a < degToRad(180), "included_angle",
@@ -74,7 +79,8 @@ Tool readTool(const Fields& root) {
         tool.shape = code->shape;
         tool.includedAngleRad = degToRad(*shapeIncludedAngleDeg(tool.shape));
     } else {
-        f.missing("shape", "an ISO 1832 shape letter (C, D, E, K, R, S, T, V, W) or included_angle");
+        f.missing("shape",
+                  "an ISO 1832 shape letter (C, D, E, K, R, S, T, V, W) or included_angle");
     }
     const bool round = tool.shape == 'R';
 
@@ -107,22 +113,26 @@ Tool readTool(const Fields& root) {
     } else {
         f.missing("nose_radius", "the nose radius, a length in " + f.unit());
     }
-    const double maxR = maxNoseRadiusMm(round ? 'R' : tool.shape, tool.includedAngleRad, tool.edgeLengthMm);
+    const double maxR =
+        maxNoseRadiusMm(round ? 'R' : tool.shape, tool.includedAngleRad, tool.edgeLengthMm);
     const std::string rKey = f.has("nose_radius") ? "nose_radius" : "insert";
     if (round)
-        f.require(std::fabs(tool.noseRadiusMm - maxR) < 1e-6 || !f.has("edge_length") || !f.has("nose_radius"),
+        f.require(std::fabs(tool.noseRadiusMm - maxR) < 1e-6 || !f.has("edge_length") ||
+                      !f.has("nose_radius"),
                   rKey, "expected half the round insert's diameter (edge_length)");
     else
         f.require(tool.noseRadiusMm <= maxR + 1e-9, rKey,
                   "expected at most " + fmtNum(fromMm(maxR, u)) + " " + f.unit() +
                       ": a larger nose does not fit this insert (edge length " +
                       fmtNum(fromMm(tool.edgeLengthMm, u)) + " " + f.unit() + ")");
-    if (round && !f.has("edge_length")) tool.edgeLengthMm = 2 * tool.noseRadiusMm;
+    if (round && !f.has("edge_length"))
+        tool.edgeLengthMm = 2 * tool.noseRadiusMm;
 
     if (f.has("entering_angle") && f.has("holder")) {
         const double given = *f.angle("entering_angle", "the holder's entering angle κr");
         auto letter = f.string("holder", "an ISO 5608 holder letter");
-        auto fromLetter = letter && letter->size() == 1 ? holderEnteringAngleDeg((*letter)[0]) : std::nullopt;
+        auto fromLetter =
+            letter && letter->size() == 1 ? holderEnteringAngleDeg((*letter)[0]) : std::nullopt;
         if (fromLetter)
             f.require(std::fabs(given - degToRad(*fromLetter)) < 1e-9, "entering_angle",
                       "expected " + fmtNum(*fromLetter) + " degrees as holder " + *letter +
@@ -139,13 +149,15 @@ Tool readTool(const Fields& root) {
                   "expected more than 0 and less than 180 degrees");
         tool.enteringAngleRad = *k;
     } else {
-        f.missing("entering_angle", "the holder's entering angle κr in degrees (or holder = a letter)");
+        f.missing("entering_angle",
+                  "the holder's entering angle κr in degrees (or holder = a letter)");
     }
     if (!round) {
         const std::string key = f.has("holder") ? "holder" : "entering_angle";
         f.require(tool.enteringAngleRad + tool.includedAngleRad < degToRad(180) - 1e-9, key,
                   "expected an entering angle and insert angle that add up to less than 180 "
-                  "degrees (here " + fmtNum(radToDeg(tool.enteringAngleRad + tool.includedAngleRad)) +
+                  "degrees (here " +
+                      fmtNum(radToDeg(tool.enteringAngleRad + tool.includedAngleRad)) +
                       "): the trailing edge would face the work");
     }
 
@@ -159,7 +171,8 @@ Tool readTool(const Fields& root) {
 
 Setup readSetup(const Fields& root) {
     const toml::table* t = root.subtable("setup");
-    if (!t) root.missing("setup", "a [setup] table with [setup.compound] and [setup.cross]");
+    if (!t)
+        root.missing("setup", "a [setup] table with [setup.compound] and [setup.cross]");
     Fields f(*t, "setup", root.context(), {"compound", "cross", "saddle", "spindle_rpm"});
     const bool inch = root.context().units == Units::Inch;
     Setup s;
@@ -170,36 +183,46 @@ Setup readSetup(const Fields& root) {
     }
 
     const toml::table* ct = f.subtable("compound");
-    if (!ct) f.missing("compound", "a [setup.compound] table: the compound's angle and dial");
-    Fields c(*ct, "setup.compound", root.context(),
-             {"angle", "scale", "error", "advance", "per_division", "divisions", "backlash", "travel"});
+    if (!ct)
+        f.missing("compound", "a [setup.compound] table: the compound's angle and dial");
+    Fields c(
+        *ct, "setup.compound", root.context(),
+        {"angle", "scale", "error", "advance", "per_division", "divisions", "backlash", "travel"});
     s.compoundReadingRad = c.requiredAngle("angle", "the compound angle as read on its scale");
     auto scale = c.choice("scale", {"axis", "cross_slide"});
-    s.compoundScale = scale && *scale == "cross_slide" ? CompoundScale::FromCrossSlide : CompoundScale::FromAxis;
+    s.compoundScale =
+        scale && *scale == "cross_slide" ? CompoundScale::FromCrossSlide : CompoundScale::FromAxis;
     if (s.compoundScale == CompoundScale::FromAxis)
-        c.require(s.compoundReadingRad >= 0 && s.compoundReadingRad < degToRad(90), "angle",
-                  "expected 0 or more and less than 90 degrees on a scale read from the spindle axis");
+        c.require(
+            s.compoundReadingRad >= 0 && s.compoundReadingRad < degToRad(90), "angle",
+            "expected 0 or more and less than 90 degrees on a scale read from the spindle axis");
     else
-        c.require(s.compoundReadingRad > 0 && s.compoundReadingRad <= degToRad(90), "angle",
-                  "expected more than 0 and at most 90 degrees on a scale read from the cross-slide");
+        c.require(
+            s.compoundReadingRad > 0 && s.compoundReadingRad <= degToRad(90), "angle",
+            "expected more than 0 and at most 90 degrees on a scale read from the cross-slide");
     s.compoundErrorRad = c.angle("error", "true angle minus intended").value_or(0.0);
-    c.require(std::fabs(s.compoundErrorRad) < degToRad(5), "error", "expected less than 5 degrees either way");
+    c.require(std::fabs(s.compoundErrorRad) < degToRad(5), "error",
+              "expected less than 5 degrees either way");
     const double trueAngle = s.compoundAxisAngleRad();
     c.require(trueAngle >= 0 && trueAngle < degToRad(90), "error",
               "expected a true compound angle from 0 to less than 90 degrees (here " +
                   fmtNum(radToDeg(trueAngle)) + ")");
     auto adv = c.choice("advance", {"chuck", "tailstock"});
-    if (!adv) c.missing("advance", "\"chuck\" or \"tailstock\": where the tool goes as the reading grows");
+    if (!adv)
+        c.missing("advance",
+                  "\"chuck\" or \"tailstock\": where the tool goes as the reading grows");
     s.compoundAdvanceToward = *adv == "chuck" ? Widens::TowardChuck : Widens::TowardTailstock;
     readSlide(c, s.compound, inch ? 0.001 * kMmPerInch : 0.02, inch ? 4 * kMmPerInch : 100);
 
     const toml::table* xt = f.subtable("cross");
-    if (!xt) f.missing("cross", "a [setup.cross] table: the cross-slide dial");
+    if (!xt)
+        f.missing("cross", "a [setup.cross] table: the cross-slide dial");
     Fields x(*xt, "setup.cross", root.context(),
              {"dial", "zero_diameter", "per_division", "divisions", "backlash", "travel"});
     auto dial = x.choice("dial", {"diameter", "radius"});
     s.crossDial = dial && *dial == "radius" ? DialMode::Radius : DialMode::Diameter;
-    s.zeroDiameterMm = x.requiredLength("zero_diameter", "the diameter at which the cross-slide reads 0");
+    s.zeroDiameterMm =
+        x.requiredLength("zero_diameter", "the diameter at which the cross-slide reads 0");
     requirePositive(x, "zero_diameter", s.zeroDiameterMm, true);
     readSlide(x, s.cross, inch ? 0.001 * kMmPerInch : 0.02, inch ? 6 * kMmPerInch : 150);
 
@@ -216,11 +239,13 @@ Setup readSetup(const Fields& root) {
 Plan readPlan(const Fields& root) {
     Plan plan;
     const toml::table* t = root.subtable("plan");
-    if (!t) return plan;
+    if (!t)
+        return plan;
     Fields f(*t, "plan", root.context(), {"pass"});
     plan.where = f.where();
     const toml::array* arr = f.array("pass", "[[plan.pass]] tables");
-    if (!arr) return plan;
+    if (!arr)
+        return plan;
     const Units u = root.context().units;
     int index = 0;
     for (const toml::node& n : *arr) {
@@ -233,7 +258,8 @@ Plan readPlan(const Fields& root) {
         Fields any(*pt, path, root.context(),
                    {"kind", "note", "cross", "compound", "saddle", "from", "to", "feed", "points"});
         auto kind = any.choice("kind", {"compound", "saddle", "cross", "path"});
-        if (!kind) any.missing("kind", "\"compound\", \"saddle\", \"cross\" or \"path\"");
+        if (!kind)
+            any.missing("kind", "\"compound\", \"saddle\", \"cross\" or \"path\"");
         Pass p;
         p.where = any.where();
         p.note = any.string("note", "what the person does").value_or("");
@@ -241,14 +267,19 @@ Plan readPlan(const Fields& root) {
             Fields pf(*pt, path, root.context(), {"kind", "note", "points", "feed"});
             p.kind = PassKind::Path;
             const toml::array* pts = pf.array("points", "[[z, diameter], ...]");
-            if (!pts) pf.missing("points", "the imaginary tip's points [[z, diameter], ...]");
-            pf.require(pts->size() >= 2, "points", "expected at least two points [[z, diameter], ...]");
+            if (!pts)
+                pf.missing("points", "the imaginary tip's points [[z, diameter], ...]");
+            pf.require(pts->size() >= 2, "points",
+                       "expected at least two points [[z, diameter], ...]");
             for (const toml::node& pn : *pts) {
                 const toml::array* pair = pn.as_array();
                 auto num = [](const toml::node* e) -> std::optional<double> {
-                    if (!e) return std::nullopt;
-                    if (auto i = e->as_integer()) return static_cast<double>(i->get());
-                    if (auto d = e->as_floating_point()) return d->get();
+                    if (!e)
+                        return std::nullopt;
+                    if (auto i = e->as_integer())
+                        return static_cast<double>(i->get());
+                    if (auto d = e->as_floating_point())
+                        return d->get();
                     return std::nullopt;
                 };
                 std::optional<double> z, d;
@@ -274,8 +305,8 @@ Plan readPlan(const Fields& root) {
                                               : kCrossPassKeys;
         for (const char* moving : {"compound", "saddle", "cross"})
             if (*kind == moving && pt->get(moving))
-                any.fail(moving, std::string("expected no fixed ") + moving + " reading in a " + moving +
-                                     " pass: the " + moving + " moves, give from and to");
+                any.fail(moving, std::string("expected no fixed ") + moving + " reading in a " +
+                                     moving + " pass: the " + moving + " moves, give from and to");
         Fields pf(*pt, path, root.context(), keys);
         p.kind = *kind == "compound" ? PassKind::Compound
                  : *kind == "saddle" ? PassKind::Saddle
@@ -285,7 +316,8 @@ Plan readPlan(const Fields& root) {
         p.saddleMm = pf.length("saddle", "the saddle reading").value_or(0.0);
         p.fromMm = pf.requiredLength("from", "the moving slide's reading at the start");
         p.toMm = pf.requiredLength("to", "the moving slide's reading at the end");
-        pf.require(std::fabs(p.toMm - p.fromMm) > 1e-9, "to", "expected a reading other than from: the pass must move");
+        pf.require(std::fabs(p.toMm - p.fromMm) > 1e-9, "to",
+                   "expected a reading other than from: the pass must move");
         p.feedMmPerRev = pf.requiredLength("feed", "feed per revolution");
         requirePositive(pf, "feed", p.feedMmPerRev);
         plan.passes.push_back(std::move(p));

@@ -11,21 +11,37 @@ namespace swarf::io::detail {
 
 namespace {
 
-const std::vector<std::string_view> kAnyFeatureKeys = {
-    "kind", "name", "from", "to", "diameter", "gauge_plane", "gauge_diameter", "half_angle",
-    "included_angle", "ratio", "taper_per_foot", "second_plane", "second_diameter", "standard",
-    "widens_toward", "at", "length", "angle", "tolerance", "angle_tolerance"};
-const std::vector<std::string_view> kCylinderKeys = {"kind", "name", "from", "to",
-                                                                    "diameter", "tolerance"};
+const std::vector<std::string_view> kAnyFeatureKeys = {"kind",
+                                                       "name",
+                                                       "from",
+                                                       "to",
+                                                       "diameter",
+                                                       "gauge_plane",
+                                                       "gauge_diameter",
+                                                       "half_angle",
+                                                       "included_angle",
+                                                       "ratio",
+                                                       "taper_per_foot",
+                                                       "second_plane",
+                                                       "second_diameter",
+                                                       "standard",
+                                                       "widens_toward",
+                                                       "at",
+                                                       "length",
+                                                       "angle",
+                                                       "tolerance",
+                                                       "angle_tolerance"};
+const std::vector<std::string_view> kCylinderKeys = {"kind", "name",     "from",
+                                                     "to",   "diameter", "tolerance"};
 const std::vector<std::string_view> kConeKeys = {
-    "kind", "name", "from", "to", "gauge_plane", "gauge_diameter", "half_angle",
-    "included_angle", "ratio", "taper_per_foot", "second_plane", "second_diameter", "standard",
-    "widens_toward", "tolerance", "angle_tolerance"};
+    "kind",        "name",           "from",         "to",
+    "gauge_plane", "gauge_diameter", "half_angle",   "included_angle",
+    "ratio",       "taper_per_foot", "second_plane", "second_diameter",
+    "standard",    "widens_toward",  "tolerance",    "angle_tolerance"};
 const std::vector<std::string_view> kChamferKeys = {
-    "kind", "name", "at", "length", "angle", "diameter", "widens_toward", "tolerance",
-    "angle_tolerance"};
-const std::vector<std::string_view> kFaceKeys = {"kind", "name", "at", "diameter",
-                                                                "tolerance"};
+    "kind",     "name",          "at",        "length",         "angle",
+    "diameter", "widens_toward", "tolerance", "angle_tolerance"};
+const std::vector<std::string_view> kFaceKeys = {"kind", "name", "at", "diameter", "tolerance"};
 
 std::string fmtLen(double mm, Units u) {
     char buf[64];
@@ -38,10 +54,13 @@ void rejectOtherKindKeys(const toml::table& t, const std::string& path, const Re
                          const std::string& kind, const std::vector<std::string_view>& mine) {
     for (auto&& [k, v] : t) {
         bool ok = false;
-        for (auto m : mine) ok = ok || m == k.str();
-        if (ok) continue;
+        for (auto m : mine)
+            ok = ok || m == k.str();
+        if (ok)
+            continue;
         std::string list;
-        for (auto m : mine) list += (list.empty() ? "" : ", ") + std::string(m);
+        for (auto m : mine)
+            list += (list.empty() ? "" : ", ") + std::string(m);
         throw InputError(locOf(k.source(), ctx.file), path + "." + std::string(k.str()), "",
                          "not a key of a " + kind + ": expected one of " + list);
     }
@@ -69,6 +88,7 @@ void readAngleTolerance(const Fields& f, Feature& feat, Iso2768 cls, double shor
         requirePositive(f, "angle_tolerance", *a);
         f.require(*a < degToRad(10), "angle_tolerance", "expected less than 10 degrees");
         feat.angleToleranceRad = *a;
+        feat.angleToleranceFromClass = false;
     } else {
         feat.angleToleranceRad = iso2768AngularToleranceRad(cls, shorterLegMm);
     }
@@ -86,7 +106,8 @@ void readExtent(const Fields& f, Feature& feat) {
 
 Widens readWidens(const Fields& f) {
     auto w = f.choice("widens_toward", {"chuck", "tailstock"});
-    if (!w) f.missing("widens_toward", "\"chuck\" or \"tailstock\": which way the diameter grows");
+    if (!w)
+        f.missing("widens_toward", "\"chuck\" or \"tailstock\": which way the diameter grows");
     return *w == "chuck" ? Widens::TowardChuck : Widens::TowardTailstock;
 }
 
@@ -110,18 +131,21 @@ void readCone(const Fields& f, Feature& feat, Iso2768 cls) {
     const Units u = f.context().units;
     readExtent(f, feat);
     Cone& cone = feat.cone;
-    cone.gaugeZMm = f.requiredLength("gauge_plane", "the drawing's gauge plane, from the datum face");
+    cone.gaugeZMm =
+        f.requiredLength("gauge_plane", "the drawing's gauge plane, from the datum face");
 
     // Exactly one way to give the taper.
-    const char* forms[] = {"half_angle", "included_angle", "ratio", "taper_per_foot",
+    const char* forms[] = {"half_angle",   "included_angle",  "ratio",   "taper_per_foot",
                            "second_plane", "second_diameter", "standard"};
     std::string first;
     for (const char* key : forms) {
-        if (!f.has(key)) continue;
+        if (!f.has(key))
+            continue;
         const bool pairOfFirst = first == "second_plane" && std::string(key) == "second_diameter";
         if (!first.empty() && !pairOfFirst)
             f.fail(key, "expected only one way to give the taper; it is already given by " + first);
-        if (first.empty()) first = key;
+        if (first.empty())
+            first = key;
     }
     if (first.empty())
         f.missing("half_angle", "one way to give the taper: half_angle, included_angle, ratio, "
@@ -131,7 +155,9 @@ void readCone(const Fields& f, Feature& feat, Iso2768 cls) {
     if (first == "standard") {
         const std::string name = *f.string("standard", "a standard taper name");
         auto st = lookupStandardTaper(name);
-        if (!st) f.fail("standard", "expected a standard taper: " + suggestion(name, standardTaperNames()));
+        if (!st)
+            f.fail("standard",
+                   "expected a standard taper: " + suggestion(name, standardTaperNames()));
         cone.halfAngleRad = halfAngleFromTaperRate(st->taperRate);
         standardGauge = st->gaugeDiameterMm;
         feat.coneGivenAs = "standard " + st->name;
@@ -150,7 +176,8 @@ void readCone(const Fields& f, Feature& feat, Iso2768 cls) {
 
     if (first == "half_angle") {
         const double a = f.requiredAngle("half_angle", "half angle from the axis");
-        f.require(a > 0 && a < degToRad(90), "half_angle", "expected more than 0 and less than 90 degrees");
+        f.require(a > 0 && a < degToRad(90), "half_angle",
+                  "expected more than 0 and less than 90 degrees");
         cone.halfAngleRad = a;
         feat.coneGivenAs = "half angle";
     } else if (first == "included_angle") {
@@ -173,8 +200,9 @@ void readCone(const Fields& f, Feature& feat, Iso2768 cls) {
         requirePositive(f, "second_diameter", d2);
         f.require(std::fabs(z2 - cone.gaugeZMm) > 1e-9, "second_plane",
                   "expected a plane other than the gauge plane");
-        f.require(std::fabs(d2 - cone.gaugeDiameterMm) > 1e-9, "second_diameter",
-                  "expected a diameter other than the gauge diameter (equal diameters make a cylinder)");
+        f.require(
+            std::fabs(d2 - cone.gaugeDiameterMm) > 1e-9, "second_diameter",
+            "expected a diameter other than the gauge diameter (equal diameters make a cylinder)");
         cone.halfAngleRad = halfAngleFromTwoDiameters(cone.gaugeZMm, cone.gaugeDiameterMm, z2, d2);
         const bool growsWithZ = (d2 > cone.gaugeDiameterMm) == (z2 > cone.gaugeZMm);
         cone.widens = growsWithZ ? Widens::TowardChuck : Widens::TowardTailstock;
@@ -185,16 +213,18 @@ void readCone(const Fields& f, Feature& feat, Iso2768 cls) {
     }
     if (first == "second_plane") {
         if (f.has("widens_toward") && readWidens(f) != cone.widens)
-            f.fail("widens_toward", std::string("expected \"") +
-                                        (cone.widens == Widens::TowardChuck ? "chuck" : "tailstock") +
-                                        "\", as the two diameters say (or leave it out)");
+            f.fail("widens_toward",
+                   std::string("expected \"") +
+                       (cone.widens == Widens::TowardChuck ? "chuck" : "tailstock") +
+                       "\", as the two diameters say (or leave it out)");
     } else {
         cone.widens = readWidens(f);
     }
 
     f.require(cone.gaugeZMm >= feat.zStartMm - 1e-9 && cone.gaugeZMm <= feat.zEndMm + 1e-9,
-              "gauge_plane", "expected a plane within the cone, from " + fmtLen(feat.zStartMm, u) +
-                                 " to " + fmtLen(feat.zEndMm, u));
+              "gauge_plane",
+              "expected a plane within the cone, from " + fmtLen(feat.zStartMm, u) + " to " +
+                  fmtLen(feat.zEndMm, u));
     for (const char* key : {"from", "to"}) {
         const double z = std::string(key) == "from" ? feat.zStartMm : feat.zEndMm;
         f.require(cone.diameterAt(z) > 0, key,
@@ -212,13 +242,16 @@ void readChamfer(const Fields& f, Feature& feat, Iso2768 cls) {
     const double len = f.requiredLength("length", "the chamfer's axial length");
     requirePositive(f, "length", len);
     const double angle = f.angle("angle", "angle from the axis").value_or(degToRad(45));
-    f.require(angle > 0 && angle < degToRad(90), "angle", "expected more than 0 and less than 90 degrees");
+    f.require(angle > 0 && angle < degToRad(90), "angle",
+              "expected more than 0 and less than 90 degrees");
     const double d = f.requiredLength("diameter", "the diameter of the edge the chamfer breaks");
     requirePositive(f, "diameter", d);
     Widens w = Widens::TowardChuck;
-    if (f.has("widens_toward")) w = readWidens(f);
+    if (f.has("widens_toward"))
+        w = readWidens(f);
     const double smallD = d - 2 * len * std::tan(angle);
-    f.require(smallD > 0, "length", "expected a chamfer that leaves a diameter (it would reach the axis)");
+    f.require(smallD > 0, "length",
+              "expected a chamfer that leaves a diameter (it would reach the axis)");
     // The chamfer starts at `at` (its small end) and grows over `length` in its direction.
     feat.zStartMm = w == Widens::TowardChuck ? at : at - len;
     feat.zEndMm = w == Widens::TowardChuck ? at + len : at;
@@ -234,9 +267,10 @@ Feature readFeature(const toml::table& t, int index, const ReadContext& ctx, Iso
     const std::string path = "part.feature[" + std::to_string(index) + "]";
     Fields any(t, path, ctx, kAnyFeatureKeys);
     auto kind = any.choice("kind", {"cylinder", "cone", "chamfer", "face"});
-    if (!kind) any.missing("kind", "\"cylinder\", \"cone\", \"chamfer\" or \"face\"");
-    const auto keys = *kind == "cylinder" ? kCylinderKeys
-                      : *kind == "cone"   ? kConeKeys
+    if (!kind)
+        any.missing("kind", "\"cylinder\", \"cone\", \"chamfer\" or \"face\"");
+    const auto keys = *kind == "cylinder"  ? kCylinderKeys
+                      : *kind == "cone"    ? kConeKeys
                       : *kind == "chamfer" ? kChamferKeys
                                            : kFaceKeys;
     rejectOtherKindKeys(t, path, ctx, *kind, keys);
@@ -259,8 +293,10 @@ Feature readFeature(const toml::table& t, int index, const ReadContext& ctx, Iso
         readChamfer(f, feat, cls);
     } else {
         feat.kind = FeatureKind::Face;
-        feat.zStartMm = feat.zEndMm = f.requiredLength("at", "the face's position from the datum face");
-        f.require(feat.zStartMm >= 0, "at", "expected 0 or more: positions are measured from the datum face");
+        feat.zStartMm = feat.zEndMm =
+            f.requiredLength("at", "the face's position from the datum face");
+        f.require(feat.zStartMm >= 0, "at",
+                  "expected 0 or more: positions are measured from the datum face");
         feat.diameterMm = f.requiredLength("diameter", "the face's outer diameter");
         requirePositive(f, "diameter", feat.diameterMm);
         readTolerance(f, feat, cls, feat.diameterMm);
@@ -272,13 +308,16 @@ Feature readFeature(const toml::table& t, int index, const ReadContext& ctx, Iso
 
 Part readPart(const Fields& root, const Stock& stock) {
     const toml::table* t = root.subtable("part");
-    if (!t) root.missing("part", "a [part] table with [[part.feature]] entries");
+    if (!t)
+        root.missing("part", "a [part] table with [[part.feature]] entries");
     Fields f(*t, "part", root.context(), {"tolerance_class", "feature"});
     Part part;
     part.where = f.where();
-    if (auto cls = f.choice("tolerance_class", {"f", "m", "c", "v"})) part.toleranceClass = *parseIso2768(*cls);
+    if (auto cls = f.choice("tolerance_class", {"f", "m", "c", "v"}))
+        part.toleranceClass = *parseIso2768(*cls);
     const toml::array* arr = f.array("feature", "[[part.feature]] tables");
-    if (!arr || arr->empty()) f.missing("feature", "at least one [[part.feature]]");
+    if (!arr || arr->empty())
+        f.missing("feature", "at least one [[part.feature]]");
     int index = 0;
     for (const toml::node& n : *arr) {
         ++index;
@@ -288,23 +327,30 @@ Part readPart(const Fields& root, const Stock& stock) {
                              "part.feature[" + std::to_string(index) + "]", valueText(n),
                              "expected a table: write features as [[part.feature]]");
         Feature feat = readFeature(*ft, index, root.context(), part.toleranceClass);
-        Fields ff(*ft, "part.feature[" + std::to_string(index) + "]", root.context(), kAnyFeatureKeys);
+        Fields ff(*ft, "part.feature[" + std::to_string(index) + "]", root.context(),
+                  kAnyFeatureKeys);
         const Units u = root.context().units;
         // Along the axis in order, each starting where the one before ends or later.
         if (!part.features.empty()) {
             const Feature& prev = part.features.back();
-            ff.require(feat.zStartMm >= prev.zEndMm - 1e-9, feat.kind == FeatureKind::Face || feat.kind == FeatureKind::Chamfer ? "at" : "from",
+            ff.require(feat.zStartMm >= prev.zEndMm - 1e-9,
+                       feat.kind == FeatureKind::Face || feat.kind == FeatureKind::Chamfer ? "at"
+                                                                                           : "from",
                        "expected features in order from the datum face, not overlapping: the one "
-                       "before ends at " + fmtLen(prev.zEndMm, u));
+                       "before ends at " +
+                           fmtLen(prev.zEndMm, u));
         }
         // Outside the jaws, and no larger than the bar.
-        const char* endKey = feat.kind == FeatureKind::Face || feat.kind == FeatureKind::Chamfer ? "at" : "to";
+        const char* endKey =
+            feat.kind == FeatureKind::Face || feat.kind == FeatureKind::Chamfer ? "at" : "to";
         ff.require(feat.zEndMm <= stock.jawZMm() + 1e-9, endKey,
                    "expected the part to end outside the jaws, at most " +
-                       fmtLen(stock.jawZMm(), u) + " from the datum face (stick-out less face allowance)");
+                       fmtLen(stock.jawZMm(), u) +
+                       " from the datum face (stick-out less face allowance)");
         double largest = feat.diameterMm;
         if (feat.kind == FeatureKind::Cone)
-            largest = std::max(feat.cone.diameterAt(feat.zStartMm), feat.cone.diameterAt(feat.zEndMm));
+            largest =
+                std::max(feat.cone.diameterAt(feat.zStartMm), feat.cone.diameterAt(feat.zEndMm));
         const char* sizeKey = feat.kind == FeatureKind::Cone
                                   ? (feat.cone.widens == Widens::TowardChuck ? "to" : "from")
                                   : "diameter";

@@ -27,7 +27,8 @@ using detail::Fields;
 
 Stock readStock(const Fields& root) {
     const toml::table* t = root.subtable("stock");
-    if (!t) root.missing("stock", "a [stock] table: the bar");
+    if (!t)
+        root.missing("stock", "a [stock] table: the bar");
     Fields f(*t, "stock", root.context(),
              {"diameter", "length", "stick_out", "face_allowance", "material", "tailstock"});
     Stock s;
@@ -43,7 +44,8 @@ Stock readStock(const Fields& root) {
                   f.unit() + "): the bar cannot stick out further than it is long");
     s.faceAllowanceMm = f.length("face_allowance", "stock beyond the datum face").value_or(0.0);
     detail::requirePositive(f, "face_allowance", s.faceAllowanceMm, true);
-    f.require(s.faceAllowanceMm < s.stickOutMm, "face_allowance", "expected less than the stick-out");
+    f.require(s.faceAllowanceMm < s.stickOutMm, "face_allowance",
+              "expected less than the stick-out");
     s.material = f.string("material", "free text").value_or("");
     s.tailstockSupport = f.boolean("tailstock").value_or(false);
     return s;
@@ -52,19 +54,24 @@ Stock readStock(const Fields& root) {
 PlanningOptions readPlanning(const Fields& root) {
     PlanningOptions p;
     const toml::table* t = root.subtable("planning");
-    if (!t) return p;
+    if (!t)
+        return p;
     Fields f(*t, "planning", root.context(),
              {"max_depth", "finish_allowance", "rough_feed", "finish_feed", "placing", "roughing",
               "roll_diameter"});
     p.where = f.where();
     p.maxDepthMm = f.length("max_depth", "largest depth per roughing pass").value_or(p.maxDepthMm);
     detail::requirePositive(f, "max_depth", p.maxDepthMm);
-    p.finishAllowanceMm = f.length("finish_allowance", "left for finishing").value_or(p.finishAllowanceMm);
+    p.finishAllowanceMm =
+        f.length("finish_allowance", "left for finishing").value_or(p.finishAllowanceMm);
     detail::requirePositive(f, "finish_allowance", p.finishAllowanceMm, true);
-    f.require(p.finishAllowanceMm < p.maxDepthMm, "finish_allowance", "expected less than max_depth");
-    p.roughFeedMmPerRev = f.length("rough_feed", "roughing feed per rev").value_or(p.roughFeedMmPerRev);
+    f.require(p.finishAllowanceMm < p.maxDepthMm, "finish_allowance",
+              "expected less than max_depth");
+    p.roughFeedMmPerRev =
+        f.length("rough_feed", "roughing feed per rev").value_or(p.roughFeedMmPerRev);
     detail::requirePositive(f, "rough_feed", p.roughFeedMmPerRev);
-    p.finishFeedMmPerRev = f.length("finish_feed", "finishing feed per rev").value_or(p.finishFeedMmPerRev);
+    p.finishFeedMmPerRev =
+        f.length("finish_feed", "finishing feed per rev").value_or(p.finishFeedMmPerRev);
     detail::requirePositive(f, "finish_feed", p.finishFeedMmPerRev);
     if (auto s = f.choice("placing", {"zero_on_diameter", "reference_shoulder"}))
         p.placing = *s == "zero_on_diameter" ? PlanningOptions::Placing::ZeroOnDiameter
@@ -72,7 +79,8 @@ PlanningOptions readPlanning(const Fields& root) {
     if (auto s = f.choice("roughing", {"compound", "saddle_steps"}))
         p.roughing = *s == "compound" ? PlanningOptions::Roughing::Compound
                                       : PlanningOptions::Roughing::SaddleSteps;
-    p.rollDiameterMm = f.length("roll_diameter", "roll diameter for over-rolls checks").value_or(0.0);
+    p.rollDiameterMm =
+        f.length("roll_diameter", "roll diameter for over-rolls checks").value_or(0.0);
     detail::requirePositive(f, "roll_diameter", p.rollDiameterMm, true);
     return p;
 }
@@ -80,7 +88,8 @@ PlanningOptions readPlanning(const Fields& root) {
 SimOptions readSim(const Fields& root) {
     SimOptions s;
     const toml::table* t = root.subtable("sim");
-    if (!t) return s;
+    if (!t)
+        return s;
     Fields f(*t, "sim", root.context(), {"profile_step", "angle_samples"});
     s.profileStepMm = f.length("profile_step", "axial sample spacing").value_or(s.profileStepMm);
     f.require(s.profileStepMm >= 1e-4 && s.profileStepMm <= 1.0, "profile_step",
@@ -95,23 +104,26 @@ SimOptions readSim(const Fields& root) {
 Expect readExpect(const Fields& root) {
     Expect e;
     const toml::table* t = root.subtable("expect");
-    if (!t) return e;
+    if (!t)
+        return e;
     Fields f(*t, "expect", root.context(), {"verdict", "findings", "no_findings"});
     e.where = f.where();
     if (auto v = f.choice("verdict", {"in_tolerance", "out_of_tolerance"}))
         e.withinTolerance = *v == "in_tolerance";
-    static const std::vector<std::string> kinds = {"left_on", "overcut", "rubbing", "jaw_crash",
-                                                   "past_stock", "compound_travel",
+    static const std::vector<std::string> kinds = {"left_on",      "overcut",    "rubbing",
+                                                   "jaw_crash",    "past_stock", "compound_travel",
                                                    "depth_of_cut", "air_cut"};
     if (const toml::array* a = f.array("findings", "finding kinds")) {
         for (const toml::node& n : *a) {
             const auto* s = n.as_string();
             bool ok = false;
-            for (const auto& k : kinds) ok = ok || (s && s->get() == k);
+            for (const auto& k : kinds)
+                ok = ok || (s && s->get() == k);
             if (!ok)
                 throw InputError(detail::locOf(n.source(), root.context().file), "expect.findings",
                                  detail::valueText(n),
-                                 "expected a finding kind: " + suggestion(s ? s->get() : "", kinds));
+                                 "expected a finding kind: " +
+                                     suggestion(s ? s->get() : "", kinds));
             e.findings.push_back(s->get());
         }
     }
@@ -124,18 +136,23 @@ Expect readExpect(const Fields& root) {
 std::vector<double> readGaugeBlocks(const Fields& root) {
     std::vector<double> sizes;
     const toml::table* t = root.subtable("gauge_blocks");
-    if (!t) return sizes;
+    if (!t)
+        return sizes;
     Fields f(*t, "gauge_blocks", root.context(), {"sizes"});
     const toml::array* a = f.array("sizes", "block sizes");
-    if (!a) f.missing("sizes", "a list of gauge block sizes in " + f.unit());
+    if (!a)
+        f.missing("sizes", "a list of gauge block sizes in " + f.unit());
     f.require(!a->empty(), "sizes", "expected at least one block size");
     for (const toml::node& n : *a) {
         std::optional<double> v;
-        if (auto i = n.as_integer()) v = static_cast<double>(i->get());
-        if (auto d = n.as_floating_point()) v = d->get();
+        if (auto i = n.as_integer())
+            v = static_cast<double>(i->get());
+        if (auto d = n.as_floating_point())
+            v = d->get();
         if (!v || !(*v > 0))
             throw InputError(detail::locOf(n.source(), root.context().file), "gauge_blocks.sizes",
-                             detail::valueText(n), "expected a block size, a length more than 0 in " + f.unit());
+                             detail::valueText(n),
+                             "expected a block size, a length more than 0 in " + f.unit());
         sizes.push_back(toMm(*v, root.context().units));
     }
     return sizes;
@@ -158,10 +175,12 @@ Scene readSceneText(const std::string& text, const std::string& fileName) {
                  "planning", "sim", "expect", "gauge_blocks"});
     Scene scene;
     scene.file = fileName;
-    if (auto u = root.choice("units", {"mm", "inch"})) ctx.units = *u == "inch" ? Units::Inch : Units::Mm;
+    if (auto u = root.choice("units", {"mm", "inch"}))
+        ctx.units = *u == "inch" ? Units::Inch : Units::Mm;
     scene.units = ctx.units;
     std::string base = fileName;
-    if (auto slash = base.find_last_of('/'); slash != std::string::npos) base = base.substr(slash + 1);
+    if (auto slash = base.find_last_of('/'); slash != std::string::npos)
+        base = base.substr(slash + 1);
     scene.name = root.string("name", "a title").value_or(base);
     scene.description = root.string("description", "what the scene is for").value_or("");
     scene.stock = readStock(root);
@@ -179,7 +198,8 @@ Scene readSceneText(const std::string& text, const std::string& fileName) {
 
 Scene readScene(const std::string& path) {
     std::ifstream in(path, std::ios::binary);
-    if (!in) throw InputError({path, 0, 0}, "", "", "cannot open the scene file");
+    if (!in)
+        throw InputError({path, 0, 0}, "", "", "cannot open the scene file");
     std::ostringstream ss;
     ss << in.rdbuf();
     return readSceneText(ss.str(), path);

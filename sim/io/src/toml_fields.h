@@ -54,7 +54,8 @@ class Fields {
     [[noreturn]] void missing(std::string_view key, const std::string& what) const;
     /// Throws if ok is false.
     void require(bool ok, std::string_view key, const std::string& expected) const {
-        if (!ok) fail(key, expected);
+        if (!ok)
+            fail(key, expected);
     }
 
     /// A number (integer or float); wrong type throws. `what` describes it for messages.

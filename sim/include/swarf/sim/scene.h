@@ -53,6 +53,7 @@ struct Feature {
     double toleranceMm = 0;    ///< ± on diameter (cylinder diameter, cone gauge diameter), mm
     double angleToleranceRad = 0;  ///< ± on the half angle (cone, chamfer), rad
     bool toleranceFromClass = true;  ///< true if taken from the ISO 2768 class
+    bool angleToleranceFromClass = true;  ///< true if angleToleranceRad is from the ISO 2768 class
     SourceLoc where;
 
     /// Nominal radius at z (mm) for Cylinder, Cone, Chamfer; precondition z in [zStart, zEnd].

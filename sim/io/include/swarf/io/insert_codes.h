@@ -17,10 +17,10 @@ std::optional<double> holderEnteringAngleDeg(char letter);
 
 /// What an ISO 1832 metric insert designation ("DCMT 11T304", "CNMG120408") says.
 struct InsertCode {
-    char shape = 0;            ///< shape letter (first character)
-    double edgeLengthMm = 0;   ///< from the size code (whole mm of the cutting edge length)
-    double thicknessMm = 0;    ///< from the thickness code (02, T2, 03, T3, 04, 05, 06, 07, 09)
-    double noseRadiusMm = 0;   ///< from the corner radius code (04 → 0.4 mm; 00 sharp; M0 round)
+    char shape = 0;          ///< shape letter (first character)
+    double edgeLengthMm = 0; ///< from the size code (whole mm of the cutting edge length)
+    double thicknessMm = 0;  ///< from the thickness code (02, T2, 03, T3, 04, 05, 06, 07, 09)
+    double noseRadiusMm = 0; ///< from the corner radius code (04 → 0.4 mm; 00 sharp; M0 round)
 };
 
 /// Parses an ISO 1832 metric designation: four letters, then size, thickness and corner radius
