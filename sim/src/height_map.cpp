@@ -104,12 +104,26 @@ HeightMap buildHeightMap(const Scene& scene, const ToolOutline& outline,
     map.z0Mm = map.zMm.empty() ? g.z0Mm : map.zMm.front();
     map.radiusMm.assign(static_cast<std::size_t>(map.nz) * map.nPhi, static_cast<float>(stockR));
 
-    std::vector<double> phi(map.nPhi);
-    for (int j = 0; j < map.nPhi; ++j) phi[j] = 2.0 * kPi * j / map.nPhi;
+    // Per move, what the inner loop needs: unit direction, length, support point's z.
+    struct Mark {
+        Eigen::Vector2d c0, dir;
+        double len = 0, f = 0, supportZ = 0;
+        bool vertical = true;
+    };
+    std::vector<Mark> mk(count);
+    for (std::size_t k = 0; k < count; ++k) {
+        const Eigen::Vector2d d = ms[k].centreTo - ms[k].centreFrom;
+        mk[k].c0 = ms[k].centreFrom;
+        mk[k].len = d.norm();
+        mk[k].dir = mk[k].len > 0 ? Eigen::Vector2d(d / mk[k].len) : Eigen::Vector2d(1, 0);
+        mk[k].f = moves[k].feedMmPerRev;
+        mk[k].supportZ = ms[k].support.x();
+        mk[k].vertical = std::abs(d.x()) <= 1e-12;
+    }
 
     auto work = [&](std::size_t a, std::size_t b, bool report) {
         std::vector<std::size_t> relevant;
-        std::vector<double> env(count);
+        std::vector<double> env(count), best(map.nPhi);
         for (std::size_t i = a; i < b; ++i) {
             const double z = map.zMm[i];
             double finalR = stockR;
@@ -122,13 +136,41 @@ HeightMap buildHeightMap(const Scene& scene, const ToolOutline& outline,
             relevant.clear();
             for (std::size_t k = 0; k < count; ++k)
                 if (env[k] <= finalR + cusp) relevant.push_back(k);
-            float* row = &map.radiusMm[i * map.nPhi];
-            for (int j = 0; j < map.nPhi; ++j) {
-                double R = stockR;
-                for (std::size_t k : relevant)
-                    R = std::min(R, markedRadiusMm(outline, ms[k], moves[k].feedMmPerRev, h, z, phi[j]));
-                row[j] = static_cast<float>(R);
+            std::fill(best.begin(), best.end(), kInf);  // lowest tool x per φ
+            for (std::size_t k : relevant) {
+                const Mark& m = mk[k];
+                if (m.len <= 1e-12 || m.f <= 0) {
+                    // A null move or no feed: the continuous envelope.
+                    const double x = sweptLowestX(outline, ms[k], z);
+                    for (int j = 0; j < map.nPhi; ++j) best[j] = std::min(best[j], x);
+                    continue;
+                }
+                auto xAt = [&](double sp) {
+                    return outline.lowerEnvelope(z - m.c0.x() - sp * m.dir.x()) + m.c0.y() +
+                           sp * m.dir.y();
+                };
+                const double sStar = m.vertical ? (m.dir.y() < 0 ? m.len : 0.0)
+                                                : (z - m.supportZ - m.c0.x()) / m.dir.x();
+                const double xEnd = xAt(m.len);  // the dwell at the end
+                for (int j = 0; j < map.nPhi; ++j) {
+                    // Same bracketing as markedRadiusMm.
+                    const double phiF = m.f * j / map.nPhi;
+                    double x;
+                    if (phiF >= m.len || sStar >= m.len) {
+                        x = xEnd;
+                    } else if (sStar <= phiF) {
+                        x = xAt(phiF);
+                    } else {
+                        const double sa = phiF + std::floor((sStar - phiF) / m.f) * m.f;
+                        const double sb = sa + m.f;
+                        x = std::min(xAt(sa), sb < m.len ? xAt(sb) : xEnd);
+                    }
+                    best[j] = std::min(best[j], x);
+                }
             }
+            float* row = &map.radiusMm[i * map.nPhi];
+            for (int j = 0; j < map.nPhi; ++j)
+                row[j] = static_cast<float>(std::min(stockR, cutRadiusMm(best[j], h)));
             if (report && progress && (i - a) % 2048 == 0) progress(double(i - a) / double(b - a));
         }
     };
@@ -163,22 +205,28 @@ Roughness measureRoughness(const HeightMap& map, const ToolOutline& outline, con
         const double zNext = map.rowZ(rows[k + 1 < rows.size() ? k + 1 : k]);
         w[k] = 0.5 * (zNext - zPrev);
     }
-    double rtSum = 0, raSum = 0;
-    for (int j = 0; j < map.nPhi; ++j) {
-        double lo = kInf, hi = -kInf, sw = 0, sm = 0;
-        for (std::size_t k = 0; k < rows.size(); ++k) {
-            const double e = map.at(rows[k], j) - base[k];
-            lo = std::min(lo, e);
-            hi = std::max(hi, e);
-            sw += w[k];
-            sm += w[k] * e;
+    // Row-major passes (the map is stored by rows): mean line, then extremes and Ra.
+    const std::size_t nPhi = static_cast<std::size_t>(map.nPhi);
+    std::vector<double> lo(nPhi, kInf), hi(nPhi, -kInf), sm(nPhi, 0.0), sa(nPhi, 0.0);
+    double sw = 0;
+    for (std::size_t k = 0; k < rows.size(); ++k) {
+        const float* row = &map.radiusMm[static_cast<std::size_t>(rows[k]) * nPhi];
+        sw += w[k];
+        for (std::size_t j = 0; j < nPhi; ++j) {
+            const double e = row[j] - base[k];
+            lo[j] = std::min(lo[j], e);
+            hi[j] = std::max(hi[j], e);
+            sm[j] += w[k] * e;
         }
-        const double mean = sm / sw;
-        double sa = 0;
-        for (std::size_t k = 0; k < rows.size(); ++k)
-            sa += w[k] * std::abs(map.at(rows[k], j) - base[k] - mean);
-        rtSum += hi - lo;
-        raSum += sa / sw;
+    }
+    for (std::size_t k = 0; k < rows.size(); ++k) {
+        const float* row = &map.radiusMm[static_cast<std::size_t>(rows[k]) * nPhi];
+        for (std::size_t j = 0; j < nPhi; ++j) sa[j] += w[k] * std::abs(row[j] - base[k] - sm[j] / sw);
+    }
+    double rtSum = 0, raSum = 0;
+    for (std::size_t j = 0; j < nPhi; ++j) {
+        rtSum += hi[j] - lo[j];
+        raSum += sa[j] / sw;
     }
     out.rtUm = 1000.0 * cosA * rtSum / map.nPhi;
     out.raUm = 1000.0 * cosA * raSum / map.nPhi;

@@ -170,21 +170,6 @@ ToolOutline::ToolOutline(const Tool& tool) {
               [](const LowerPiece& a, const LowerPiece& b) { return a.u0 < b.u0; });
 }
 
-double ToolOutline::lowerEnvelope(double uMm) const {
-    if (uMm < uMin_ || uMm > uMax_) return std::numeric_limits<double>::infinity();
-    // The lower chain is contiguous and sorted: take the first piece that covers u.
-    for (const auto& p : lower_) {
-        if (uMm <= p.u1 || &p == &lower_.back()) {
-            if (p.arc) {
-                const double d = std::clamp(uMm - p.cz, -p.rad, p.rad);
-                return p.cx - std::sqrt(std::max(0.0, p.rad * p.rad - d * d));
-            }
-            return p.x0 + p.slope * (uMm - p.u0);
-        }
-    }
-    return std::numeric_limits<double>::infinity();
-}
-
 Eigen::Vector2d ToolOutline::support(double slope) const {
     // Minimise x − slope·u over the boundary: at segment ends, or on an arc where the outward
     // normal is parallel to (slope, −1).

@@ -1,14 +1,137 @@
-// swarf run: NOT DONE YET (placeholder until its issue lands).
+// swarf run SCENE --out DIR: simulate the scene's plan and write result.json and profile.csv.
+// Prints a short summary in the scene's units; a progress bar on stderr when stderr is a
+// terminal and the run takes more than a moment. Exit 0 whatever the verdict (the verdict is
+// in the output); a bad scene exits 2 with nothing written.
 #include "commands.h"
+#include "swarf/io/result_writer.h"
+#include "swarf/io/scene_reader.h"
 #include "swarf/sim/error.h"
+#include "swarf/sim/kernel.h"
+
+#include <fmt/core.h>
+
+#include <chrono>
+#include <cstdio>
+#include <filesystem>
+#include <string>
+#include <unistd.h>
 
 namespace swarf::app {
 
+namespace {
+
+// A progress bar on stderr, drawn only once the run has taken more than a moment.
+class ProgressBar {
+  public:
+    ProgressBar() : enabled_(isatty(fileno(stderr)) != 0), start_(std::chrono::steady_clock::now()) {}
+    ~ProgressBar() { finish(); }
+    void update(double fraction) {
+        if (!enabled_) return;
+        const double secs =
+            std::chrono::duration<double>(std::chrono::steady_clock::now() - start_).count();
+        if (secs < 0.4) return;
+        const int width = 30, filled = static_cast<int>(fraction * width + 0.5);
+        const int pct = static_cast<int>(fraction * 100 + 0.5);
+        if (pct == lastPct_) return;
+        lastPct_ = pct;
+        std::fprintf(stderr, "\r  simulating [%s%s] %3d%%", std::string(filled, '#').c_str(),
+                     std::string(width - filled, ' ').c_str(), pct);
+        std::fflush(stderr);
+        drawn_ = true;
+    }
+    void finish() {
+        if (drawn_) std::fprintf(stderr, "\r%60s\r", "");
+        drawn_ = false;
+    }
+
+  private:
+    bool enabled_;
+    bool drawn_ = false;
+    int lastPct_ = -1;
+    std::chrono::steady_clock::time_point start_;
+};
+
+std::string passName(const Scene& s, int pass) {
+    if (pass < 0 || pass >= static_cast<int>(s.plan.passes.size())) return "the plan";
+    const Pass& p = s.plan.passes[static_cast<std::size_t>(pass)];
+    return fmt::format("pass {}{}", pass + 1, p.note.empty() ? "" : " (" + p.note + ")");
+}
+
+std::string signedSmall(double mm, Units u) {
+    return (mm >= 0 ? "+" : "−") + formatSmallLength(std::abs(mm), u);
+}
+
+void printSummary(const Scene& s, const CutResult& r) {
+    const Units u = s.units;
+    fmt::print("scene: {}\n", s.name);
+    fmt::print("verdict: {}\n", r.withinTolerance ? "IN TOLERANCE" : "OUT OF TOLERANCE");
+    fmt::print("gauge plane z = {}: diameter as cut {}, drawing {} ({})\n",
+               formatLength(r.gaugeZMm, u), formatLength(r.gaugeAsCutDiameterMm, u, u == Units::Inch ? 5 : 4),
+               formatLength(r.gaugeNominalDiameterMm, u, u == Units::Inch ? 5 : 4),
+               signedSmall(r.gaugeAsCutDiameterMm - r.gaugeNominalDiameterMm, u));
+    fmt::print("largest metal left on: {}   largest overcut: {}   (normal to the surface)\n",
+               formatSmallLength(r.maxLeftOnMm, u), formatSmallLength(r.maxOvercutMm, u));
+    fmt::print("feed marks of the finishing pass: Rt {:.2f} µm, Ra {:.2f} µm\n", r.rtUm, r.raUm);
+    for (const FeatureReport& f : r.features) {
+        const Feature& ft = s.part.features[static_cast<std::size_t>(f.feature)];
+        std::string extra;
+        if (ft.kind == FeatureKind::Cone || ft.kind == FeatureKind::Chamfer)
+            extra = fmt::format(", half angle {} (drawing {})", formatDms(f.asCutHalfAngleRad),
+                                formatDms(ft.cone.halfAngleRad));
+        fmt::print("  {} {}: left on {}, overcut {}{}\n", f.withinTolerance ? "ok " : "OUT",
+                   ft.name.empty() ? fmt::format("feature {}", f.feature + 1) : ft.name,
+                   formatSmallLength(f.maxLeftOnMm, u), formatSmallLength(f.maxOvercutMm, u), extra);
+    }
+    if (r.findings.empty()) {
+        fmt::print("findings: none\n");
+    } else {
+        fmt::print("findings:\n");
+        for (const Finding& f : r.findings)
+            fmt::print("  [{}] {}: {}\n", findingKindName(f.kind), passName(s, f.pass), f.message);
+    }
+}
+
+} // namespace
+
 void registerRun(CLI::App& app, int& exitCode) {
-    auto* cmd = app.add_subcommand("run", "(not done yet)");
-    cmd->callback([&exitCode] {
-        (void)exitCode;
-        throw Error("'swarf run' is not done yet", kExitInternal);
+    auto* cmd = app.add_subcommand("run", "Simulate a scene's pass plan and write the results");
+    auto scene = std::make_shared<std::string>();
+    auto outDir = std::make_shared<std::string>();
+    auto noStep = std::make_shared<bool>(false);
+    auto noPictures = std::make_shared<bool>(false);
+    cmd->add_option("scene", *scene, "Scene file (.toml)")->required();
+    cmd->add_option("--out", *outDir, "Directory for result.json, profile.csv and the rest")->required();
+    cmd->add_flag("--no-step", *noStep, "Do not export the as-cut solid as STEP");
+    cmd->add_flag("--no-pictures", *noPictures, "Do not render pictures or the report");
+    cmd->callback([scene, outDir, noStep, noPictures, &exitCode] {
+        // Read first: a bad scene writes nothing.
+        const Scene s = io::readScene(*scene);
+        CutResult result;
+        {
+            ProgressBar bar;
+            result = simulate(s, [&bar](double f) { bar.update(f); });
+        }
+        namespace fs = std::filesystem;
+        std::error_code ec;
+        fs::create_directories(*outDir, ec);
+        if (ec) throw OutputError("cannot create " + *outDir + ": " + ec.message());
+        const std::string json = (fs::path(*outDir) / "result.json").string();
+        const std::string csv = (fs::path(*outDir) / "profile.csv").string();
+        io::writeResultJson(json, s, result);
+        io::writeProfileCsv(csv, result);
+
+        // ---- LEAD: STEP export and PNG / report writing go here (other helpers' libraries).
+        //      --no-step and --no-pictures are accepted and currently do nothing: nothing of
+        //      the kind is written yet.
+        (void)*noStep;
+        (void)*noPictures;
+        // ---- end of the place for the lead.
+
+        printSummary(s, result);
+        fmt::print("wrote {} and {}\n", json, csv);
+        fmt::print("CAUTION: a simulation of the tool path only; it does not model cutting forces,\n"
+                   "deflection or chatter. Check every reading on the machine and take a trial cut.\n");
+        exitCode = kExitOk;
     });
 }
 

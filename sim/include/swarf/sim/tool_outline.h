@@ -5,6 +5,8 @@
 #include "swarf/sim/scene.h"
 
 #include <Eigen/Core>
+#include <cmath>
+#include <cstddef>
 #include <limits>
 #include <vector>
 
@@ -29,7 +31,21 @@ class ToolOutline {
     /// Offset from the nose centre to the imaginary tip (z, x), mm.
     Eigen::Vector2d imaginaryTip() const { return tip_; }
     /// Lowest x of the outline at axial offset u from the nose centre; +inf outside [uMin, uMax].
-    double lowerEnvelope(double uMm) const;
+    /// (Inline: the sweep and the height map call it hundreds of millions of times.)
+    double lowerEnvelope(double uMm) const {
+        if (uMm < uMin_ || uMm > uMax_) return std::numeric_limits<double>::infinity();
+        // The lower chain is contiguous and sorted: the first piece whose end is past u.
+        const std::size_t n = lower_.size();
+        std::size_t i = 0;
+        while (i + 1 < n && uMm > lower_[i].u1) ++i;
+        const LowerPiece& p = lower_[i];
+        if (p.arc) {
+            const double d = uMm - p.cz;
+            const double s = p.rad * p.rad - d * d;
+            return p.cx - (s > 0 ? std::sqrt(s) : 0.0);
+        }
+        return p.x0 + p.slope * (uMm - p.u0);
+    }
     double uMinMm() const { return uMin_; }
     double uMaxMm() const { return uMax_; }
     /// The outline point minimising x − slope·u: where a move of slope dx/dz touches the

@@ -1,0 +1,194 @@
+// result.json and profile.csv (format documented in sim/io/RESULTS.md).
+#include "swarf/io/result_writer.h"
+
+#include "swarf/io/scene_writer.h"
+#include "swarf/sim/iso2768.h"
+
+#include <nlohmann/json.hpp>
+
+#include <cmath>
+#include <cstdio>
+#include <vector>
+
+namespace swarf::io {
+namespace {
+
+using nlohmann::ordered_json;
+
+// NaN and infinities become null.
+ordered_json num(double v) { return std::isfinite(v) ? ordered_json(v) : ordered_json(nullptr); }
+
+const char* featureKindName(FeatureKind k) {
+    switch (k) {
+    case FeatureKind::Cylinder: return "cylinder";
+    case FeatureKind::Cone: return "cone";
+    case FeatureKind::Chamfer: return "chamfer";
+    case FeatureKind::Face: return "face";
+    }
+    return "?";
+}
+
+const char* passKindName(PassKind k) {
+    switch (k) {
+    case PassKind::Compound: return "compound";
+    case PassKind::Saddle: return "saddle";
+    case PassKind::CrossSlide: return "cross";
+    case PassKind::Path: return "path";
+    }
+    return "?";
+}
+
+ordered_json point(const Eigen::Vector2d& p) { return {{"z_mm", p.x()}, {"x_mm", p.y()}}; }
+
+} // namespace
+
+std::vector<PassSummary> summarisePasses(const CutResult& r) {
+    std::vector<PassSummary> out(r.afterPass.size());
+    const Profile* before = &r.stock;
+    double vBefore = r.stock.volumeMm3();
+    for (std::size_t p = 0; p < r.afterPass.size(); ++p) {
+        const Profile& after = r.afterPass[p];
+        const double vAfter = after.volumeMm3();
+        out[p].removedMm3 = vBefore - vAfter;
+        for (std::size_t i = 0; i < after.radiusMm.size() && i < before->radiusMm.size(); ++i)
+            out[p].maxRadialDepthMm =
+                std::max(out[p].maxRadialDepthMm, before->radiusMm[i] - after.radiusMm[i]);
+        before = &after;
+        vBefore = vAfter;
+    }
+    return out;
+}
+
+std::string resultJson(const Scene& scene, const CutResult& r) {
+    ordered_json j;
+    j["format"] = "swarf result";
+    j["format_version"] = 1;
+    j["scene"] = {{"name", scene.name}, {"file", scene.file}, {"units", unitName(scene.units)}};
+    j["verdict"] = r.withinTolerance ? "in_tolerance" : "out_of_tolerance";
+    j["gauge"] = {{"plane_z_mm", num(r.gaugeZMm)},
+                  {"nominal_diameter_mm", num(r.gaugeNominalDiameterMm)},
+                  {"as_cut_diameter_mm", num(r.gaugeAsCutDiameterMm)},
+                  {"error_mm", num(r.gaugeAsCutDiameterMm - r.gaugeNominalDiameterMm)}};
+    j["deviation"] = {{"max_left_on_mm", num(r.maxLeftOnMm)},
+                      {"max_overcut_mm", num(r.maxOvercutMm)}};
+    j["volume"] = {{"stock_mm3", num(r.stockVolumeMm3)},
+                   {"as_cut_mm3", num(r.asCutVolumeMm3)},
+                   {"removed_mm3", num(r.removedVolumeMm3)},
+                   {"left_on_mm3", num(r.leftoverVolumeMm3)}};
+    j["roughness"] = {{"rt_um", num(r.rtUm)}, {"ra_um", num(r.raUm)}};
+    ordered_json findings = ordered_json::array();
+    for (const Finding& f : r.findings) {
+        findings.push_back({{"kind", findingKindName(f.kind)},
+                            {"pass", f.pass},
+                            {"message", f.message},
+                            {"z_mm", num(f.zMm)},
+                            {"value_mm", num(f.valueMm)}});
+    }
+    j["findings"] = findings;
+
+    ordered_json features = ordered_json::array();
+    for (const FeatureReport& fr : r.features) {
+        const Feature& f = scene.part.features.at(static_cast<std::size_t>(fr.feature));
+        const bool conic = f.kind == FeatureKind::Cone || f.kind == FeatureKind::Chamfer;
+        ordered_json o = {{"index", fr.feature},
+                          {"name", f.name},
+                          {"kind", featureKindName(f.kind)},
+                          {"from_mm", f.zStartMm},
+                          {"to_mm", f.zEndMm},
+                          {"within_tolerance", fr.withinTolerance},
+                          {"max_left_on_mm", num(fr.maxLeftOnMm)},
+                          {"max_overcut_mm", num(fr.maxOvercutMm)},
+                          {"tolerance_mm", num(f.toleranceMm)}};
+        if (f.kind == FeatureKind::Cylinder) {
+            o["nominal_diameter_mm"] = f.diameterMm;
+            o["as_cut_diameter_mm"] = num(fr.asCutDiameterMm);
+        } else if (conic) {
+            o["gauge_plane_z_mm"] = f.cone.gaugeZMm;
+            o["nominal_diameter_mm"] = f.cone.gaugeDiameterMm;
+            o["as_cut_diameter_mm"] = num(fr.asCutDiameterMm);
+            o["nominal_half_angle_deg"] = radToDeg(f.cone.halfAngleRad);
+            o["as_cut_half_angle_deg"] = num(radToDeg(fr.asCutHalfAngleRad));
+            o["angle_tolerance_deg"] = radToDeg(f.angleToleranceRad);
+        } else {
+            o["face_z_mm"] = f.zStartMm;
+        }
+        features.push_back(o);
+    }
+    j["features"] = features;
+
+    const std::vector<PassSummary> sums = summarisePasses(r);
+    ordered_json passes = ordered_json::array();
+    for (std::size_t p = 0; p < scene.plan.passes.size(); ++p) {
+        const Pass& ps = scene.plan.passes[p];
+        ordered_json o = {{"index", p},
+                          {"kind", passKindName(ps.kind)},
+                          {"note", ps.note},
+                          {"feed_mm_per_rev", ps.feedMmPerRev}};
+        ordered_json mv = ordered_json::array();
+        for (const ToolMove& m : r.moves) {
+            if (m.pass != static_cast<int>(p)) continue;
+            mv.push_back({{"tip_from", point(m.tipFrom)},
+                          {"tip_to", point(m.tipTo)},
+                          {"cross_from_mm", m.crossFrom},
+                          {"cross_to_mm", m.crossTo},
+                          {"compound_from_mm", m.compoundFrom},
+                          {"compound_to_mm", m.compoundTo},
+                          {"saddle_from_mm", m.saddleFrom},
+                          {"saddle_to_mm", m.saddleTo}});
+        }
+        o["moves"] = mv;
+        if (p < sums.size()) {
+            o["removed_mm3"] = num(sums[p].removedMm3);
+            o["max_radial_depth_mm"] = num(sums[p].maxRadialDepthMm);
+        }
+        int nFind = 0;
+        for (const Finding& f : r.findings) nFind += f.pass == static_cast<int>(p);
+        o["findings"] = nFind;
+        passes.push_back(o);
+    }
+    j["passes"] = passes;
+    j["profile"] = {{"samples", r.asCut.radiusMm.size()},
+                    {"z0_mm", r.asCut.z0Mm},
+                    {"step_mm", r.asCut.dzMm}};
+    j["surface"] = {{"rows", r.surface.nz},
+                    {"angle_samples", r.surface.nPhi},
+                    {"finest_row_step_mm", r.surface.dzMm}};
+    j["caution"] = "A simulation of the tool path only: it does not model cutting forces, "
+                   "deflection of the work or tool, chatter or tool wear. Check every reading "
+                   "on the machine and take a trial cut before trusting a number here.";
+    return j.dump(2) + "\n";
+}
+
+std::string profileCsv(const CutResult& r) {
+    std::string out = "z_mm,nominal_radius_mm,as_cut_radius_mm,deviation_mm\n";
+    out.reserve(out.size() + r.asCut.radiusMm.size() * 48);
+    char buf[128];
+    for (std::size_t i = 0; i < r.asCut.radiusMm.size(); ++i) {
+        const double n = i < r.nominal.radiusMm.size() ? r.nominal.radiusMm[i] : NAN;
+        const double d = i < r.deviationMm.size() ? r.deviationMm[i] : NAN;
+        int len = std::snprintf(buf, sizeof buf, "%.6f,", r.asCut.zAt(i));
+        out.append(buf, static_cast<std::size_t>(len));
+        if (std::isfinite(n)) {
+            len = std::snprintf(buf, sizeof buf, "%.7f", n);
+            out.append(buf, static_cast<std::size_t>(len));
+        }
+        len = std::snprintf(buf, sizeof buf, ",%.7f,", r.asCut.radiusMm[i]);
+        out.append(buf, static_cast<std::size_t>(len));
+        if (std::isfinite(d)) {
+            len = std::snprintf(buf, sizeof buf, "%.7f", d);
+            out.append(buf, static_cast<std::size_t>(len));
+        }
+        out += '\n';
+    }
+    return out;
+}
+
+void writeResultJson(const std::string& path, const Scene& scene, const CutResult& result) {
+    writeTextAtomically(path, resultJson(scene, result));
+}
+
+void writeProfileCsv(const std::string& path, const CutResult& result) {
+    writeTextAtomically(path, profileCsv(result));
+}
+
+} // namespace swarf::io
