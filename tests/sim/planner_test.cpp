@@ -1,0 +1,295 @@
+// The cone planner: every planned cone, run through the kernel, is within tolerance with no
+// finding; a hand-checked case matches a worked calculation; a cone the insert cannot follow is
+// refused with suggestions. Scenes are built in code (made-up scenarios, like those in scenes/).
+#include "swarf/sim/kernel.h"
+#include "swarf/sim/planner.h"
+
+#include <catch2/catch.hpp>
+
+#include <cmath>
+#include <optional>
+#include <string>
+
+using namespace swarf;
+
+namespace {
+
+// A made-up job: a cone (or chamfer) from the datum face, an optional body after it.
+struct Job {
+    std::string name;
+    Units units = Units::Mm;
+    double stockD = 30, stickOut = 80;
+    FeatureKind kind = FeatureKind::Cone;
+    double from = 0, to = 50, gaugeZ = 40, gaugeD = 29, halfAngleDeg = 2.862405, tol = 0.02;
+    Widens widens = Widens::TowardChuck;
+    std::optional<double> bodyD;  // a cylinder from `to` to `to + bodyLen`
+    double bodyLen = 20;
+    char shape = 'D';
+    double epsDeg = 55, kappaDeg = 93, noseR = 0.4, edge = 11.6;
+    Hand hand = Hand::R;
+    DialMode dial = DialMode::Diameter;
+    double crossDiv = 0.02, compDiv = 0.02, saddleDiv = 0.1, compTravel = 90, compBacklash = 0.04;
+    CompoundScale scale = CompoundScale::FromAxis;
+    PlanningOptions::Placing placing = PlanningOptions::Placing::ZeroOnDiameter;
+    PlanningOptions::Roughing roughing = PlanningOptions::Roughing::Compound;
+    double maxDepth = 1.0, allowance = 0.1, roughFeed = 0.12, finishFeed = 0.05;
+};
+
+// Lengths in a Job are in its units.
+Scene makeScene(const Job& j) {
+    const Units u = j.units;
+    auto mm = [u](double v) { return toMm(v, u); };
+    Scene s;
+    s.name = j.name;
+    s.units = u;
+    s.stock.diameterMm = mm(j.stockD);
+    s.stock.lengthMm = mm(j.stickOut * 2);
+    s.stock.stickOutMm = mm(j.stickOut);
+    Feature f;
+    f.kind = j.kind;
+    f.name = "cone";
+    f.zStartMm = mm(j.from);
+    f.zEndMm = mm(j.to);
+    f.cone = Cone{mm(j.gaugeZ), mm(j.gaugeD), degToRad(j.halfAngleDeg), j.widens};
+    f.diameterMm = std::max(f.cone.diameterAt(f.zStartMm), f.cone.diameterAt(f.zEndMm));
+    f.toleranceMm = mm(j.tol);
+    f.toleranceFromClass = false;
+    f.angleToleranceRad = degToRad(0.05);
+    s.part.features.push_back(f);
+    if (j.bodyD) {
+        Feature b;
+        b.kind = FeatureKind::Cylinder;
+        b.name = "body";
+        b.zStartMm = mm(j.to);
+        b.zEndMm = mm(j.to + j.bodyLen);
+        b.diameterMm = mm(*j.bodyD);
+        b.toleranceMm = mm(j.tol) * 2;
+        b.toleranceFromClass = false;
+        s.part.features.push_back(b);
+    }
+    s.tool.shape = j.shape;
+    s.tool.includedAngleRad = degToRad(j.epsDeg);
+    s.tool.enteringAngleRad = degToRad(j.kappaDeg);
+    s.tool.noseRadiusMm = mm(j.noseR);
+    s.tool.edgeLengthMm = mm(j.edge);
+    s.tool.hand = j.hand;
+    s.setup.compoundScale = j.scale;
+    s.setup.compoundReadingRad = j.scale == CompoundScale::FromAxis ? 0.0 : kPi / 2;
+    s.setup.compound = Slide{mm(j.compDiv), 100, mm(j.compBacklash), mm(j.compTravel)};
+    s.setup.cross = Slide{mm(j.crossDiv), j.dial == DialMode::Diameter ? 100 : 200, 0, mm(150)};
+    s.setup.crossDial = j.dial;
+    s.setup.saddle = Slide{mm(j.saddleDiv), 200, 0, 1e9};
+    s.setup.zeroDiameterMm = s.stock.diameterMm;
+    s.planning.placing = j.placing;
+    s.planning.roughing = j.roughing;
+    s.planning.maxDepthMm = mm(j.maxDepth);
+    s.planning.finishAllowanceMm = mm(j.allowance);
+    s.planning.roughFeedMmPerRev = mm(j.roughFeed);
+    s.planning.finishFeedMmPerRev = mm(j.finishFeed);
+    s.sim.angleSamples = 36;
+    return s;
+}
+
+// The planning cases; each mirrors a plan-*.toml scene (made-up numbers, demo scenarios).
+std::vector<Job> cases() {
+    std::vector<Job> v;
+    {
+        Job j;  // 60° lathe centre, mm, diameter dial, zero on the finished body
+        j.name = "60° centre";
+        j.stockD = 20, j.stickOut = 60, j.to = 12.990381, j.gaugeZ = 12.990381, j.gaugeD = 18;
+        j.halfAngleDeg = 30, j.tol = 0.05, j.bodyD = 18;
+        v.push_back(j);
+    }
+    {
+        Job j;  // 45° chamfer, radius dial, C insert in L holder, stepped saddle roughing
+        j.name = "45° chamfer";
+        j.kind = FeatureKind::Chamfer;
+        j.stockD = 30, j.stickOut = 50, j.to = 4, j.gaugeZ = 0, j.gaugeD = 22, j.halfAngleDeg = 45;
+        j.tol = 0.1, j.bodyD = 30, j.shape = 'C', j.epsDeg = 80, j.kappaDeg = 95, j.noseR = 0.8;
+        j.edge = 12.9, j.dial = DialMode::Radius, j.crossDiv = 0.01, j.allowance = 0.15;
+        j.scale = CompoundScale::FromCrossSlide;
+        j.roughing = PlanningOptions::Roughing::SaddleSteps;
+        v.push_back(j);
+    }
+    {
+        Job j;  // steep 7:24, reference shoulder at the gauge plane
+        j.name = "7:24";
+        j.stockD = 40, j.stickOut = 90, j.to = 48, j.gaugeZ = 44, j.gaugeD = 31.75;
+        j.halfAngleDeg = radToDeg(std::atan(7.0 / 48.0)), j.tol = 0.02, j.bodyD = 40;
+        j.maxDepth = 1.5, j.placing = PlanningOptions::Placing::ReferenceShoulder;
+        v.push_back(j);
+    }
+    {
+        Job j;  // Morse 3, inch, diameter dial, zero on the finished body
+        j.name = "Morse 3 inch";
+        j.units = Units::Inch;
+        j.stockD = 1.0, j.stickOut = 3.5, j.to = 3.0, j.gaugeZ = 3.0, j.gaugeD = 0.938;
+        j.halfAngleDeg = radToDeg(std::atan(0.5 / 19.922)), j.tol = 0.001, j.bodyD = 0.938;
+        j.bodyLen = 0.25, j.noseR = 0.0156, j.edge = 0.45, j.crossDiv = 0.001, j.compDiv = 0.001;
+        j.saddleDiv = 0.001, j.compTravel = 3.5, j.compBacklash = 0.002, j.maxDepth = 0.04;
+        j.allowance = 0.004, j.roughFeed = 0.005, j.finishFeed = 0.002;
+        v.push_back(j);
+    }
+    {
+        Job j;  // Morse 2, inch, radius dial, reference shoulder
+        j.name = "Morse 2 inch";
+        j.units = Units::Inch;
+        j.stockD = 0.875, j.stickOut = 3.0, j.to = 2.5, j.gaugeZ = 1.5, j.gaugeD = 0.700;
+        j.halfAngleDeg = radToDeg(std::atan(0.5 / 20.020)), j.tol = 0.001, j.bodyD = 0.75;
+        j.bodyLen = 0.25, j.noseR = 0.0156, j.edge = 0.45, j.dial = DialMode::Radius;
+        j.crossDiv = 0.0005, j.compDiv = 0.001, j.saddleDiv = 0.001, j.compTravel = 3.0;
+        j.compBacklash = 0.002, j.maxDepth = 0.03, j.allowance = 0.004, j.roughFeed = 0.005;
+        j.finishFeed = 0.002, j.placing = PlanningOptions::Placing::ReferenceShoulder;
+        v.push_back(j);
+    }
+    {
+        Job j;  // shallow 1:50, 120 mm long: two saddle settings of a 70 mm compound
+        j.name = "1:50";
+        j.stockD = 22, j.stickOut = 160, j.to = 120, j.gaugeZ = 100, j.gaugeD = 20;
+        j.halfAngleDeg = radToDeg(std::atan(0.01)), j.bodyD = 20.4, j.shape = 'V', j.epsDeg = 35;
+        j.edge = 16.6, j.compTravel = 70, j.maxDepth = 0.8;
+        v.push_back(j);
+    }
+    {
+        Job j;  // 10° flare narrowing toward the chuck: compound advances toward the chuck
+        j.name = "10° flare";
+        j.stockD = 25, j.stickOut = 50, j.to = 20, j.gaugeZ = 0, j.gaugeD = 24, j.halfAngleDeg = 10;
+        j.tol = 0.05, j.widens = Widens::TowardTailstock;
+        v.push_back(j);
+    }
+    {
+        Job j;  // 1:10 arbor with stepped saddle roughing, the bar itself as the reference
+        j.name = "1:10 steps";
+        j.stockD = 30, j.stickOut = 85, j.to = 50, j.gaugeZ = 40, j.gaugeD = 29;
+        j.halfAngleDeg = radToDeg(std::atan(0.05)), j.bodyD = 30;
+        j.roughing = PlanningOptions::Roughing::SaddleSteps;
+        v.push_back(j);
+    }
+    return v;
+}
+
+} // namespace
+
+TEST_CASE("dial settings wrap and count turns", "[planner]") {
+    const Slide s{0.02, 100, 0, 100};  // 2 mm a turn (common practice for a metric dial)
+    const DialSetting a = dialSetting(s, 2.53);
+    CHECK(a.turns == 1);
+    CHECK(a.division == Approx(26.5));
+    const DialSetting b = dialSetting(s, -0.5);
+    CHECK(b.turns == -1);
+    CHECK(b.division == Approx(75));
+    CHECK(roundToDivision(s, 0.013, 2) == Approx(0.01));
+}
+
+TEST_CASE("every planned cone proves itself in the kernel", "[planner][kernel]") {
+    int planned = 0;
+    for (const Job& j : cases()) {
+        INFO(j.name);
+        const Scene scene = makeScene(j);
+        REQUIRE_NOTHROW(scene.validate());
+        const ConePlan plan = planCone(scene);
+        for (const std::string& p : plan.problems) INFO(p);
+        REQUIRE(plan.planned);
+        REQUIRE_NOTHROW(plan.scene.validate());
+        const CutResult r = simulate(plan.scene);
+        for (const Finding& f : r.findings) UNSCOPED_INFO(f.message);
+        CHECK(r.findings.empty());
+        CHECK(r.withinTolerance);
+        const Feature& cone = plan.scene.part.features[plan.featureIndex];
+        // No metal on beyond the tolerance, nothing overcut beyond it, normal to the cone.
+        CHECK(r.maxLeftOnMm <= cone.toleranceMm);
+        CHECK(r.maxOvercutMm <= cone.toleranceMm);
+        REQUIRE(r.features.size() == plan.scene.part.features.size());
+        const FeatureReport& fr = r.features[plan.featureIndex];
+        CHECK(fr.withinTolerance);
+        CHECK(std::fabs(fr.asCutHalfAngleRad - cone.cone.halfAngleRad) < cone.angleToleranceRad);
+        ++planned;
+    }
+    CHECK(planned >= 8);
+}
+
+TEST_CASE("hand-checked readings: 60/20/80 mm cone, r = 0.8, diameter dial", "[planner]") {
+    // Worked by hand (derived), from references R5 and R1 and the machine model in
+    // scenes/README.md:
+    //   D = 60, d = 20, L = 80: tanθ = (D − d)/(2L) = 0.25, θ = 14°2′ (Source: references R5).
+    //   Nose offset for a right-hand tool on a cone widening toward the chuck: the tip line lies
+    //   ΔX = r(1 + tanθ − secθ) = 0.8 (1 + 0.25 − 1.0307764) = 0.1753789 (radius) inside the
+    //   drawn cone (Source: references R1).
+    //   Dials zeroed on the Ø60 bar (no cylinder to turn) and the datum face. The compound
+    //   advances toward the tailstock; the pass starts beyond the large end, where the tip is
+    //   ahead of the contact point by r(1 − sinθ) = 0.8 (1 − 0.2425356) = 0.6059715, plus a
+    //   run-in of r + 0.5 = 1.3 (no compound backlash here): z = 80 + 0.6059715 + 1.3 = 81.9060,
+    //   so the saddle is locked at the next 0.1 division up, 82.0.
+    //   Tip at compound 0: z = 82.0, x = 30 + 0.25·2 − 0.1753789 = 30.3246211.
+    //   Cross reading (diameter dial): c = 2 (30 − 30.3246211) = −0.6492422 → −0.65 to the
+    //   nearest half division of 0.02.
+    //   Compound from p = (82.0 − 81.9060)/cosθ = 0.0969 → 0.08 (whole division below) to
+    //   p = (82.0 − (0 + 0.6059715 − 1.3))/cosθ = 85.2389 → 85.24 (whole division above).
+    //   On the dial: −0.65 is −1 turn + 67.5 divisions (100 divisions of 0.02 a turn).
+    Job j;
+    j.name = "hand check";
+    j.stockD = 60, j.stickOut = 120, j.to = 80, j.gaugeZ = 80, j.gaugeD = 60;
+    j.halfAngleDeg = radToDeg(std::atan(0.25)), j.tol = 0.05, j.bodyD = 60;
+    j.noseR = 0.8, j.compTravel = 100, j.compBacklash = 0, j.maxDepth = 2.0;
+    const ConePlan plan = planCone(makeScene(j));
+    REQUIRE(plan.planned);
+    // Source: references R5 (60/20/80 mm → 14°2′)
+    CHECK(radToDeg(plan.compoundReadingRad) * 60 == Approx(14 * 60 + 2).margin(0.5));
+    // Source: references R1 (ΔX = r(1 + tanθ − secθ)), derived for r = 0.8, tanθ = 0.25
+    CHECK(plan.noseOffsetRadialMm == Approx(-0.1753789).margin(1e-6));
+    CHECK(plan.scene.setup.compoundAdvanceToward == Widens::TowardTailstock);
+    const Pass& fin = plan.scene.plan.passes.back();
+    CHECK(fin.kind == PassKind::Compound);
+    CHECK(fin.saddleMm == Approx(82.0));            // derived above
+    CHECK(fin.crossMm == Approx(-0.65));            // derived above
+    CHECK(fin.fromMm == Approx(0.08));              // derived above
+    CHECK(fin.toMm == Approx(85.24));               // derived above
+    const DialSetting d = dialSetting(plan.scene.setup.cross, fin.crossMm);
+    CHECK(d.turns == -1);                           // derived above
+    CHECK(d.division == Approx(67.5));              // derived above
+    // And the kernel agrees it cuts the drawn cone.
+    const CutResult r = simulate(plan.scene);
+    CHECK(r.findings.empty());
+    CHECK(r.withinTolerance);
+    CHECK(r.gaugeAsCutDiameterMm == Approx(60.0).margin(0.01));
+}
+
+TEST_CASE("a cone the insert cannot follow is refused with suggestions", "[planner]") {
+    // A 45° seat narrowing toward the chuck with a 55° insert in a 93° holder: the trailing edge
+    // limit is 180° − 93° − 55° = 32° (Source: references R8), less than 45°.
+    Job j;
+    j.name = "seat";
+    j.stockD = 40, j.stickOut = 50, j.to = 6, j.gaugeZ = 0, j.gaugeD = 38, j.halfAngleDeg = 45;
+    j.widens = Widens::TowardTailstock, j.tol = 0.1;
+    const ConePlan plan = planCone(makeScene(j));
+    CHECK_FALSE(plan.planned);
+    CHECK(plan.scene.plan.passes.empty());
+    REQUIRE_FALSE(plan.problems.empty());
+    REQUIRE_FALSE(plan.suggestions.empty());
+    // Every suggested pair must itself follow the cone: rebuild the first right-hand one.
+    Tool t = makeScene(j).tool;
+    CHECK_FALSE(toolFollowsSlope(t, -degToRad(45)));
+    t.shape = 'V';
+    t.includedAngleRad = degToRad(35);  // Source: references R8 (V 35°)
+    t.enteringAngleRad = degToRad(93);  // Source: references R8 (J 93°)
+    CHECK(toolFollowsSlope(t, -degToRad(45)));
+    CHECK(plan.suggestions.front().find("shape V") != std::string::npos);
+    // The same tool follows the cone the other way round (widening toward the chuck).
+    CHECK(toolFollowsSlope(makeScene(j).tool, degToRad(45)));
+}
+
+TEST_CASE("a cone longer than the compound's travel is split into saddle settings", "[planner]") {
+    Job j = cases()[5];  // the 1:50 cone, 120 mm against a 70 mm compound
+    const ConePlan plan = planCone(makeScene(j));
+    REQUIRE(plan.planned);
+    CHECK(plan.compoundSettings == 2);
+    CHECK(plan.compoundRunMm > toMm(j.compTravel, j.units));
+    bool said = false;
+    for (const std::string& c : plan.cautions) said = said || c.find("taper attachment") != std::string::npos;
+    CHECK(said);
+    for (const Pass& p : plan.scene.plan.passes)
+        if (p.kind == PassKind::Compound) {
+            CHECK(p.fromMm >= 0);
+            CHECK(p.toMm <= 70.0 + 1e-9);
+        }
+}
