@@ -14,9 +14,13 @@ double Cone::zAtDiameter(double diameterMm) const {
     return gaugeZMm + growthSign() * (diameterMm - gaugeDiameterMm) / taperRate();
 }
 
-double Cone::taperRate() const { return 2.0 * std::tan(halfAngleRad); }
+double Cone::taperRate() const {
+    return 2.0 * std::tan(halfAngleRad);
+}
 
-double halfAngleFromIncluded(double includedRad) { return includedRad / 2.0; }
+double halfAngleFromIncluded(double includedRad) {
+    return includedRad / 2.0;
+}
 
 double halfAngleFromTaperRate(double c) {
     assert(c > 0);

@@ -39,10 +39,14 @@ constexpr std::array<std::array<double, 5>, 4> kAngularMin{{
 
 int classIndex(Iso2768 cls) {
     switch (cls) {
-    case Iso2768::f: return 0;
-    case Iso2768::m: return 1;
-    case Iso2768::c: return 2;
-    case Iso2768::v: return 3;
+    case Iso2768::f:
+        return 0;
+    case Iso2768::m:
+        return 1;
+    case Iso2768::c:
+        return 2;
+    case Iso2768::v:
+        return 3;
     }
     return 1;
 }
@@ -52,11 +56,13 @@ int classIndex(Iso2768 cls) {
 std::optional<double> iso2768LinearToleranceMm(Iso2768 cls, double nominalMm) {
     const double size = std::fabs(nominalMm);
     // Below 0.5 mm the standard gives no general tolerance: the drawing must state one.
-    if (!(size >= kLinearSmallestMm)) return std::nullopt;
+    if (!(size >= kLinearSmallestMm))
+        return std::nullopt;
     for (std::size_t band = 0; band < kLinearBandUpperMm.size(); ++band) {
         if (size <= kLinearBandUpperMm[band]) {
             const double tol = kLinearMm[classIndex(cls)][band];
-            if (tol == kNone) return std::nullopt;
+            if (tol == kNone)
+                return std::nullopt;
             return tol;
         }
     }
@@ -66,27 +72,42 @@ std::optional<double> iso2768LinearToleranceMm(Iso2768 cls, double nominalMm) {
 double iso2768AngularToleranceRad(Iso2768 cls, double shorterLegMm) {
     const double leg = std::fabs(shorterLegMm);
     std::size_t band = 0;
-    while (band < kAngularBandUpperMm.size() && leg > kAngularBandUpperMm[band]) ++band;
+    while (band < kAngularBandUpperMm.size() && leg > kAngularBandUpperMm[band])
+        ++band;
     return degToRad(kAngularMin[classIndex(cls)][band] / 60.0);
 }
 
 std::optional<Iso2768> parseIso2768(std::string_view letter) {
-    if (letter.size() != 1) return std::nullopt;
+    if (letter.size() != 1)
+        return std::nullopt;
     switch (letter[0]) {
-    case 'f': case 'F': return Iso2768::f;
-    case 'm': case 'M': return Iso2768::m;
-    case 'c': case 'C': return Iso2768::c;
-    case 'v': case 'V': return Iso2768::v;
-    default: return std::nullopt;
+    case 'f':
+    case 'F':
+        return Iso2768::f;
+    case 'm':
+    case 'M':
+        return Iso2768::m;
+    case 'c':
+    case 'C':
+        return Iso2768::c;
+    case 'v':
+    case 'V':
+        return Iso2768::v;
+    default:
+        return std::nullopt;
     }
 }
 
 const char* iso2768Name(Iso2768 cls) {
     switch (cls) {
-    case Iso2768::f: return "f";
-    case Iso2768::m: return "m";
-    case Iso2768::c: return "c";
-    case Iso2768::v: return "v";
+    case Iso2768::f:
+        return "f";
+    case Iso2768::m:
+        return "m";
+    case Iso2768::c:
+        return "c";
+    case Iso2768::v:
+        return "v";
     }
     return "m";
 }

@@ -8,7 +8,8 @@
 
 namespace swarf {
 
-NoseOffsets noseRadiusOffsets(double noseRadiusMm, double halfAngleRad, Widens widens, TipSide tip) {
+NoseOffsets noseRadiusOffsets(double noseRadiusMm, double halfAngleRad, Widens widens,
+                              TipSide tip) {
     assert(noseRadiusMm >= 0 && halfAngleRad >= 0 && halfAngleRad <= kPi / 2);
     const double r = noseRadiusMm;
     const double s = std::sin(halfAngleRad), c = std::cos(halfAngleRad);

@@ -6,7 +6,9 @@
 
 namespace swarf {
 
-double cutRadiusOffCentreMm(double xMm, double tipHeightMm) { return std::hypot(xMm, tipHeightMm); }
+double cutRadiusOffCentreMm(double xMm, double tipHeightMm) {
+    return std::hypot(xMm, tipHeightMm);
+}
 
 double diameterCutOffCentreMm(double nominalDiameterMm, double tipHeightMm) {
     return 2.0 * cutRadiusOffCentreMm(nominalDiameterMm / 2.0, tipHeightMm);

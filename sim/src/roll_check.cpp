@@ -31,8 +31,10 @@ RollReadings rollReadingsForCone(double smallEndDiameterMm, double halfAngleRad,
     RollReadings r;
     r.centreHeight1Mm = stack1Mm + rollDiameterMm / 2.0;
     r.centreHeight2Mm = stack2Mm + rollDiameterMm / 2.0;
-    r.diameter1Mm = smallEndDiameterMm + diameterChangeOverLengthMm(halfAngleRad, r.centreHeight1Mm);
-    r.diameter2Mm = smallEndDiameterMm + diameterChangeOverLengthMm(halfAngleRad, r.centreHeight2Mm);
+    r.diameter1Mm =
+        smallEndDiameterMm + diameterChangeOverLengthMm(halfAngleRad, r.centreHeight1Mm);
+    r.diameter2Mm =
+        smallEndDiameterMm + diameterChangeOverLengthMm(halfAngleRad, r.centreHeight2Mm);
     r.reading1Mm = readingOverRollsMm(r.diameter1Mm, rollDiameterMm, halfAngleRad);
     r.reading2Mm = readingOverRollsMm(r.diameter2Mm, rollDiameterMm, halfAngleRad);
     return r;

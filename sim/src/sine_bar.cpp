@@ -10,8 +10,8 @@
 namespace swarf {
 
 std::vector<SineBar> commonSineBars() {
-    return {{"5 in", 5 * kMmPerInch}, {"10 in", 10 * kMmPerInch}, {"100 mm", 100.0},
-            {"200 mm", 200.0}};
+    return {
+        {"5 in", 5 * kMmPerInch}, {"10 in", 10 * kMmPerInch}, {"100 mm", 100.0}, {"200 mm", 200.0}};
 }
 
 double sineBarStackMm(double barLengthMm, double angleRad) {
@@ -26,19 +26,27 @@ double sineBarAngleRad(double barLengthMm, double stackMm) {
 
 GaugeBlockSet commonInchBlockSet() {
     GaugeBlockSet s{"common 81-piece inch set", Units::Inch, {}};
-    for (int i = 1; i <= 9; ++i) s.sizes.push_back(0.1000 + i * 0.0001);
-    for (int i = 1; i <= 49; ++i) s.sizes.push_back(0.100 + i * 0.001);
-    for (int i = 1; i <= 19; ++i) s.sizes.push_back(i * 0.050);
-    for (int i = 1; i <= 4; ++i) s.sizes.push_back(i * 1.0);
+    for (int i = 1; i <= 9; ++i)
+        s.sizes.push_back(0.1000 + i * 0.0001);
+    for (int i = 1; i <= 49; ++i)
+        s.sizes.push_back(0.100 + i * 0.001);
+    for (int i = 1; i <= 19; ++i)
+        s.sizes.push_back(i * 0.050);
+    for (int i = 1; i <= 4; ++i)
+        s.sizes.push_back(i * 1.0);
     return s;
 }
 
 GaugeBlockSet commonMetricBlockSet() {
     GaugeBlockSet s{"common 87-piece metric set", Units::Mm, {}};
-    for (int i = 1; i <= 9; ++i) s.sizes.push_back(1.000 + i * 0.001);
-    for (int i = 1; i <= 49; ++i) s.sizes.push_back(1.00 + i * 0.01);
-    for (int i = 1; i <= 19; ++i) s.sizes.push_back(i * 0.5);
-    for (int i = 1; i <= 10; ++i) s.sizes.push_back(i * 10.0);
+    for (int i = 1; i <= 9; ++i)
+        s.sizes.push_back(1.000 + i * 0.001);
+    for (int i = 1; i <= 49; ++i)
+        s.sizes.push_back(1.00 + i * 0.01);
+    for (int i = 1; i <= 19; ++i)
+        s.sizes.push_back(i * 0.5);
+    for (int i = 1; i <= 10; ++i)
+        s.sizes.push_back(i * 10.0);
     return s;
 }
 
@@ -61,7 +69,8 @@ GaugeStack combineGaugeBlocks(double heightMm, const GaugeBlockSet& set) {
         units.push_back(std::llround(s * kMicro));
         step = std::gcd(step, units.back());
     }
-    if (step == 0) step = 1;
+    if (step == 0)
+        step = 1;
     out.resolutionMm = toMm(static_cast<double>(step) / kMicro, set.units);
     const double wanted = fromMm(heightMm, set.units) * kMicro / static_cast<double>(step);
     const std::int64_t target = std::llround(wanted);
@@ -69,8 +78,7 @@ GaugeStack combineGaugeBlocks(double heightMm, const GaugeBlockSet& set) {
         out.reason = "the stack height is zero or less: no blocks needed";
         return out;
     }
-    const std::int64_t total =
-        std::accumulate(units.begin(), units.end(), std::int64_t{0}) / step;
+    const std::int64_t total = std::accumulate(units.begin(), units.end(), std::int64_t{0}) / step;
     if (target > total) {
         out.reason = "the stack is taller than all the blocks of the set together";
         return out;
@@ -91,13 +99,15 @@ GaugeStack combineGaugeBlocks(double heightMm, const GaugeBlockSet& set) {
     std::vector<std::vector<bool>> took(n, std::vector<bool>(T + 1, false));
     for (std::size_t i = 0; i < n; ++i) {
         const auto w = static_cast<std::size_t>(units[i] / step);
-        if (w > T) continue;
+        if (w > T)
+            continue;
         for (std::size_t t = T; t >= w; --t) {
             if (best[t - w] != kNone && best[t - w] + 1 < best[t]) {
                 best[t] = static_cast<std::uint16_t>(best[t - w] + 1);
                 took[i][t] = true;
             }
-            if (t == w) break;
+            if (t == w)
+                break;
         }
     }
     if (best[T] == kNone) {
@@ -114,7 +124,8 @@ GaugeStack combineGaugeBlocks(double heightMm, const GaugeBlockSet& set) {
     assert(t == 0);
     std::sort(out.blocks.rbegin(), out.blocks.rend());
     double sum = 0;
-    for (double b : out.blocks) sum += b;
+    for (double b : out.blocks)
+        sum += b;
     out.builtMm = toMm(sum, set.units);
     out.found = true;
     return out;

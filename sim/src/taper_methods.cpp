@@ -47,8 +47,12 @@ std::vector<TaperMethodVerdict> judgeTaperMethods(const TaperJob& job,
     assert(job.halfAngleRad > 0 && job.halfAngleRad < kPi / 2 && job.coneLengthMm > 0);
     std::vector<TaperMethodVerdict> out;
 
-    TaperMethodVerdict setOver{TaperMethodKind::TailstockSetOver, "tailstock set-over", false,
-                               std::nullopt, std::nullopt, ""};
+    TaperMethodVerdict setOver{TaperMethodKind::TailstockSetOver,
+                               "tailstock set-over",
+                               false,
+                               std::nullopt,
+                               std::nullopt,
+                               ""};
     if (!job.outside) {
         setOver.why = "cuts only outside cones on work between centres";
     } else if (!job.workLengthMm) {
@@ -62,13 +66,17 @@ std::vector<TaperMethodVerdict> judgeTaperMethods(const TaperJob& job,
         setOver.why = setOver.practical
                           ? "shallow cone on work between centres; power feed gives a good finish; "
                             "every piece must have the same length and centre-hole depth"
-                          : "set-over " + mm(so) + " is more than about " + mm(limits.maxSetOverMm) +
-                                ": the centres bear badly in their holes";
+                          : "set-over " + mm(so) + " is more than about " +
+                                mm(limits.maxSetOverMm) + ": the centres bear badly in their holes";
     }
     out.push_back(setOver);
 
-    TaperMethodVerdict attach{TaperMethodKind::TaperAttachment, "taper attachment", false,
-                              std::nullopt, job.halfAngleRad, ""};
+    TaperMethodVerdict attach{TaperMethodKind::TaperAttachment,
+                              "taper attachment",
+                              false,
+                              std::nullopt,
+                              job.halfAngleRad,
+                              ""};
     if (job.halfAngleRad > limits.maxAttachmentHalfAngleRad) {
         attach.why = "half angle " + deg(job.halfAngleRad) + " is beyond the guide bar's usual " +
                      deg(limits.maxAttachmentHalfAngleRad);
@@ -82,8 +90,8 @@ std::vector<TaperMethodVerdict> judgeTaperMethods(const TaperJob& job,
     }
     out.push_back(attach);
 
-    TaperMethodVerdict comp{TaperMethodKind::Compound, "compound slide", false, std::nullopt,
-                            job.halfAngleRad, ""};
+    TaperMethodVerdict comp{
+        TaperMethodKind::Compound, "compound slide", false, std::nullopt, job.halfAngleRad, ""};
     const double stroke = compoundStrokeMm(job.halfAngleRad, job.coneLengthMm);
     comp.settingMm = stroke;
     if (stroke > limits.compoundTravelMm) {

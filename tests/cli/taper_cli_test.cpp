@@ -9,7 +9,7 @@ namespace {
 
 struct Run {
     int exitCode = -1;
-    std::string out;  // stdout and stderr together
+    std::string out; // stdout and stderr together
 };
 
 Run runSwarf(const std::string& args) {
@@ -18,7 +18,8 @@ Run runSwarf(const std::string& args) {
     FILE* p = popen(cmd.c_str(), "r");
     REQUIRE(p != nullptr);
     char buf[4096];
-    while (std::fgets(buf, sizeof buf, p)) r.out += buf;
+    while (std::fgets(buf, sizeof buf, p))
+        r.out += buf;
     const int status = pclose(p);
     r.exitCode = WIFEXITED(status) ? WEXITSTATUS(status) : -1;
     return r;
@@ -31,8 +32,9 @@ bool has(const std::string& text, const std::string& part) {
 } // namespace
 
 TEST_CASE("swarf taper: Morse 3 in inch", "[cli][taper]") {
-    const auto r = runSwarf("taper --standard 'Morse 3' --units inch --length 3.25 --nose-radius 0.03125 "
-                            "--rolls 0.25 --tip-height 0.01 --feed 0.004 --work-length 8");
+    const auto r =
+        runSwarf("taper --standard 'Morse 3' --units inch --length 3.25 --nose-radius 0.03125 "
+                 "--rolls 0.25 --tip-height 0.01 --feed 0.004 --work-length 8");
     INFO(r.out);
     CHECK(r.exitCode == 0);
     // Source: references R3: Morse 3 ratio 1:19.922, 0.60235 in/ft, gauge 0.938 in,
@@ -65,7 +67,10 @@ TEST_CASE("swarf taper: R1 offsets and R5 compound in mm", "[cli][taper]") {
 
 TEST_CASE("swarf taper: bad values exit 2 with the option, the value and what was expected",
           "[cli][taper]") {
-    struct Bad { const char* args; const char* mustSay; };
+    struct Bad {
+        const char* args;
+        const char* mustSay;
+    };
     const Bad cases[] = {
         {"taper --dia 25 --ratio abc", "--ratio = abc: a ratio on diameter"},
         {"taper --dia -3 --ratio 1:20", "--dia = -3: a length in mm greater than 0"},
@@ -73,7 +78,8 @@ TEST_CASE("swarf taper: bad values exit 2 with the option, the value and what wa
         {"taper --dia 25 --half-angle 95", "--half-angle = 95: an angle over 0° and under 90°"},
         {"taper --dia 25 --ratio 20 --included 3", "only one taper form"},
         {"taper --dia 25 --ratio 20 --units furlong", "--units = furlong: mm or inch"},
-        {"taper --standard NPT", "--dia = (none given): the gauge diameter, which NPT does not fix"},
+        {"taper --standard NPT",
+         "--dia = (none given): the gauge diameter, which NPT does not fix"},
         {"taper --dia 25", "taper = (none given): one of --standard, --half-angle"},
         {"taper --dia 25 --ratio 20 --blocks 1,x", "--blocks = 1,x: block sizes in mm > 0"},
         {"taper --dia 25 --half-angle 8°60′", "--half-angle = 8°60′: an angle"},

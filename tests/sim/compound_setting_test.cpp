@@ -31,8 +31,8 @@ TEST_CASE("compound scale round trip and stroke", "[compound]") {
         CHECK(stroke * std::cos(theta) == Approx(80.0));
         CHECK(diameterChangeForCompoundTravelMm(theta, stroke) ==
               Approx(2.0 * 80.0 * std::tan(theta)));
-        CHECK(compoundTravelForDiameterChangeMm(theta, diameterChangeForCompoundTravelMm(theta, 7.0)) ==
-              Approx(7.0));
+        CHECK(compoundTravelForDiameterChangeMm(
+                  theta, diameterChangeForCompoundTravelMm(theta, 7.0)) == Approx(7.0));
     }
     // derived: 60/20/80 mm cone → stroke 80 / cos 14.036° = 82.462 mm (= sqrt(80² + 20²)).
     CHECK(compoundStrokeMm(std::atan(0.25), 80.0) == Approx(std::sqrt(80.0 * 80.0 + 20.0 * 20.0)));

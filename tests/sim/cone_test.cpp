@@ -22,7 +22,8 @@ TEST_CASE("diameter and plane round trip", "[cone]") {
 
 TEST_CASE("round trips between every cone form", "[cone]") {
     // derived: each form converts to the half angle and back.
-    for (double deg : {0.2, 1.43210, 1.7899, 2.8624, 5.0, 8.29714, 14.036, 30.0, 45.0, 60.0, 80.0}) {
+    for (double deg :
+         {0.2, 1.43210, 1.7899, 2.8624, 5.0, 8.29714, 14.036, 30.0, 45.0, 60.0, 80.0}) {
         INFO(deg << "°");
         const double t = degToRad(deg);
         const Cone c{0.0, 25.0, t, Widens::TowardChuck};

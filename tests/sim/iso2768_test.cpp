@@ -8,7 +8,8 @@ using namespace swarf;
 
 TEST_CASE("ISO 2768-1 linear tolerances, 0.5 to 400 mm", "[iso2768]") {
     // Representative sizes inside each band and at its upper limit (limits belong to the band).
-    const double sizes[5][2] = {{1.0, 3.0}, {4.0, 6.0}, {10.0, 30.0}, {50.0, 120.0}, {200.0, 400.0}};
+    const double sizes[5][2] = {
+        {1.0, 3.0}, {4.0, 6.0}, {10.0, 30.0}, {50.0, 120.0}, {200.0, 400.0}};
     // Source: references R9 (ISO 2768-1), bands 0.5–3/3–6/6–30/30–120/120–400 mm.
     const double f[5] = {0.05, 0.05, 0.1, 0.15, 0.2};
     const double m[5] = {0.1, 0.1, 0.2, 0.3, 0.5};
@@ -21,7 +22,8 @@ TEST_CASE("ISO 2768-1 linear tolerances, 0.5 to 400 mm", "[iso2768]") {
             CHECK(*iso2768LinearToleranceMm(Iso2768::m, size) == Approx(m[band]));
             CHECK(*iso2768LinearToleranceMm(Iso2768::c, size) == Approx(c[band]));
             if (v[band] < 0)
-                CHECK_FALSE(iso2768LinearToleranceMm(Iso2768::v, size)); // Source: references R9 ("–")
+                CHECK_FALSE(
+                    iso2768LinearToleranceMm(Iso2768::v, size)); // Source: references R9 ("–")
             else
                 CHECK(*iso2768LinearToleranceMm(Iso2768::v, size) == Approx(v[band]));
         }

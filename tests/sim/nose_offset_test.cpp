@@ -8,7 +8,9 @@
 using namespace swarf;
 
 TEST_CASE("R1 table", "[nose_offset]") {
-    struct Row { double r, deg, dx, dxd, dz, normal; };
+    struct Row {
+        double r, deg, dx, dxd, dz, normal;
+    };
     // Source: references R1 (plane geometry; Smid, CNC Programming Handbook, from memory).
     const Row rows[] = {
         {0.8, 45, 0.46863, 0.93726, 0.46863, 0.33137},
@@ -37,8 +39,9 @@ TEST_CASE("R1 table", "[nose_offset]") {
 }
 
 TEST_CASE("R1: the right formula, not the ones that circulate", "[nose_offset]") {
-    // Source: references R1: ΔX = r(1 − tan((90° − θ)/2)) = r(1 + tan θ − sec θ); ΔZ = r(1 − tan(θ/2)).
-    // Wrong ones mentioned there: a form with sin(45° − θ/2), and the contact point R(1 − cos α).
+    // Source: references R1: ΔX = r(1 − tan((90° − θ)/2)) = r(1 + tan θ − sec θ); ΔZ = r(1 −
+    // tan(θ/2)). Wrong ones mentioned there: a form with sin(45° − θ/2), and the contact point R(1
+    // − cos α).
     const double r = 0.8;
     for (double deg : {30.0, 60.0}) {
         const double t = degToRad(deg);
@@ -76,7 +79,7 @@ TEST_CASE("offsets cancel the gap for cones widening either way", "[nose_offset]
         for (Widens w : {Widens::TowardChuck, Widens::TowardTailstock}) {
             for (TipSide side : {TipSide::ChuckSide, TipSide::TailstockSide}) {
                 INFO(deg << "° widens " << (w == Widens::TowardChuck ? "chuck" : "tailstock")
-                          << " tip " << (side == TipSide::ChuckSide ? "chuck" : "tailstock"));
+                         << " tip " << (side == TipSide::ChuckSide ? "chuck" : "tailstock"));
                 const auto o = noseRadiusOffsets(r, t, w, side);
                 const double gap = cutGap(r, t, w, side, 0, 0);
                 CHECK(o.leftOn == (gap > 0));

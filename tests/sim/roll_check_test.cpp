@@ -1,6 +1,6 @@
 // Tests for sim/include/swarf/sim/roll_check.h.
-#include "swarf/sim/roll_check.h"
 #include "swarf/sim/cone.h"
+#include "swarf/sim/roll_check.h"
 #include "swarf/sim/units.h"
 
 #include <catch2/catch.hpp>
@@ -38,6 +38,7 @@ TEST_CASE("diameter change per unit length", "[roll_check]") {
     CHECK(diameterChangeOverLengthMm(theta, 1.0) == Approx(0.05));
     CHECK(diameterChangeOverLengthMm(theta, kMmPerInch) == Approx(1.27));
     // Source: references R3: Jarno 0.600 in/ft → 0.6 in of diameter per 12 in.
-    CHECK(diameterChangeOverLengthMm(halfAngleFromTaperPerFoot(0.6), 12 * kMmPerInch) / kMmPerInch ==
+    CHECK(diameterChangeOverLengthMm(halfAngleFromTaperPerFoot(0.6), 12 * kMmPerInch) /
+              kMmPerInch ==
           Approx(0.6));
 }

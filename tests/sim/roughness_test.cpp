@@ -22,7 +22,8 @@ double raNumeric(double f, double r) {
     }
     mean /= n;
     double ra = 0;
-    for (double v : y) ra += std::fabs(v - mean);
+    for (double v : y)
+        ra += std::fabs(v - mean);
     return ra / n;
 }
 } // namespace
@@ -40,7 +41,8 @@ TEST_CASE("R2 check values", "[roughness]") {
     CHECK(raApproxMm(0.1, 0.4) * 1000 == Approx(0.8025).margin(5e-5));
 }
 
-TEST_CASE("exact Ra coefficient: 0.03217 at f 0.2, r 0.8; f²/(18√3 r) for small feeds", "[roughness]") {
+TEST_CASE("exact Ra coefficient: 0.03217 at f 0.2, r 0.8; f²/(18√3 r) for small feeds",
+          "[roughness]") {
     // Source: references R2: the exact arc profile gives 0.03217 f²/r (for its f 0.2, r 0.8).
     const double f = 0.2, r = 0.8;
     CHECK(raExactMm(f, r) / (f * f / r) == Approx(0.03217).margin(1e-5));
@@ -51,7 +53,8 @@ TEST_CASE("exact Ra coefficient: 0.03217 at f 0.2, r 0.8; f²/(18√3 r) for sma
 
 TEST_CASE("exact Ra agrees with numeric integration of the arc", "[roughness]") {
     // derived: independent midpoint integration.
-    const std::vector<std::pair<double, double>> cases{{0.2, 0.8}, {0.1, 0.4}, {0.5, 0.4}, {0.75, 0.4}, {0.05, 2.4}};
+    const std::vector<std::pair<double, double>> cases{
+        {0.2, 0.8}, {0.1, 0.4}, {0.5, 0.4}, {0.75, 0.4}, {0.05, 2.4}};
     for (auto [f, r] : cases) {
         INFO("f " << f << " r " << r);
         CHECK(raExactMm(f, r) == Approx(raNumeric(f, r)).epsilon(1e-6));

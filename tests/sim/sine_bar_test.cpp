@@ -12,14 +12,17 @@ namespace {
 // Every block of the stack is in the set, and none is used more often than the set has it.
 bool blocksFromSet(const GaugeStack& s, const GaugeBlockSet& set) {
     std::map<long long, int> have;
-    for (double b : set.sizes) ++have[std::llround(b * 1e6)];
+    for (double b : set.sizes)
+        ++have[std::llround(b * 1e6)];
     for (double b : s.blocks)
-        if (--have[std::llround(b * 1e6)] < 0) return false;
+        if (--have[std::llround(b * 1e6)] < 0)
+            return false;
     return true;
 }
 double sum(const std::vector<double>& v) {
     double t = 0;
-    for (double x : v) t += x;
+    for (double x : v)
+        t += x;
     return t;
 }
 } // namespace
@@ -86,7 +89,8 @@ TEST_CASE("every stack of the four bars over a sweep of angles", "[sine_bar]") {
             const auto s = combineGaugeBlocks(h, set);
             // derived: the common sets build every step from about 0.2 in and 3 mm up; below
             // that some heights have no combination (see the next test case).
-            if (fromMm(h, set.units) < (set.units == Units::Inch ? 0.2 : 3.0)) continue;
+            if (fromMm(h, set.units) < (set.units == Units::Inch ? 0.2 : 3.0))
+                continue;
             REQUIRE(s.found);
             CHECK(blocksFromSet(s, set));
             CHECK(std::fabs(s.builtMm - h) <= s.resolutionMm / 2 + 1e-9);
@@ -122,14 +126,17 @@ TEST_CASE("fewest blocks (checked by brute force on a small set)", "[sine_bar]")
         double h = 0;
         int count = 0;
         for (int i = 0; i < n; ++i)
-            if (mask & (1 << i)) h += set.sizes[i], ++count;
+            if (mask & (1 << i))
+                h += set.sizes[i], ++count;
         int fewest = count;
         for (int m2 = 1; m2 < (1 << n); ++m2) {
             double h2 = 0;
             int c2 = 0;
             for (int i = 0; i < n; ++i)
-                if (m2 & (1 << i)) h2 += set.sizes[i], ++c2;
-            if (std::fabs(h2 - h) < 1e-9) fewest = std::min(fewest, c2);
+                if (m2 & (1 << i))
+                    h2 += set.sizes[i], ++c2;
+            if (std::fabs(h2 - h) < 1e-9)
+                fewest = std::min(fewest, c2);
         }
         const auto s = combineGaugeBlocks(h, set);
         REQUIRE(s.found);

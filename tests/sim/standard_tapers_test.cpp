@@ -9,8 +9,12 @@
 using namespace swarf;
 
 namespace {
-double dms(double d, double m, double s) { return degToRad(d + m / 60.0 + s / 3600.0); }
-double includedOf(const StandardTaper& t) { return 2.0 * halfAngleFromTaperRate(t.taperRate); }
+double dms(double d, double m, double s) {
+    return degToRad(d + m / 60.0 + s / 3600.0);
+}
+double includedOf(const StandardTaper& t) {
+    return 2.0 * halfAngleFromTaperRate(t.taperRate);
+}
 constexpr double kArcSec = 3.14159265358979323846 / 180.0 / 3600.0;
 } // namespace
 
@@ -43,7 +47,8 @@ TEST_CASE("Morse 0-6 ratios, taper per foot, gauge diameters and included angles
 }
 
 TEST_CASE("forgiving names", "[taper]") {
-    for (const char* n : {"morse3", "MT3", "Morse 3", "mt 3", "Morse #3", "morse no. 3", "MORSE-3"}) {
+    for (const char* n :
+         {"morse3", "MT3", "Morse 3", "mt 3", "Morse #3", "morse no. 3", "MORSE-3"}) {
         INFO(n);
         auto t = lookupStandardTaper(n);
         REQUIRE(t);
@@ -127,9 +132,12 @@ TEST_CASE("NPT, Jarno, Brown & Sharpe", "[taper]") {
 TEST_CASE("ISO 1119 series", "[taper]") {
     // Source: references R3, ISO 1119: 1:10 → 5°43′29.3176″, 1:50 → 1°8′45.1586″,
     // 1:3 → 18°55′28.7199″ included.
-    struct Row { const char* name; double d, m, s; };
-    for (const Row& r : {Row{"1:10", 5, 43, 29.3176}, Row{"1:50", 1, 8, 45.1586},
-                         Row{"1:3", 18, 55, 28.7199}}) {
+    struct Row {
+        const char* name;
+        double d, m, s;
+    };
+    for (const Row& r :
+         {Row{"1:10", 5, 43, 29.3176}, Row{"1:50", 1, 8, 45.1586}, Row{"1:3", 18, 55, 28.7199}}) {
         INFO(r.name);
         auto t = lookupStandardTaper(r.name);
         REQUIRE(t);

@@ -1,6 +1,6 @@
 // Tests for sim/include/swarf/sim/taper_methods.h.
-#include "swarf/sim/taper_methods.h"
 #include "swarf/sim/cone.h"
+#include "swarf/sim/taper_methods.h"
 #include "swarf/sim/units.h"
 
 #include <catch2/catch.hpp>
@@ -12,7 +12,8 @@ TEST_CASE("R5 tailstock set-over", "[taper_methods]") {
     // Source: references R5 (F. D. Jones, Turning and Boring): 2½ → 2 in over 6 in, 9 in work
     // → 3/8 in.
     CHECK(tailstockSetOverFromDiametersMm(2.5, 2.0, 6.0, 9.0) == Approx(0.375));
-    const double theta = halfAngleFromTwoDiameters(0, 2.0 * kMmPerInch, 6 * kMmPerInch, 2.5 * kMmPerInch);
+    const double theta =
+        halfAngleFromTwoDiameters(0, 2.0 * kMmPerInch, 6 * kMmPerInch, 2.5 * kMmPerInch);
     CHECK(tailstockSetOverMm(theta, 9 * kMmPerInch) / kMmPerInch == Approx(0.375));
 }
 
@@ -47,7 +48,8 @@ TEST_CASE("judging the methods", "[taper_methods]") {
     CHECK_FALSE(v[0].practical); // 115 mm set-over
     CHECK_FALSE(v[1].practical); // beyond about 10°
     CHECK(v[2].practical);
-    for (const auto& m : v) CHECK_FALSE(m.why.empty());
+    for (const auto& m : v)
+        CHECK_FALSE(m.why.empty());
 
     // No work length: set-over cannot be judged; a bore: no set-over at all.
     TaperJob noLen{degToRad(2), 50.0, std::nullopt, true};

@@ -42,20 +42,20 @@ struct TaperOptions {
 // option leaves nothing half-printed.
 std::string gOut;
 
-template <typename... Args>
-void say(fmt::format_string<Args...> f, Args&&... args) {
+template <typename... Args> void say(fmt::format_string<Args...> f, Args&&... args) {
     gOut += fmt::format(f, std::forward<Args>(args)...);
 }
 
-[[noreturn]] void bad(const std::string& option, const std::string& value, const std::string& expected) {
+[[noreturn]] void bad(const std::string& option, const std::string& value,
+                      const std::string& expected) {
     throw InputError(SourceLoc{"command line", 0, 0}, option, value, expected);
 }
 
 // The resolved cone and the context to print it in.
 struct Bench {
     Units u = Units::Mm;
-    std::string source;          // how the cone was given, for the heading
-    std::string note;            // a standard's note
+    std::string source; // how the cone was given, for the heading
+    std::string note;   // a standard's note
     double gaugeDiaMm = 0;
     double halfAngleRad = 0;
     bool gaugeAtLarge = true;
@@ -70,29 +70,39 @@ struct Bench {
 };
 
 // A length option in the chosen units, > 0 (or ≥ 0, or any sign), returned in mm.
-double lengthOpt(const std::string& name, const std::string& text, Units u, const char* rule = ">0") {
+double lengthOpt(const std::string& name, const std::string& text, Units u,
+                 const char* rule = ">0") {
     const std::string unit = unitName(u);
     auto v = parseNumberText(text);
     const std::string r = rule;
-    if (!v) bad(name, text, "a length in " + unit + " (a plain number)");
-    if (r == ">0" && !(*v > 0)) bad(name, text, "a length in " + unit + " greater than 0");
-    if (r == ">=0" && !(*v >= 0)) bad(name, text, "a length in " + unit + " of 0 or more");
+    if (!v)
+        bad(name, text, "a length in " + unit + " (a plain number)");
+    if (r == ">0" && !(*v > 0))
+        bad(name, text, "a length in " + unit + " greater than 0");
+    if (r == ">=0" && !(*v >= 0))
+        bad(name, text, "a length in " + unit + " of 0 or more");
     return toMm(*v, u);
 }
 
 std::optional<double> optLength(const std::string& name, const std::string& text, Units u,
                                 const char* rule = ">0") {
-    if (text.empty()) return std::nullopt;
+    if (text.empty())
+        return std::nullopt;
     return lengthOpt(name, text, u, rule);
 }
 
-std::string degText(double rad) { return fmt::format("{:.5f}°", radToDeg(rad)); }
+std::string degText(double rad) {
+    return fmt::format("{:.5f}°", radToDeg(rad));
+}
 
 Bench resolveCone(const TaperOptions& o) {
     Bench b;
-    if (o.units == "mm") b.u = Units::Mm;
-    else if (o.units == "inch" || o.units == "in") b.u = Units::Inch;
-    else bad("--units", o.units, "mm or inch");
+    if (o.units == "mm")
+        b.u = Units::Mm;
+    else if (o.units == "inch" || o.units == "in")
+        b.u = Units::Inch;
+    else
+        bad("--units", o.units, "mm or inch");
     const Units u = b.u;
 
     // Exactly one taper form.
@@ -102,14 +112,16 @@ Bench resolveCone(const TaperOptions& o) {
         {"--dia2", &o.dia2}};
     const char* given = nullptr;
     for (const auto& [name, value] : forms) {
-        if (value->empty()) continue;
+        if (value->empty())
+            continue;
         if (given)
             bad(name, *value, std::string("only one taper form; ") + given + " is given too");
         given = name;
     }
     if (!given)
-        bad("taper", "(none given)", "one of --standard, --half-angle, --included, --ratio, "
-                                     "--per-foot, --rate, or --dia2 with --length");
+        bad("taper", "(none given)",
+            "one of --standard, --half-angle, --included, --ratio, "
+            "--per-foot, --rate, or --dia2 with --length");
 
     b.lengthMm = optLength("--length", o.length, u);
     std::optional<StandardTaper> st;
@@ -137,17 +149,20 @@ Bench resolveCone(const TaperOptions& o) {
         b.source = "included angle " + o.included;
     } else if (g == "--ratio") {
         auto k = parseRatioText(o.ratio);
-        if (!k) bad(g, o.ratio, "a ratio on diameter written 1:k or k, with k > 0");
+        if (!k)
+            bad(g, o.ratio, "a ratio on diameter written 1:k or k, with k > 0");
         b.halfAngleRad = halfAngleFromRatio(*k);
         b.source = "ratio 1:" + fmt::format("{:g}", *k);
     } else if (g == "--per-foot") {
         auto t = parseNumberText(o.perFoot);
-        if (!t || !(*t > 0)) bad(g, o.perFoot, "a taper per foot on diameter in in/ft, > 0");
+        if (!t || !(*t > 0))
+            bad(g, o.perFoot, "a taper per foot on diameter in in/ft, > 0");
         b.halfAngleRad = halfAngleFromTaperPerFoot(*t);
         b.source = fmt::format("taper per foot {:g} in/ft", *t);
     } else if (g == "--rate") {
         auto c = parseNumberText(o.rate);
-        if (!c || !(*c > 0)) bad(g, o.rate, "a rate of taper C = (D − d)/L, > 0");
+        if (!c || !(*c > 0))
+            bad(g, o.rate, "a rate of taper C = (D − d)/L, > 0");
         b.halfAngleRad = halfAngleFromTaperRate(*c);
         b.source = fmt::format("rate of taper C = {:g}", *c);
     }
@@ -169,16 +184,21 @@ Bench resolveCone(const TaperOptions& o) {
 
     if (g == "--dia2") {
         const double d2 = lengthOpt("--dia2", o.dia2, u);
-        if (!b.lengthMm) bad("--length", "(none given)", "the axial length between --dia and --dia2");
-        if (std::fabs(d2 - b.gaugeDiaMm) < 1e-9) bad("--dia2", o.dia2, "a diameter other than --dia");
+        if (!b.lengthMm)
+            bad("--length", "(none given)", "the axial length between --dia and --dia2");
+        if (std::fabs(d2 - b.gaugeDiaMm) < 1e-9)
+            bad("--dia2", o.dia2, "a diameter other than --dia");
         b.halfAngleRad = halfAngleFromTwoDiameters(0, b.gaugeDiaMm, *b.lengthMm, d2);
         b.gaugeAtLarge = b.gaugeDiaMm > d2;
         b.source = "diameters " + formatLength(b.gaugeDiaMm, u) + " and " + formatLength(d2, u) +
                    " over " + formatLength(*b.lengthMm, u);
     } else {
-        if (o.gaugeEnd == "large") b.gaugeAtLarge = true;
-        else if (o.gaugeEnd == "small") b.gaugeAtLarge = false;
-        else bad("--gauge-end", o.gaugeEnd, "large or small");
+        if (o.gaugeEnd == "large")
+            b.gaugeAtLarge = true;
+        else if (o.gaugeEnd == "small")
+            b.gaugeAtLarge = false;
+        else
+            bad("--gauge-end", o.gaugeEnd, "large or small");
     }
     if (b.lengthMm && !(b.smallMm() > 0))
         bad("--length", o.length,
@@ -186,9 +206,12 @@ Bench resolveCone(const TaperOptions& o) {
                 formatLength(b.largeMm() / (2 * std::tan(b.halfAngleRad)), u) +
                 " from its large end to its point");
 
-    if (o.widens == "chuck") b.widens = Widens::TowardChuck;
-    else if (o.widens == "tailstock") b.widens = Widens::TowardTailstock;
-    else bad("--widens", o.widens, "chuck or tailstock (the way the diameter grows)");
+    if (o.widens == "chuck")
+        b.widens = Widens::TowardChuck;
+    else if (o.widens == "tailstock")
+        b.widens = Widens::TowardTailstock;
+    else
+        bad("--widens", o.widens, "chuck or tailstock (the way the diameter grows)");
     return b;
 }
 
@@ -197,38 +220,40 @@ void printCone(const Bench& b, const TaperOptions& o) {
     const double t = b.halfAngleRad;
     const double c = 2 * std::tan(t);
     say("Cone: {}\n", b.source);
-    if (!b.note.empty()) say("  ({})\n", b.note);
+    if (!b.note.empty())
+        say("  ({})\n", b.note);
     say("  half angle        {:<14} {}\n", degText(t), formatDms(t, 2));
     say("  included angle    {:<14} {}\n", degText(2 * t), formatDms(2 * t, 2));
     say("  ratio             1:{:.4f}\n", 1 / c);
     say("  taper per foot    {:.5f} in/ft (on diameter)\n", 12 * c);
     say("  rate C            {:.6f} (diameter change per unit length)\n", c);
     say("  gauge diameter    {} (at the {} end)\n", formatLength(b.gaugeDiaMm, u),
-               b.gaugeAtLarge ? "large" : "small");
+        b.gaugeAtLarge ? "large" : "small");
     if (b.lengthMm) {
         say("  length            {}\n", formatLength(*b.lengthMm, u));
         say("  large end         {}\n", formatLength(b.largeMm(), u));
         say("  small end         {}\n", formatLength(b.smallMm(), u));
     }
     say("  diameter change   {} per {}, {} per {}\n",
-               formatLength(c * toMm(1, u), u, u == Units::Inch ? 5 : 4), u == Units::Inch ? "inch" : "mm",
-               formatLength(c * toMm(u == Units::Inch ? 12 : 100, u), u),
-               u == Units::Inch ? "foot" : "100 mm");
+        formatLength(c * toMm(1, u), u, u == Units::Inch ? 5 : 4), u == Units::Inch ? "inch" : "mm",
+        formatLength(c * toMm(u == Units::Inch ? 12 : 100, u), u),
+        u == Units::Inch ? "foot" : "100 mm");
     const Cone cone{0, b.gaugeDiaMm, t, Widens::TowardChuck};
     if (!o.at.empty()) {
         auto v = parseNumberText(o.at);
-        if (!v) bad("--at", o.at, std::string("a distance in ") + unitName(u) + " from the gauge plane");
+        if (!v)
+            bad("--at", o.at,
+                std::string("a distance in ") + unitName(u) + " from the gauge plane");
         // Positive toward the cone's other end.
         const double d = cone.diameterAt((b.gaugeAtLarge ? -1 : 1) * toMm(*v, u));
         say("  at {} from the gauge plane toward the {} end: diameter {}\n",
-                   formatLength(toMm(*v, u), u), b.gaugeAtLarge ? "small" : "large",
-                   formatLength(d, u));
+            formatLength(toMm(*v, u), u), b.gaugeAtLarge ? "small" : "large", formatLength(d, u));
     }
     if (!o.toDia.empty()) {
         const double d = lengthOpt("--to-dia", o.toDia, u);
         say("  diameter {} is {} from the gauge plane ({} end side)\n", formatLength(d, u),
-                   formatLength(lengthBetweenDiameters(cone, b.gaugeDiaMm, d), u),
-                   d < b.gaugeDiaMm ? "small" : "large");
+            formatLength(lengthBetweenDiameters(cone, b.gaugeDiaMm, d), u),
+            d < b.gaugeDiaMm ? "small" : "large");
     }
 }
 
@@ -237,21 +262,22 @@ void printCompound(const Bench& b) {
     const double t = b.halfAngleRad;
     say("\nCompound slide (saddle locked, in-feed on the cross-slide)\n");
     say("  scale graduated from the spindle axis:  set {}\n",
-               formatDms(compoundScaleReadingRad(t, CompoundScale::FromAxis), 1));
+        formatDms(compoundScaleReadingRad(t, CompoundScale::FromAxis), 1));
     say("  scale graduated from the cross-slide:   set {}\n",
-               formatDms(compoundScaleReadingRad(t, CompoundScale::FromCrossSlide), 1));
+        formatDms(compoundScaleReadingRad(t, CompoundScale::FromCrossSlide), 1));
     if (b.lengthMm)
-        say("  stroke to cover {} of cone:  {} along the compound\n",
-                   formatLength(*b.lengthMm, u), formatLength(compoundStrokeMm(t, *b.lengthMm), u));
+        say("  stroke to cover {} of cone:  {} along the compound\n", formatLength(*b.lengthMm, u),
+            formatLength(compoundStrokeMm(t, *b.lengthMm), u));
     const double unit = toMm(u == Units::Inch ? 0.001 : 0.01, u);
     say("  {} of compound travel changes the diameter by {}\n", formatLength(unit, u),
-               formatLength(diameterChangeForCompoundTravelMm(t, unit), u, u == Units::Inch ? 6 : 5));
+        formatLength(diameterChangeForCompoundTravelMm(t, unit), u, u == Units::Inch ? 6 : 5));
 }
 
 std::string blockList(const GaugeStack& s, Units setUnits) {
     std::string out;
     for (double v : s.blocks) {
-        if (!out.empty()) out += " + ";
+        if (!out.empty())
+            out += " + ";
         out += fmt::format("{:.{}f}", v, setUnits == Units::Inch ? 4 : 3);
     }
     return out + " " + unitName(setUnits);
@@ -261,8 +287,8 @@ void printSineBars(const Bench& b, const std::optional<GaugeBlockSet>& custom) {
     const GaugeBlockSet inch = custom ? *custom : commonInchBlockSet();
     const GaugeBlockSet metric = custom ? *custom : commonMetricBlockSet();
     say("\nSine bar: stack under one roll (H = L sin angle)\n");
-    say("  blocks from: {}\n", custom ? custom->name
-                                              : inch.name + " / " + metric.name + " (common practice)");
+    say("  blocks from: {}\n",
+        custom ? custom->name : inch.name + " / " + metric.name + " (common practice)");
     const std::pair<const char*, double> uses[] = {
         {"half angle (work on sine centres: the top line lies level)", b.halfAngleRad},
         {"included angle (cone lying on the bar: the top line lies level)", 2 * b.halfAngleRad}};
@@ -292,16 +318,15 @@ void printNoseOffsets(const Bench& b, double r, TipSide side) {
     const auto o = noseRadiusOffsets(r, b.halfAngleRad, b.widens, side);
     const int fine = u == Units::Inch ? 5 : 4;
     say("\nNose radius {} (outside cone widening toward the {}; imaginary tip on the {} side)\n",
-               formatLength(r, u, fine), b.widens == Widens::TowardChuck ? "chuck" : "tailstock",
-               side == TipSide::ChuckSide ? "chuck" : "tailstock");
+        formatLength(r, u, fine), b.widens == Widens::TowardChuck ? "chuck" : "tailstock",
+        side == TipSide::ChuckSide ? "chuck" : "tailstock");
     say("  path on the drawing line {}: {} normal to the surface\n",
-               o.leftOn ? "leaves metal on" : "overcuts", formatLength(o.normalErrorMm, u, fine));
+        o.leftOn ? "leaves metal on" : "overcuts", formatLength(o.normalErrorMm, u, fine));
     say("  shift the path by ONE of:\n");
-    say("    ΔX {} on radius = {} on diameter, {} the axis\n",
-               formatLength(o.dxRadiusMm, u, fine), formatLength(o.dxDiameterMm, u, fine),
-               o.xShiftSign < 0 ? "toward" : "away from");
+    say("    ΔX {} on radius = {} on diameter, {} the axis\n", formatLength(o.dxRadiusMm, u, fine),
+        formatLength(o.dxDiameterMm, u, fine), o.xShiftSign < 0 ? "toward" : "away from");
     say("    ΔZ {} toward the {}\n", formatLength(o.dzMm, u, fine),
-               o.zShiftSign > 0 ? "chuck" : "tailstock");
+        o.zShiftSign > 0 ? "chuck" : "tailstock");
 }
 
 void printMethods(const Bench& b, const TaperOptions& o) {
@@ -312,9 +337,12 @@ void printMethods(const Bench& b, const TaperOptions& o) {
         return;
     }
     TaperMethodLimits lim;
-    if (auto v = optLength("--compound-travel", o.compoundTravel, u)) lim.compoundTravelMm = *v;
-    if (auto v = optLength("--guide-bar-length", o.guideBarLength, u)) lim.attachmentTravelMm = *v;
-    if (auto v = optLength("--max-set-over", o.maxSetOver, u)) lim.maxSetOverMm = *v;
+    if (auto v = optLength("--compound-travel", o.compoundTravel, u))
+        lim.compoundTravelMm = *v;
+    if (auto v = optLength("--guide-bar-length", o.guideBarLength, u))
+        lim.attachmentTravelMm = *v;
+    if (auto v = optLength("--max-set-over", o.maxSetOver, u))
+        lim.maxSetOverMm = *v;
     if (!o.guideBarMaxAngle.empty()) {
         auto a = parseAngleText(o.guideBarMaxAngle);
         if (!a || !(*a > 0 && *a < degToRad(90)))
@@ -323,13 +351,14 @@ void printMethods(const Bench& b, const TaperOptions& o) {
     }
     TaperJob job{b.halfAngleRad, *b.lengthMm, optLength("--work-length", o.workLength, u), true};
     say("  taper attachment guide bar: set {} from the axis (tan = TPF/24); offset {} per {}\n",
-               formatDms(b.halfAngleRad, 1),
-               formatLength(taperAttachmentOffsetMm(b.halfAngleRad, toMm(u == Units::Inch ? 10 : 100, u)), u),
-               u == Units::Inch ? "10 in of bar" : "100 mm of bar");
+        formatDms(b.halfAngleRad, 1),
+        formatLength(taperAttachmentOffsetMm(b.halfAngleRad, toMm(u == Units::Inch ? 10 : 100, u)),
+                     u),
+        u == Units::Inch ? "10 in of bar" : "100 mm of bar");
     if (job.workLengthMm)
         say("  tailstock set-over for {} of work between centres: {}\n",
-                   formatLength(*job.workLengthMm, u),
-                   formatLength(tailstockSetOverMm(b.halfAngleRad, *job.workLengthMm), u));
+            formatLength(*job.workLengthMm, u),
+            formatLength(tailstockSetOverMm(b.halfAngleRad, *job.workLengthMm), u));
     for (const auto& m : judgeTaperMethods(job, lim))
         say("  {:<20} {:<14} {}\n", m.name, m.practical ? "practical" : "not practical", m.why);
 }
@@ -338,7 +367,7 @@ void printRolls(const Bench& b, const TaperOptions& o) {
     const Units u = b.u;
     const double d = lengthOpt("--rolls", o.rolls, u);
     say("\nOver two rolls of {} (cone standing on its small end on a surface plate)\n",
-               formatLength(d, u));
+        formatLength(d, u));
     if (!b.lengthMm) {
         say("  give --length to place the rolls on the cone\n");
         return;
@@ -347,10 +376,12 @@ void printRolls(const Bench& b, const TaperOptions& o) {
     if (!o.rollStacks.empty()) {
         const auto comma = o.rollStacks.find(',');
         if (comma == std::string::npos)
-            bad("--roll-stacks", o.rollStacks, std::string("two stack heights in ") + unitName(u) + ", as H1,H2");
+            bad("--roll-stacks", o.rollStacks,
+                std::string("two stack heights in ") + unitName(u) + ", as H1,H2");
         h1 = lengthOpt("--roll-stacks", o.rollStacks.substr(0, comma), u, ">=0");
         h2 = lengthOpt("--roll-stacks", o.rollStacks.substr(comma + 1), u, ">=0");
-        if (h1 == h2) bad("--roll-stacks", o.rollStacks, "two different heights");
+        if (h1 == h2)
+            bad("--roll-stacks", o.rollStacks, "two different heights");
     } else {
         // Lower rolls on the plate; upper rolls on the highest round stack that keeps them on
         // the cone.
@@ -366,42 +397,44 @@ void printRolls(const Bench& b, const TaperOptions& o) {
     const auto rr = rollReadingsForCone(b.smallMm(), b.halfAngleRad, d, h1, h2);
     const int fine = u == Units::Inch ? 5 : 4;
     say("  rolls on stacks {}: centres {} up, cone diameter {}, read M1 = {}\n",
-               formatLength(h1, u), formatLength(rr.centreHeight1Mm, u),
-               formatLength(rr.diameter1Mm, u, fine), formatLength(rr.reading1Mm, u, fine));
+        formatLength(h1, u), formatLength(rr.centreHeight1Mm, u),
+        formatLength(rr.diameter1Mm, u, fine), formatLength(rr.reading1Mm, u, fine));
     say("  rolls on stacks {}: centres {} up, cone diameter {}, read M2 = {}\n",
-               formatLength(h2, u), formatLength(rr.centreHeight2Mm, u),
-               formatLength(rr.diameter2Mm, u, fine), formatLength(rr.reading2Mm, u, fine));
+        formatLength(h2, u), formatLength(rr.centreHeight2Mm, u),
+        formatLength(rr.diameter2Mm, u, fine), formatLength(rr.reading2Mm, u, fine));
     say("  M2 − M1 = {} for {} of height; M − D = {}\n",
-               formatLength(rr.reading2Mm - rr.reading1Mm, u, fine), formatLength(h2 - h1, u),
-               formatLength(rr.reading1Mm - rr.diameter1Mm, u, fine + 1));
+        formatLength(rr.reading2Mm - rr.reading1Mm, u, fine), formatLength(h2 - h1, u),
+        formatLength(rr.reading1Mm - rr.diameter1Mm, u, fine + 1));
     say("  from your readings: tan(half angle) = (M2 − M1) / (2 (H2 − H1)); "
-               "D = M − d (1 + sec(half angle))\n");
+        "D = M − d (1 + sec(half angle))\n");
 }
 
 void printTipHeight(const Bench& b, double h) {
     const Units u = b.u;
     say("\nTip {} {} centre (a straight cut makes a hyperboloid, not a cone)\n",
-               formatLength(std::fabs(h), u, u == Units::Inch ? 4 : 3), h >= 0 ? "above" : "below");
+        formatLength(std::fabs(h), u, u == Units::Inch ? 4 : 3), h >= 0 ? "above" : "below");
     std::vector<std::pair<const char*, double>> dias{{"gauge", b.gaugeDiaMm}};
-    if (b.lengthMm) dias = {{"large end", b.largeMm()}, {"small end", b.smallMm()}};
+    if (b.lengthMm)
+        dias = {{"large end", b.largeMm()}, {"small end", b.smallMm()}};
     for (const auto& [what, d] : dias) {
         if (std::fabs(h) >= d / 2) {
             say("  {} {}: the tip is off by more than the radius\n", what, formatLength(d, u));
             continue;
         }
-        say("  {:<10} {}: cut {} larger on diameter (≈ 2h²/D = {})\n", what,
-                   formatLength(d, u), formatSmallLength(diameterErrorOffCentreMm(d, h), u),
-                   formatSmallLength(diameterErrorOffCentreApproxMm(d, h), u));
+        say("  {:<10} {}: cut {} larger on diameter (≈ 2h²/D = {})\n", what, formatLength(d, u),
+            formatSmallLength(diameterErrorOffCentreMm(d, h), u),
+            formatSmallLength(diameterErrorOffCentreApproxMm(d, h), u));
     }
 }
 
 void printRoughness(const Bench& b, double f, double r) {
     const Units u = b.u;
     say("\nTheoretical roughness, feed {} per rev, nose radius {}\n",
-               formatLength(f, u, u == Units::Inch ? 4 : 3), formatLength(r, u, u == Units::Inch ? 5 : 2));
+        formatLength(f, u, u == Units::Inch ? 4 : 3), formatLength(r, u, u == Units::Inch ? 5 : 2));
     auto rough = [u](double mm) {
-        return u == Units::Inch ? fmt::format("{:.1f} µin ({:.3f} µm)", mm / kMmPerInch * 1e6, mm * 1e3)
-                                : fmt::format("{:.3f} µm", mm * 1e3);
+        return u == Units::Inch
+                   ? fmt::format("{:.1f} µin ({:.3f} µm)", mm / kMmPerInch * 1e6, mm * 1e3)
+                   : fmt::format("{:.3f} µm", mm * 1e3);
     };
     say("  Rt = f²/8r {}   exact arc {}\n", rough(rtApproxMm(f, r)), rough(rtExactMm(f, r)));
     say("  Ra ≈ 0.0321 f²/r {}   exact arc {}\n", rough(raApproxMm(f, r)), rough(raExactMm(f, r)));
@@ -417,13 +450,18 @@ void run(const TaperOptions& o) {
     const auto f = optLength("--feed", o.feed, u);
     const auto h = optLength("--tip-height", o.tipHeight, u, "any");
     optLength("--work-length", o.workLength, u);
-    if (!o.rolls.empty()) lengthOpt("--rolls", o.rolls, u);
+    if (!o.rolls.empty())
+        lengthOpt("--rolls", o.rolls, u);
     TipSide side = TipSide::ChuckSide;
-    if (o.tipSide == "tailstock") side = TipSide::TailstockSide;
-    else if (o.tipSide != "chuck") bad("--tip-side", o.tipSide, "chuck or tailstock");
-    if (f && !r) bad("--feed", o.feed, "--nose-radius too, for the roughness");
+    if (o.tipSide == "tailstock")
+        side = TipSide::TailstockSide;
+    else if (o.tipSide != "chuck")
+        bad("--tip-side", o.tipSide, "chuck or tailstock");
+    if (f && !r)
+        bad("--feed", o.feed, "--nose-radius too, for the roughness");
     if (f && r && !(*f < 2 * *r))
-        bad("--feed", o.feed, "a feed below twice the nose radius (" + formatLength(2 * *r, u) + ")");
+        bad("--feed", o.feed,
+            "a feed below twice the nose radius (" + formatLength(2 * *r, u) + ")");
     std::optional<GaugeBlockSet> custom;
     if (!o.blocks.empty()) {
         GaugeBlockSet set{"your blocks", u, {}};
@@ -433,8 +471,9 @@ void run(const TaperOptions& o) {
             const std::string item = o.blocks.substr(start, end - start);
             auto v = parseNumberText(item);
             if (!v || !(*v > 0))
-                bad("--blocks", o.blocks, std::string("block sizes in ") + unitName(u) +
-                                              " > 0, separated by commas (bad: '" + item + "')");
+                bad("--blocks", o.blocks,
+                    std::string("block sizes in ") + unitName(u) +
+                        " > 0, separated by commas (bad: '" + item + "')");
             set.sizes.push_back(*v);
             start = end + 1;
         }
@@ -445,27 +484,37 @@ void run(const TaperOptions& o) {
     printCone(b, o);
     printCompound(b);
     printSineBars(b, custom);
-    if (r) printNoseOffsets(b, *r, side);
+    if (r)
+        printNoseOffsets(b, *r, side);
     printMethods(b, o);
-    if (!o.rolls.empty()) printRolls(b, o);
-    if (h) printTipHeight(b, *h);
-    if (f && r) printRoughness(b, *f, *r);
+    if (!o.rolls.empty())
+        printRolls(b, o);
+    if (h)
+        printTipHeight(b, *h);
+    if (f && r)
+        printRoughness(b, *f, *r);
 
     std::vector<std::string> more;
-    if (!r) more.push_back("--nose-radius R (offsets)");
-    if (r && !f) more.push_back("--feed F (roughness)");
-    if (o.workLength.empty()) more.push_back("--work-length L (set-over)");
-    if (o.rolls.empty()) more.push_back("--rolls D (readings over rolls)");
-    if (!h) more.push_back("--tip-height H (off-centre error)");
+    if (!r)
+        more.push_back("--nose-radius R (offsets)");
+    if (r && !f)
+        more.push_back("--feed F (roughness)");
+    if (o.workLength.empty())
+        more.push_back("--work-length L (set-over)");
+    if (o.rolls.empty())
+        more.push_back("--rolls D (readings over rolls)");
+    if (!h)
+        more.push_back("--tip-height H (off-centre error)");
     if (!more.empty()) {
         say("\nMore figures with:");
-        for (const auto& m : more) say(" {};", m);
+        for (const auto& m : more)
+            say(" {};", m);
         say("\n");
     }
     say("\nCautions: these are geometry only. They do not model cutting forces, deflection of "
-               "the work or tool, chatter, wear or measuring error. Check the set-up and take a "
-               "trial cut before the finishing pass; stop the spindle before measuring; guard "
-               "your eyes and keep clear of the chuck.\n");
+        "the work or tool, chatter, wear or measuring error. Check the set-up and take a "
+        "trial cut before the finishing pass; stop the spindle before measuring; guard "
+        "your eyes and keep clear of the chuck.\n");
     std::fputs(gOut.c_str(), stdout);
     gOut.clear();
 }
@@ -477,8 +526,11 @@ void registerTaper(CLI::App& app, int& exitCode) {
     auto* cmd = app.add_subcommand(
         "taper", "Bench calculator: one cone in every form, with compound, sine bar, nose-radius, "
                  "set-over, roll and roughness figures");
-    cmd->add_option("--units", o->units, "mm (default) or inch: the unit of every length in and out");
-    cmd->add_option("--standard", o->standard, "a standard taper: 'Morse 3', 'Metric 80', '7:24 40', NPT, 'Jarno 6', 'B&S 7', 1:10");
+    cmd->add_option("--units", o->units,
+                    "mm (default) or inch: the unit of every length in and out");
+    cmd->add_option(
+        "--standard", o->standard,
+        "a standard taper: 'Morse 3', 'Metric 80', '7:24 40', NPT, 'Jarno 6', 'B&S 7', 1:10");
     cmd->add_option("--dia", o->dia, "diameter at the gauge plane");
     cmd->add_option("--half-angle", o->halfAngle, "half angle from the axis: 1.4321 or 1°25′56″");
     cmd->add_option("--included", o->included, "included angle: 2.8642 or 2°51′51″");
@@ -488,21 +540,32 @@ void registerTaper(CLI::App& app, int& exitCode) {
     cmd->add_option("--dia2", o->dia2, "a second diameter, --length away from --dia");
     cmd->add_option("--length", o->length, "cone length from the gauge plane to its other end");
     cmd->add_option("--gauge-end", o->gaugeEnd, "large (default) or small: which end --dia is at");
-    cmd->add_option("--widens", o->widens, "chuck (default) or tailstock: the way the diameter grows on the lathe");
+    cmd->add_option("--widens", o->widens,
+                    "chuck (default) or tailstock: the way the diameter grows on the lathe");
     cmd->add_option("--at", o->at, "print the diameter this far from the gauge plane");
-    cmd->add_option("--to-dia", o->toDia, "print how far from the gauge plane the cone has this diameter");
-    cmd->add_option("--nose-radius", o->noseRadius, "tool nose radius, for the offsets and roughness");
-    cmd->add_option("--tip-side", o->tipSide, "chuck (default) or tailstock: the side of the nose the imaginary tip is set on");
+    cmd->add_option("--to-dia", o->toDia,
+                    "print how far from the gauge plane the cone has this diameter");
+    cmd->add_option("--nose-radius", o->noseRadius,
+                    "tool nose radius, for the offsets and roughness");
+    cmd->add_option(
+        "--tip-side", o->tipSide,
+        "chuck (default) or tailstock: the side of the nose the imaginary tip is set on");
     cmd->add_option("--feed", o->feed, "feed per revolution, for the roughness");
-    cmd->add_option("--work-length", o->workLength, "work length between centres, for the set-over");
-    cmd->add_option("--compound-travel", o->compoundTravel, "usable compound travel (default 100 mm)");
-    cmd->add_option("--guide-bar-length", o->guideBarLength, "taper attachment's usable length (default 250 mm)");
-    cmd->add_option("--guide-bar-max-angle", o->guideBarMaxAngle, "taper attachment's largest angle (default 10°)");
-    cmd->add_option("--max-set-over", o->maxSetOver, "largest tailstock set-over you accept (default 10 mm)");
+    cmd->add_option("--work-length", o->workLength,
+                    "work length between centres, for the set-over");
+    cmd->add_option("--compound-travel", o->compoundTravel,
+                    "usable compound travel (default 100 mm)");
+    cmd->add_option("--guide-bar-length", o->guideBarLength,
+                    "taper attachment's usable length (default 250 mm)");
+    cmd->add_option("--guide-bar-max-angle", o->guideBarMaxAngle,
+                    "taper attachment's largest angle (default 10°)");
+    cmd->add_option("--max-set-over", o->maxSetOver,
+                    "largest tailstock set-over you accept (default 10 mm)");
     cmd->add_option("--rolls", o->rolls, "roll (pin) diameter, for readings over rolls");
     cmd->add_option("--roll-stacks", o->rollStacks, "heights of the blocks under the rolls: H1,H2");
     cmd->add_option("--tip-height", o->tipHeight, "tool tip above (+) or below (−) centre");
-    cmd->add_option("--blocks", o->blocks, "your gauge blocks, comma separated, in --units (replaces the common sets)");
+    cmd->add_option("--blocks", o->blocks,
+                    "your gauge blocks, comma separated, in --units (replaces the common sets)");
     cmd->callback([o, &exitCode] {
         run(*o);
         exitCode = kExitOk;

@@ -11,8 +11,8 @@ namespace swarf {
 
 /// Which z-tangent of the nose the imaginary tip is built on.
 enum class TipSide {
-    ChuckSide,     ///< tangent at the nose's largest z (swarf's imaginary tip for a right-hand tool)
-    TailstockSide  ///< tangent at the nose's smallest z
+    ChuckSide,    ///< tangent at the nose's largest z (swarf's imaginary tip for a right-hand tool)
+    TailstockSide ///< tangent at the nose's smallest z
 };
 
 /// The displacement of the cut cone and the path shifts that cancel it.
@@ -22,8 +22,8 @@ struct NoseOffsets {
     /// Distance between the cut cone and the drawing's cone, normal to the surface, mm (≥ 0).
     /// Left on: r(sin θ + cos θ − 1). Overcut: r(1 + sin θ − cos θ).
     double normalErrorMm = 0;
-    /// Radial path shift magnitude, mm (≥ 0). Left on: r(1 − tan((90° − θ)/2)) = r(1 + tan θ − sec θ).
-    /// Overcut: r(sec θ + tan θ − 1).
+    /// Radial path shift magnitude, mm (≥ 0). Left on: r(1 − tan((90° − θ)/2)) = r(1 + tan θ − sec
+    /// θ). Overcut: r(sec θ + tan θ − 1).
     double dxRadiusMm = 0;
     /// The same on diameter, mm (2 · dxRadiusMm): what a diameter-reading cross-slide dial shows.
     double dxDiameterMm = 0;

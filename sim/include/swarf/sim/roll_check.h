@@ -26,12 +26,12 @@ double diameterChangeOverLengthMm(double halfAngleRad, double lengthMm);
 
 /// Two readings over rolls for a cone standing on its small end.
 struct RollReadings {
-    double centreHeight1Mm = 0;  ///< roll-centre plane 1 above the small end face, mm
-    double centreHeight2Mm = 0;  ///< roll-centre plane 2 above the small end face, mm
-    double diameter1Mm = 0;      ///< cone diameter at plane 1, mm
-    double diameter2Mm = 0;      ///< cone diameter at plane 2, mm
-    double reading1Mm = 0;       ///< M1, mm
-    double reading2Mm = 0;       ///< M2, mm
+    double centreHeight1Mm = 0; ///< roll-centre plane 1 above the small end face, mm
+    double centreHeight2Mm = 0; ///< roll-centre plane 2 above the small end face, mm
+    double diameter1Mm = 0;     ///< cone diameter at plane 1, mm
+    double diameter2Mm = 0;     ///< cone diameter at plane 2, mm
+    double reading1Mm = 0;      ///< M1, mm
+    double reading2Mm = 0;      ///< M2, mm
 };
 
 /// Readings over rolls of diameter d (mm) resting on equal stacks of heights stack1Mm and

@@ -27,9 +27,9 @@ double sineBarAngleRad(double barLengthMm, double stackMm);
 
 /// A gauge block set: block sizes in the set's own unit. Each block may be used once.
 struct GaugeBlockSet {
-    std::string name;           ///< for people, e.g. "81-piece inch set"
-    Units units = Units::Mm;    ///< the unit its sizes are written in
-    std::vector<double> sizes;  ///< block sizes in `units`, each > 0
+    std::string name;          ///< for people, e.g. "81-piece inch set"
+    Units units = Units::Mm;   ///< the unit its sizes are written in
+    std::vector<double> sizes; ///< block sizes in `units`, each > 0
 };
 
 /// A common 81-piece inch set (common practice): 0.1001–0.1009 by 0.0001, 0.101–0.149 by 0.001,
@@ -43,11 +43,11 @@ GaugeBlockSet commonMetricBlockSet();
 /// A combination of blocks for a stack, or why there is none.
 struct GaugeStack {
     bool found = false;
-    double wantedMm = 0;            ///< the stack height asked for, mm
-    double builtMm = 0;             ///< the height the blocks add up to, mm (when found)
-    double resolutionMm = 0;        ///< the set's step: the wanted height is rounded to it, mm
-    std::vector<double> blocks;     ///< the blocks, in the set's units, largest first
-    std::string reason;             ///< when not found: why (for people)
+    double wantedMm = 0;        ///< the stack height asked for, mm
+    double builtMm = 0;         ///< the height the blocks add up to, mm (when found)
+    double resolutionMm = 0;    ///< the set's step: the wanted height is rounded to it, mm
+    std::vector<double> blocks; ///< the blocks, in the set's units, largest first
+    std::string reason;         ///< when not found: why (for people)
 };
 
 /// The combination of the fewest blocks from `set` that adds up to heightMm (mm) rounded to the

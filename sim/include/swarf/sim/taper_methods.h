@@ -29,10 +29,10 @@ double taperAttachmentOffsetMm(double halfAngleRad, double barLengthMm);
 
 /// Limits used to judge the methods. Defaults are common practice for a mid-size lathe.
 struct TaperMethodLimits {
-    double maxSetOverMm = 10.0;            ///< larger set-overs spoil the centre holes
-    double maxAttachmentHalfAngleRad = 0.17453292519943295;  ///< about 10°
-    double attachmentTravelMm = 250.0;     ///< guide bar's usable length along z, mm
-    double compoundTravelMm = 100.0;       ///< compound's usable travel, mm
+    double maxSetOverMm = 10.0; ///< larger set-overs spoil the centre holes
+    double maxAttachmentHalfAngleRad = 0.17453292519943295; ///< about 10°
+    double attachmentTravelMm = 250.0; ///< guide bar's usable length along z, mm
+    double compoundTravelMm = 100.0;   ///< compound's usable travel, mm
 };
 
 /// The three methods.
@@ -41,19 +41,19 @@ enum class TaperMethodKind { TailstockSetOver, TaperAttachment, Compound };
 /// One method for one cone: its setting and whether it suits.
 struct TaperMethodVerdict {
     TaperMethodKind kind = TaperMethodKind::Compound;
-    std::string name;         ///< "tailstock set-over", "taper attachment", "compound slide"
-    bool practical = false;   ///< fits the limits (and the work can be held for it)
-    std::optional<double> settingMm;   ///< set-over or compound stroke, mm (when defined)
-    std::optional<double> settingRad;  ///< attachment or compound angle from the axis, rad
-    std::string why;          ///< the reason in plain words
+    std::string name;                ///< "tailstock set-over", "taper attachment", "compound slide"
+    bool practical = false;          ///< fits the limits (and the work can be held for it)
+    std::optional<double> settingMm; ///< set-over or compound stroke, mm (when defined)
+    std::optional<double> settingRad; ///< attachment or compound angle from the axis, rad
+    std::string why;                  ///< the reason in plain words
 };
 
 /// What the judgement needs to know about the job.
 struct TaperJob {
-    double halfAngleRad = 0;                 ///< 0 < θ < π/2
-    double coneLengthMm = 0;                 ///< axial length of the cone, mm (> 0)
-    std::optional<double> workLengthMm;      ///< whole work between centres, mm (set-over only)
-    bool outside = true;                     ///< an outside cone (set-over cannot cut a bore)
+    double halfAngleRad = 0;            ///< 0 < θ < π/2
+    double coneLengthMm = 0;            ///< axial length of the cone, mm (> 0)
+    std::optional<double> workLengthMm; ///< whole work between centres, mm (set-over only)
+    bool outside = true;                ///< an outside cone (set-over cannot cut a bore)
 };
 
 /// Settings for all three methods and whether each is practical for the job, in the order
