@@ -1,0 +1,84 @@
+// Tests for sim/include/swarf/sim/compare.h: deviation from the drawing and verdicts.
+#include "swarf/sim/compare.h"
+
+#include "kernel_scenes.h"
+
+#include <catch2/catch.hpp>
+#include <cmath>
+
+using namespace swarf;
+using namespace swarf::testing;
+
+namespace {
+Profile gridOf(double z0, double dz, std::size_t n, double r) {
+    Profile p;
+    p.z0Mm = z0;
+    p.dzMm = dz;
+    p.radiusMm.assign(n, r);
+    return p;
+}
+} // namespace
+
+TEST_CASE("tolerance band normal to a cone", "[compare]") {
+    // ±t on diameter is ±t/2 on radius, (t/2)·cosθ normal to the surface (derived).
+    const Feature c = coneFeature(0, 10, 10, degToRad(10), 0.02);
+    CHECK(normalBandMm(c) == Approx(0.01 * std::cos(degToRad(10))));
+    CHECK(normalBandMm(cylinderFeature(0, 1, 10, 0.05)) == Approx(0.025));
+}
+
+TEST_CASE("nominal profile and the feature that gives it", "[compare]") {
+    Part part;
+    part.features.push_back(cylinderFeature(0, 10, 20, 0.1));
+    part.features.push_back(cylinderFeature(10, 20, 30, 0.1));
+    CHECK(featureAt(part, 5) == 0);
+    CHECK(featureAt(part, 10) == 1);  // the larger where two meet
+    CHECK(featureAt(part, 25) == -1);
+    const Profile n = nominalOnGrid(part, gridOf(-1, 0.5, 50, 0));
+    CHECK(std::isnan(n.radiusMm[0]));
+    CHECK(n.radiusAt(5) == Approx(10));
+    CHECK(n.radiusAt(15) == Approx(15));
+}
+
+TEST_CASE("internal corners keep the nose radius out of the verdict", "[compare]") {
+    Part part;
+    part.features.push_back(cylinderFeature(0, 10, 20, 0.1));
+    part.features.push_back(cylinderFeature(10, 20, 30, 0.1));
+    const Profile g = gridOf(0, 0.1, 201, 0);
+    const auto mask = verdictMask(part, g, 0.8);
+    CHECK(mask[50]);         // z = 5
+    CHECK_FALSE(mask[95]);   // z = 9.5, within 0.8 of the corner at 10
+    CHECK_FALSE(mask[105]);  // z = 10.5
+    CHECK(mask[120]);        // z = 12
+}
+
+TEST_CASE("a cone cut parallel but off by more than its band is out", "[compare]") {
+    const double th = degToRad(5);
+    Scene s = barScene(30);
+    s.part.features.push_back(coneFeature(0, 20, 20, th, 0.02));
+    s.part.features.back().cone.gaugeZMm = 10;
+    s.part.features.back().cone.gaugeDiameterMm = 20 + 20 * std::tan(th);
+    for (double shift : {0.009, 0.011}) {  // normal band 0.01·cos 5° = 0.00996 (derived)
+        Profile cut = gridOf(0, 0.01, 2001, 0);
+        for (std::size_t i = 0; i < cut.radiusMm.size(); ++i)
+            cut.radiusMm[i] = 10 + cut.zAt(i) * std::tan(th) + shift / std::cos(th);
+        const Profile n = nominalOnGrid(s.part, cut);
+        const auto dev = normalDeviation(s.part, n, cut);
+        CHECK(dev[1000] == Approx(shift));
+        const auto rep = compareFeatures(s, cut, dev, std::vector<bool>(cut.radiusMm.size(), true));
+        REQUIRE(rep.size() == 1);
+        CHECK(rep[0].maxLeftOnMm == Approx(shift));
+        CHECK(rep[0].asCutHalfAngleRad == Approx(th));
+        CHECK(rep[0].asCutDiameterMm ==
+              Approx(s.part.features[0].cone.gaugeDiameterMm + 2 * shift / std::cos(th)));
+        CHECK(rep[0].withinTolerance == (shift < 0.00996));
+    }
+}
+
+TEST_CASE("left-on volume between the drawing and the cut", "[compare]") {
+    Part part;
+    part.features.push_back(cylinderFeature(0, 10, 20, 0.1));
+    const Profile cut = gridOf(0, 0.01, 1001, 10.5);
+    const Profile n = nominalOnGrid(part, cut);
+    // Source: derived (Pappus: annulus 10..10.5 over 10 mm).
+    CHECK(leftoverVolumeMm3(n, cut) == Approx(kPi * (10.5 * 10.5 - 100) * 10).epsilon(1e-9));
+}

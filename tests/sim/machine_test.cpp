@@ -1,0 +1,110 @@
+// Tests for sim/include/swarf/sim/machine.h: dial readings to tool positions.
+#include "swarf/sim/machine.h"
+
+#include "kernel_scenes.h"
+#include "swarf/sim/kernel.h"
+
+#include <catch2/catch.hpp>
+#include <cmath>
+
+using namespace swarf;
+using namespace swarf::testing;
+
+namespace {
+Scene compoundScene() {
+    Scene s = barScene(30);
+    s.setup.compoundReadingRad = degToRad(10);
+    s.setup.compoundScale = CompoundScale::FromAxis;
+    s.setup.compoundAdvanceToward = Widens::TowardTailstock;
+    s.setup.crossDial = DialMode::Diameter;
+    s.setup.zeroDiameterMm = 30;
+    s.setup.zeroZMm = 0;
+    Pass p;
+    p.kind = PassKind::Compound;
+    p.crossMm = 2.0;
+    p.saddleMm = 40;
+    p.fromMm = 0;
+    p.toMm = 20;
+    s.plan.passes.push_back(p);
+    return s;
+}
+} // namespace
+
+TEST_CASE("compound pass follows the machine model", "[machine]") {
+    // Source: scenes/README.md [setup]: z = zero_z + s + p·a·cos α, x = D0/2 − c·k − p·sin α
+    // (derived plane geometry).
+    const Scene s = compoundScene();
+    const auto m = planMoves(s);
+    REQUIRE(m.size() == 1);
+    const double a = degToRad(10);
+    CHECK(m[0].tipFrom.x() == Approx(40.0));
+    CHECK(m[0].tipFrom.y() == Approx(15.0 - 1.0));
+    CHECK(m[0].tipTo.x() == Approx(40.0 - 20 * std::cos(a)));
+    CHECK(m[0].tipTo.y() == Approx(14.0 - 20 * std::sin(a)));
+    CHECK(m[0].compoundFrom == 0);
+    CHECK(m[0].compoundTo == 20);
+}
+
+TEST_CASE("compound scale read from the cross-slide and its error", "[machine]") {
+    Scene s = compoundScene();
+    s.setup.compoundScale = CompoundScale::FromCrossSlide;
+    s.setup.compoundReadingRad = degToRad(80);  // references R5: set 90° − θ
+    s.setup.compoundErrorRad = degToRad(0.1);
+    const auto m = planMoves(s);
+    const double a = degToRad(10.1);
+    CHECK(m[0].tipTo.y() == Approx(14.0 - 20 * std::sin(a)));
+}
+
+TEST_CASE("radius dial moves the tool by the reading", "[machine]") {
+    Scene s = compoundScene();
+    s.setup.crossDial = DialMode::Radius;
+    const auto m = planMoves(s);
+    CHECK(m[0].tipFrom.y() == Approx(13.0));
+}
+
+TEST_CASE("backlash: a slide that reverses lags by its backlash", "[machine]") {
+    // The gap model (derived): after a decreasing move the slide sits b behind the reading.
+    CHECK(followWithBacklash(0.0, -1.0, 0.05) == Approx(-0.95));
+    CHECK(followWithBacklash(-0.95, -0.5, 0.05) == Approx(-0.5));
+    CHECK(followWithBacklash(0.0, 0.03, 0.05) == Approx(0.03));
+    CHECK(followWithBacklash(0.0, -0.03, 0.05) == Approx(0.0));  // inside the gap: no motion
+
+    Scene s = compoundScene();
+    s.setup.cross.backlashMm = 0.05;
+    s.setup.compound.backlashMm = 0.04;
+    // Second pass backs the cross-slide out (reading decreasing): it stays 0.05 further in.
+    Pass p2 = s.plan.passes[0];
+    p2.crossMm = 1.0;
+    s.plan.passes.push_back(p2);
+    const auto m = planMoves(s);
+    REQUIRE(m.size() == 2);
+    // Cross travel 0.5 (diameter dial); the slide lags: 0.55 in. The compound was wound back
+    // from 20 to 0: its slide lags 0.04, so the pass starts 0.04 along the compound (the slack
+    // is taken up first, with the tool standing still).
+    const double a = degToRad(10);
+    CHECK(m[1].tipFrom.y() == Approx(15.0 - 0.55 - 0.04 * std::sin(a)).margin(1e-12));
+    CHECK(m[1].tipFrom.x() == Approx(40.0 - 0.04 * std::cos(a)));
+    CHECK(m[1].tipTo.x() == Approx(40.0 - 20 * std::cos(a)));
+}
+
+TEST_CASE("a CNC path is taken as given", "[machine]") {
+    Scene s = barScene(30);
+    s.plan.passes.push_back(pathPass({{0, 14}, {10, 14}, {20, 12}}, 0.1));
+    const auto m = planMoves(s);
+    REQUIRE(m.size() == 2);
+    CHECK(m[1].tipFrom == Eigen::Vector2d(10, 14));
+    CHECK(m[1].tipTo == Eigen::Vector2d(20, 12));
+    CHECK(m[1].pass == 0);
+}
+
+TEST_CASE("profileUpTo steps through a move", "[machine][kernel]") {
+    Scene s = barScene(30);
+    s.part.features.push_back(cylinderFeature(0, 30, 28, 0.1));
+    s.plan.passes.push_back(pathPass({{-2, 14}, {30, 14}}, 0.1));
+    const auto m = planMoves(s);
+    const Profile half = profileUpTo(s, m, 1, 0.5);
+    const Profile none = profileUpTo(s, m, 0);
+    CHECK(half.radiusAt(5) == Approx(14.0));
+    CHECK(half.radiusAt(25) == Approx(15.0));
+    CHECK(none.radiusAt(5) == Approx(15.0));
+}
