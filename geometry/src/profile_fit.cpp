@@ -243,6 +243,21 @@ EdgeChain polylineChain(const std::vector<double>& zMm, const std::vector<double
     });
 }
 
+void extendChain(EdgeChain& chain, double zEndMm, double xMm) {
+    guarded("as-cut outline", [&] {
+        const gp_Pnt last = BRep_Tool::Pnt(chain.last);
+        TopoDS_Vertex v = chain.last;
+        if (std::abs(last.X() - xMm) > 1e-9) {
+            const TopoDS_Vertex up = BRepBuilderAPI_MakeVertex(profilePoint(last.Z(), xMm)).Vertex();
+            chain.edges.push_back(BRepBuilderAPI_MakeEdge(v, up).Edge());
+            v = up;
+        }
+        const TopoDS_Vertex end = BRepBuilderAPI_MakeVertex(profilePoint(zEndMm, xMm)).Vertex();
+        chain.edges.push_back(BRepBuilderAPI_MakeEdge(v, end).Edge());
+        chain.last = end;
+    });
+}
+
 TopoDS_Shape revolveChain(const EdgeChain& chain, const std::string& what) {
     return guarded(what, [&] {
         const gp_Pnt p0 = BRep_Tool::Pnt(chain.first), p1 = BRep_Tool::Pnt(chain.last);

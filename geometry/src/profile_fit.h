@@ -28,6 +28,10 @@ EdgeChain fitOutline(const std::vector<double>& zMm, const std::vector<double>& 
 /// Straight segments through the points (no fit).
 EdgeChain polylineChain(const std::vector<double>& zMm, const std::vector<double>& xMm);
 
+/// Continues the chain from its last point straight out (or in) to x = xMm, then along the
+/// axis to z = zEndMm at that x. Precondition: zEndMm > the chain's last z.
+void extendChain(EdgeChain& chain, double zEndMm, double xMm);
+
 /// Closes the chain with straight lines down to the axis at both ends and along the axis, and
 /// revolves the face 360° about Z. Checks the solid is valid; throws GeometryError otherwise.
 TopoDS_Shape revolveChain(const EdgeChain& chain, const std::string& what);

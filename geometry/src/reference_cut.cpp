@@ -89,21 +89,23 @@ TopoDS_Shape revolvePolygon(const std::vector<P2>& poly) {
 }
 
 std::vector<P2> sweptRegion(const ToolOutline& outline, const std::vector<P2>& polygon,
-                            const ToolMove& move, double topXMm) {
+                            const ToolMove& move, double topXMm) {  // topXMm: at least this high
     const P2 c0 = move.tipFrom - outline.imaginaryTip();
     const P2 c1 = move.tipTo - outline.imaginaryTip();
     std::vector<P2> pts;
     pts.reserve(2 * polygon.size() + 2);
-    double zMin = 1e300, zMax = -1e300;
+    double zMin = 1e300, zMax = -1e300, xMax = topXMm;
     for (const P2& p : polygon)
         for (const P2& c : {c0, c1}) {
             pts.push_back(c + p);
             zMin = std::min(zMin, pts.back().x());
             zMax = std::max(zMax, pts.back().x());
+            xMax = std::max(xMax, pts.back().y());
         }
-    // Everything above the insert is cut away too (the chip leaves): lift the hull's top.
-    pts.emplace_back(zMin, topXMm);
-    pts.emplace_back(zMax, topXMm);
+    // Everything above the insert is cut away too (the chip leaves): lift the hull's top, above
+    // every point of the insert so the lift adds nothing below it.
+    pts.emplace_back(zMin, xMax);
+    pts.emplace_back(zMax, xMax);
     return convexHull(std::move(pts));
 }
 

@@ -4,6 +4,8 @@
 #include "profile_fit.h"
 
 #include <BRepPrimAPI_MakeCylinder.hxx>
+#include <BRep_Builder.hxx>
+#include <TopoDS_Compound.hxx>
 #include <gp_Ax2.hxx>
 
 #include <algorithm>
@@ -83,7 +85,11 @@ Solid nominalSolid(const Part& part) {
     return revolvePoints(pts, "nominal part");
 }
 
-FittedSolid profileSolid(const Profile& profile, const ProfileFitOptions& options) {
+namespace {
+// Samples at or below this radius (mm) are on the axis: the cut went through the centre.
+constexpr double kOnAxisMm = 1e-9;
+
+FittedSolid fitted(const Profile& profile, const ProfileFitOptions& options, const Stock* stock) {
     const std::size_t n = profile.radiusMm.size();
     require(n >= 2 && profile.dzMm > 0, "as-cut solid", "the profile needs two samples or more");
     std::vector<double> z(n), x(n);
@@ -92,20 +98,52 @@ FittedSolid profileSolid(const Profile& profile, const ProfileFitOptions& option
         x[i] = profile.radiusMm[i];
         require(std::isfinite(x[i]) && x[i] >= 0, "as-cut solid",
                 "the profile's radius is not a number ≥ 0 at z = " + std::to_string(z[i]) + " mm");
-        if (i > 0 && i + 1 < n)
-            require(x[i] > 1e-9, "as-cut solid",
-                    "the cut goes through the centre at z = " + std::to_string(z[i]) +
-                        " mm: the part would come off in two pieces");
     }
-    const EdgeChain chain = fitOutline(z, x, options);
+    // Where the cut reaches the axis the part comes apart: one solid per stretch of material,
+    // each from the axis sample before it to the axis sample after it.
     FittedSolid out;
-    out.solid = wrap(revolveChain(chain, "as-cut solid"));
-    out.maxFitErrorMm = chain.maxErrorMm;
-    out.lineCount = chain.lines;
-    out.arcCount = chain.arcs;
-    out.splineCount = chain.splines;
     out.sampleCount = static_cast<int>(n);
+    TopoDS_Compound pieces;
+    BRep_Builder builder;
+    builder.MakeCompound(pieces);
+    int pieceCount = 0;
+    TopoDS_Shape single;
+    std::size_t i = 0;
+    while (i < n) {
+        while (i < n && x[i] <= kOnAxisMm) ++i;
+        if (i == n) break;
+        std::size_t j = i;
+        while (j + 1 < n && x[j + 1] > kOnAxisMm) ++j;
+        const std::size_t a = i > 0 ? i - 1 : 0, b = j + 1 < n ? j + 1 : j;
+        i = j + 1;
+        if (b == a) continue;  // a single sample: no length
+        const std::vector<double> zs(z.begin() + a, z.begin() + b + 1);
+        std::vector<double> xs(x.begin() + a, x.begin() + b + 1);
+        for (double& v : xs) v = v <= kOnAxisMm ? 0.0 : v;
+        EdgeChain chain = fitOutline(zs, xs, options);
+        // The bar beyond the profile, up to the jaws, was not touched.
+        if (stock && b == n - 1 && stock->jawZMm() > z.back() + 1e-9)
+            extendChain(chain, stock->jawZMm(), stock->diameterMm / 2);
+        single = revolveChain(chain, "as-cut solid");
+        builder.Add(pieces, single);
+        ++pieceCount;
+        out.maxFitErrorMm = std::max(out.maxFitErrorMm, chain.maxErrorMm);
+        out.lineCount += chain.lines;
+        out.arcCount += chain.arcs;
+        out.splineCount += chain.splines;
+    }
+    require(pieceCount > 0, "as-cut solid", "the profile has no material (every radius is 0)");
+    out.solid = wrap(pieceCount == 1 ? single : TopoDS_Shape(pieces));
     return out;
+}
+} // namespace
+
+FittedSolid profileSolid(const Profile& profile, const ProfileFitOptions& options) {
+    return fitted(profile, options, nullptr);
+}
+
+FittedSolid asCutSolid(const Stock& stock, const Profile& asCut, const ProfileFitOptions& options) {
+    return fitted(asCut, options, &stock);
 }
 
 } // namespace swarf::geometry

@@ -31,7 +31,7 @@ RunSolids makeRunSolids(const Scene& scene, const CutResult& result, const Profi
     RunSolids s;
     s.stock = stockSolid(scene.stock);
     s.nominal = nominalSolid(scene.part);
-    s.asCut = profileSolid(result.asCut, fit);
+    s.asCut = asCutSolid(scene.stock, result.asCut, fit);
     const auto outline = nominalOutline(scene.part);
     double rMax = scene.stock.diameterMm / 2;
     for (const auto& p : outline) rMax = std::max(rMax, p.second);

@@ -140,9 +140,19 @@ TEST_CASE("a wavy profile is refined until every sample is within 0.5 um", "[geo
     }
 }
 
-TEST_CASE("a profile cut through the centre is refused", "[geometry][revolve]") {
+TEST_CASE("a profile cut through the centre comes apart in two solids", "[geometry][revolve]") {
     Profile p;
     p.dzMm = 1;
-    p.radiusMm = {5, 5, 0, 5, 5};
-    CHECK_THROWS_AS(profileSolid(p), GeometryError);
+    p.radiusMm = {5, 5, 0, 0, 5, 5};
+    const FittedSolid f = profileSolid(p);
+    CHECK(f.solid.solidCount() == 2);
+    CHECK(f.solid.isValid());
+    // derived: each piece is a 5 mm cylinder 1 mm long and a cone 1 mm long: π·25·(1 + 1/3).
+    CHECK_THAT(f.solid.volumeMm3(), WithinRel(2 * kPi * 25.0 * (1.0 + 1.0 / 3.0), 1e-9));
+    CHECK_THAT(f.solid.volumeMm3(), WithinRel(p.volumeMm3(), 1e-9));
+    Profile bad = p;
+    bad.radiusMm[1] = -1;
+    CHECK_THROWS_AS(profileSolid(bad), GeometryError);
+    bad.radiusMm.assign(4, 0.0);
+    CHECK_THROWS_AS(profileSolid(bad), GeometryError);
 }

@@ -46,7 +46,7 @@ struct ProfileFitOptions {
 struct FittedSolid {
     Solid solid;
     double maxFitErrorMm = 0;  ///< largest distance of any sample from the fitted outline, mm
-    int lineCount = 0;         ///< straight segments in the outline (closing ones excluded)
+    int lineCount = 0;         ///< straight segments fitted (closing and extending ones excluded)
     int arcCount = 0;          ///< circular arcs
     int splineCount = 0;       ///< B-spline pieces
     int sampleCount = 0;       ///< samples fitted
@@ -57,10 +57,18 @@ struct FittedSolid {
 /// `lineToleranceMm`, by circular arcs where they lie on a circle (a nose arc) within it, and
 /// elsewhere by B-splines fitted so that every sample lies within `maxFitErrorMm` of the
 /// outline (the largest distance is measured at every sample and returned). The outline is
-/// closed by the end faces and the axis. Preconditions: at least 2 samples, dzMm > 0, every
-/// radius ≥ 0. Throws GeometryError if a radius is 0 inside the profile (the part would be cut
-/// through), or if the modeller fails or makes an invalid solid.
+/// closed by the end faces and the axis. Where the profile's radius is 0 (the cut went through
+/// the centre) the part has come apart: the result is then one solid per stretch of material
+/// (solidCount() > 1). Preconditions: at least 2 samples, dzMm > 0. Throws GeometryError if a
+/// radius is negative or not a number, if every radius is 0, or if the modeller fails or makes
+/// an invalid solid.
 FittedSolid profileSolid(const Profile& profile, const ProfileFitOptions& options = {});
+
+/// The as-cut part over the stock's whole stick-out: profileSolid() of the kernel's profile
+/// and, from the profile's last sample to the jaws' face, the bar as it was (the kernel samples
+/// only as far as the tool reaches, plus 1 mm). Throws GeometryError as profileSolid().
+FittedSolid asCutSolid(const Stock& stock, const Profile& asCut,
+                       const ProfileFitOptions& options = {});
 
 /// The solid of revolution of an outline of straight segments through (z, x) points (mm),
 /// closed by straight lines to the axis at both ends. Throws GeometryError as profileSolid.

@@ -16,7 +16,7 @@ namespace swarf::geometry {
 struct RunSolids {
     Solid stock;     ///< the bar's stick-out
     Solid nominal;   ///< the part as drawn
-    FittedSolid asCut;  ///< the kernel's as-cut profile as a solid, with the fit's error
+    FittedSolid asCut;  ///< asCutSolid(): the kernel's profile, then the bar to the jaws
     Solid leftover;  ///< as cut minus nominal, within the drawing's extent: metal still to cut
     Solid overcut;   ///< nominal minus as cut: metal cut away that the drawing wanted
     double stockVolumeMm3 = 0, nominalVolumeMm3 = 0, asCutVolumeMm3 = 0;
