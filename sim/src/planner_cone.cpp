@@ -311,6 +311,10 @@ ConePlan planCone(const Scene& scene) {
          "Measure the finished cone: Ø" + L(out.checkDiameterFinishedMm) + " at " + L(out.checkZMm) +
              ", over the rolls " + L(out.rolls.reading1Mm) + " and " + L(out.rolls.reading2Mm) + ".");
 
+    if (!scene.stock.tailstockSupport && scene.stock.stickOutMm > 3.0 * stockD)
+        out.cautions.push_back("the bar sticks out " + L(scene.stock.stickOutMm) + ", more than three "
+                               "diameters, with no tailstock: support it, or expect it to spring "
+                               "away (not simulated)");
     if (scene.tool.tipHeightMm != 0)
         out.cautions.push_back("the tool tip is " + L(std::fabs(scene.tool.tipHeightMm)) +
                                (scene.tool.tipHeightMm > 0 ? " above" : " below") +

@@ -150,7 +150,7 @@ Sheet buildSheet(const ConePlan& plan, const CutResult* proof) {
              "indicator on the compound along it, and swivel the compound until the reading stays put.";
         cl.push_back(s);
     }
-    cl.push_back("Nose-radius offset (references: plane geometry): a tip placed on the drawn cone line "
+    cl.push_back("Nose-radius offset (plane geometry): a tip placed on the drawn cone line "
                  "would leave " + formatSmallLength(plan.noseNormalErrorMm, u) +
                  " normal to the cone; the finishing readings already include the offset (tip line " +
                  L(std::fabs(plan.noseOffsetRadialMm), u == Units::Inch ? 5 : 4) + " on radius " +

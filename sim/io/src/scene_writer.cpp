@@ -110,7 +110,7 @@ void writeFeature(Out& o, const Feature& f) {
         break;
     }
     if (!f.toleranceFromClass) o.len("tolerance", f.toleranceMm);
-    if (f.kind == FeatureKind::Cone || f.kind == FeatureKind::Chamfer)
+    if ((f.kind == FeatureKind::Cone || f.kind == FeatureKind::Chamfer) && !f.angleToleranceFromClass)
         o.deg("angle_tolerance", f.angleToleranceRad);
 }
 
