@@ -64,7 +64,7 @@ TEST_CASE("stacks for the R4 heights", "[sine_bar]") {
     REQUIRE(s27.found);
     CHECK(sum(s27.blocks) == Approx(2.2700).margin(1e-9)); // 2.26995 in rounds to 2.2700 in
     CHECK(blocksFromSet(s27, inch));
-    CHECK(s27.blocks.size() == 3); // derived: 2 + 0.150 + 0.120; no two blocks make 2.2700
+    CHECK(s27.blocks.size() == 3); // derived: 3 (e.g. 2 + 0.136 + 0.134); no two blocks make 2.2700
     CHECK(std::fabs(s27.builtMm - h27) <= s27.resolutionMm / 2 + 1e-12);
     // Source: references R4: 200 mm bar at 15° → 51.7638 mm, built to 51.764 mm.
     const auto s15 = combineGaugeBlocks(sineBarStackMm(200.0, degToRad(15)), metric);
