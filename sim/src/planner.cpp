@@ -1,18 +1,15 @@
 // Planning a cone: references, straight-turning passes, cone roughing and finishing passes.
 //
 // Geometry (derived from the machine model in scenes/README.md): with the compound at the cone's
-// half angle θ and advancing toward the tailstock when the cone widens toward the chuck (and the
+// half angle θ, advancing toward the tailstock when the cone widens toward the chuck (and the
 // other way round), winding the compound moves the imaginary tip parallel to the cone line. With
-// the saddle locked at s and the cross-slide at c, the tip runs along
-//   x = zeroD/2 − k c − g tanθ (zeroZ + s − z) … i.e. c = (zeroD/2 − X(zeroZ + s)) / k,
-// where X(z) is the wanted tip line: the cone radius, plus the nose-radius offset (references
-// R1, taken from the insert outline), plus the depth left on divided by cos θ.
+// the saddle locked at s and the cross-slide at c, the tip line passes through the point
+// (zeroZ + s, zeroD/2 − k c), so c = (zeroD/2 − X(zeroZ + s)) / k, where X(z) is the wanted tip
+// line: the cone radius, plus the nose-radius offset (references R1, taken from the insert
+// outline), plus the metal left for later passes divided by cos θ.
 #include "swarf/sim/planner.h"
 #include "planner_build.h"
 
-#include "swarf/sim/compound_setting.h"
-#include "swarf/sim/nose_offset.h"
-#include "swarf/sim/roughness.h"
 #include "swarf/sim/tool_outline.h"
 
 #include <algorithm>
@@ -22,7 +19,7 @@ namespace swarf {
 namespace detail {
 
 PlanBuilder::PlanBuilder(const Scene& scene, ConePlan& out, const Feature& feature)
-    : sc_(scene), out_(out), f_(feature), cone_(feature.cone), units_(scene.units) {
+    : sc_(scene), out_(out), f_(feature), cone_(feature.cone) {
     th_ = cone_.halfAngleRad;
     g_ = cone_.growthSign();
     lead_ = scene.tool.hand == Hand::L ? -1.0 : 1.0;
@@ -49,7 +46,9 @@ PlanBuilder::PlanBuilder(const Scene& scene, ConePlan& out, const Feature& featu
     heightCorr_ = h != 0 && rg > std::fabs(h) ? std::sqrt(rg * rg - h * h) - rg : 0.0;
 }
 
-double PlanBuilder::coneR(double z) const { return cone_.diameterAt(z) / 2.0; }
+double PlanBuilder::coneR(double z) const {
+    return cone_.diameterAt(z) / 2.0;
+}
 
 double PlanBuilder::tipLine(double z, double normalLeftMm) const {
     return coneR(z) + noseRadial_ + normalLeftMm / std::cos(th_) + heightCorr_;
@@ -58,15 +57,18 @@ double PlanBuilder::tipLine(double z, double normalLeftMm) const {
 double PlanBuilder::currentR(double z) const {
     double r = rs_;
     for (const Turned& t : turned_)
-        if (z <= t.zEndMm + 1e-9) r = std::min(r, t.radiusMm);
+        if (z <= t.zEndMm + 1e-9)
+            r = std::min(r, t.radiusMm);
     return r;
 }
 
 bool PlanBuilder::endIsFree(bool highEnd) const {
     const double z = highEnd ? zHi_ + 0.01 : zLo_ - 0.01;
-    if (!highEnd && z < z0_) return true;  // beyond the bar's free end: air
+    if (!highEnd && z < z0_)
+        return true; // beyond the bar's free end: air
     const auto nb = sc_.part.nominalRadiusAt(z);
-    if (!nb) return true;  // the drawing says nothing there
+    if (!nb)
+        return true; // the drawing says nothing there
     const bool largeEnd = (g_ > 0) == highEnd;
     // A convex corner (the neighbour no larger than the cone's large end) lets the tool run on.
     return largeEnd && *nb <= coneR(highEnd ? zHi_ : zLo_) + 1e-3;
@@ -83,7 +85,8 @@ std::optional<std::pair<double, double>> PlanBuilder::tipRange(double normalLeft
             zb = std::max(zb, z + dz);
         }
     }
-    if (za > zb) return std::nullopt;
+    if (za > zb)
+        return std::nullopt;
     za = std::max(za, zLo_);
     zb = std::min(zb, zHi_);
     const double margin = r_ + 0.5 + sc_.setup.compound.backlashMm;
@@ -99,7 +102,8 @@ std::optional<std::pair<double, double>> PlanBuilder::tipRange(double normalLeft
         tb = std::min(tb, zHi_ + lead_ * r_ - r_);
     // Keep clear of the chuck jaws.
     tb = std::min(tb, sc_.stock.jawZMm() - 2.0 * r_ - 1.0);
-    if (tb <= ta) return std::nullopt;
+    if (tb <= ta)
+        return std::nullopt;
     return std::make_pair(ta, tb);
 }
 
@@ -127,8 +131,9 @@ void PlanBuilder::turnCylinder(double radiusMm, double zEndMm, bool endAtShoulde
     const int n = roughDepth > 1e-9
                       ? static_cast<int>(std::ceil(roughDepth / sc_.planning.maxDepthMm - 1e-9))
                       : 0;
-    const double sFrom = std::floor((z0_ - r_ - 1.0 - saddle.backlashMm - zeroZ_) / saddle.mmPerDivision) *
-                         saddle.mmPerDivision;
+    const double sFrom =
+        std::floor((z0_ - r_ - 1.0 - saddle.backlashMm - zeroZ_) / saddle.mmPerDivision) *
+        saddle.mmPerDivision;
     // Stop at a shoulder without passing it; run on past a free end until the nose is clear,
     // short of the jaws.
     double sTo = endAtShoulder
@@ -149,8 +154,9 @@ void PlanBuilder::turnCylinder(double radiusMm, double zEndMm, bool endAtShoulde
         p.fromMm = sFrom;
         p.toMm = sTo;
         p.feedMmPerRev = finish ? sc_.planning.finishFeedMmPerRev : sc_.planning.roughFeedMmPerRev;
-        p.note = what + (finish ? ": finishing pass" : ": roughing pass " + std::to_string(i + 1) +
-                                                           " of " + std::to_string(n));
+        p.note = what +
+                 (finish ? ": finishing pass"
+                         : ": roughing pass " + std::to_string(i + 1) + " of " + std::to_string(n));
         PassDisplay d;
         d.stage = stage;
         addPass(p, d);
@@ -160,7 +166,8 @@ void PlanBuilder::turnCylinder(double radiusMm, double zEndMm, bool endAtShoulde
 
 double PlanBuilder::heightCorrAt(double radiusMm) const {
     const double h = sc_.tool.tipHeightMm;
-    return h != 0 && radiusMm > std::fabs(h) ? std::sqrt(radiusMm * radiusMm - h * h) - radiusMm : 0;
+    return h != 0 && radiusMm > std::fabs(h) ? std::sqrt(radiusMm * radiusMm - h * h) - radiusMm
+                                             : 0;
 }
 
 double PlanBuilder::maxNormalThickness() const {
@@ -175,7 +182,8 @@ double PlanBuilder::maxNormalThickness() const {
 
 void PlanBuilder::planSettings() {
     const auto range = tipRange(0.0);
-    if (!range) return;
+    if (!range)
+        return;
     const double cosT = std::cos(th_);
     const double begin = a_ > 0 ? range->first : range->second;
     const double lengthAlong = (range->second - range->first) / cosT;
@@ -204,14 +212,17 @@ void PlanBuilder::planSettings() {
 bool PlanBuilder::compoundPass(double normalLeftMm, bool finish, const std::string& what,
                                int passNo, int passCount) {
     const auto range = tipRange(normalLeftMm);
-    if (!range) return false;
+    if (!range)
+        return false;
     const double cosT = std::cos(th_);
     const Slide& comp = sc_.setup.compound;
     bool any = false;
     for (std::size_t k = 0; k < settings_.size(); ++k) {
         const Setting& st = settings_[k];
-        const double lo = std::max(range->first, st.zMinMm), hi = std::min(range->second, st.zMaxMm);
-        if (hi <= lo + 1e-6) continue;
+        const double lo = std::max(range->first, st.zMinMm),
+                     hi = std::min(range->second, st.zMaxMm);
+        if (hi <= lo + 1e-6)
+            continue;
         const double base = zeroZ_ + st.saddleMm;
         auto pAt = [&](double z) { return (z - base) / (a_ * cosT); };
         const double zStart = a_ > 0 ? lo : hi, zEnd = a_ > 0 ? hi : lo;
@@ -227,9 +238,11 @@ bool PlanBuilder::compoundPass(double normalLeftMm, bool finish, const std::stri
         p.toMm = pTo;
         p.feedMmPerRev = finish ? sc_.planning.finishFeedMmPerRev : sc_.planning.roughFeedMmPerRev;
         std::string n = what;
-        if (!finish) n += " " + std::to_string(passNo) + " of " + std::to_string(passCount);
+        if (!finish)
+            n += " " + std::to_string(passNo) + " of " + std::to_string(passCount);
         if (settings_.size() > 1)
-            n += ", saddle setting " + std::to_string(k + 1) + " of " + std::to_string(settings_.size());
+            n += ", saddle setting " + std::to_string(k + 1) + " of " +
+                 std::to_string(settings_.size());
         p.note = n;
         PassDisplay d;
         d.stage = 1;
@@ -249,29 +262,33 @@ void PlanBuilder::saddleSteps() {
     const double tanT = std::tan(th_);
     const double top = std::min(rs_, currentR(zHi_));
     const double bottom = tipLine(zLo_, allowance);
-    if (top <= bottom) return;
+    if (top <= bottom)
+        return;
     const int n = static_cast<int>(std::ceil((top - bottom) / sc_.planning.maxDepthMm - 1e-9));
     const Slide& saddle = sc_.setup.saddle;
-    const double sFrom = std::floor((z0_ - r_ - 1.0 - saddle.backlashMm - zeroZ_) / saddle.mmPerDivision) *
-                         saddle.mmPerDivision;
+    const double sFrom =
+        std::floor((z0_ - r_ - 1.0 - saddle.backlashMm - zeroZ_) / saddle.mmPerDivision) *
+        saddle.mmPerDivision;
     int made = 0;
     for (int j = 1; j < n; ++j) {
         const double x = top - (top - bottom) * j / n;
         const double xSet = roundToDivision(sc_.setup.cross, crossFor(x), 2);
         const double xTip = zeroD_ / 2.0 - k_ * xSet;
         // Where the tip line for the allowance reaches this radius.
-        const double zCorner = cone_.gaugeZMm +
-                               (xTip - (cone_.gaugeDiameterMm / 2.0 + noseRadial_ + heightCorr_ +
-                                        allowance / std::cos(th_))) / tanT;
+        const double zCorner = cone_.gaugeZMm + (xTip - (cone_.gaugeDiameterMm / 2.0 + noseRadial_ +
+                                                         heightCorr_ + allowance / std::cos(th_))) /
+                                                    tanT;
         const double zStop = std::min(zCorner, zHi_);
-        if (zStop <= zLo_) continue;
+        if (zStop <= zLo_)
+            continue;
         Pass p;
         p.kind = PassKind::Saddle;
         p.crossMm = xSet;
         p.compoundMm = 0;
         p.fromMm = sFrom;
         p.toMm = std::floor((zStop - zeroZ_) / saddle.mmPerDivision + 1e-9) * saddle.mmPerDivision;
-        if (p.toMm <= p.fromMm) continue;
+        if (p.toMm <= p.fromMm)
+            continue;
         p.feedMmPerRev = sc_.planning.roughFeedMmPerRev;
         p.note = "cone, stepped saddle pass " + std::to_string(++made);
         PassDisplay d;

@@ -65,7 +65,6 @@ class PlanBuilder {
     ConePlan& out_;
     const Feature& f_;
     Cone cone_;
-    Units units_;
     double th_ = 0, g_ = 1, lead_ = 1, a_ = -1, k_ = 0.5, rs_ = 0, z0_ = 0, zLo_ = 0, zHi_ = 0,
            r_ = 0;
     double noseRadial_ = 0, tipAheadZ_ = 0, heightCorr_ = 0;

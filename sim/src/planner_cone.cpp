@@ -32,7 +32,8 @@ const Feature* coneToPlan(const Part& part, int& index) {
     }
     index = -1;
     for (std::size_t i = 0; i < part.features.size(); ++i)
-        if (&part.features[i] == f) index = static_cast<int>(i);
+        if (&part.features[i] == f)
+            index = static_cast<int>(i);
     return f;
 }
 
@@ -43,10 +44,12 @@ double chooseRollMm(double coneLengthMm, Units u) {
     double best = u == Units::Inch ? in[0] * kMmPerInch : mm[0];
     if (u == Units::Inch) {
         for (double d : in)
-            if (d * kMmPerInch <= 0.2 * coneLengthMm) best = d * kMmPerInch;
+            if (d * kMmPerInch <= 0.2 * coneLengthMm)
+                best = d * kMmPerInch;
     } else {
         for (double d : mm)
-            if (d <= 0.2 * coneLengthMm) best = d;
+            if (d <= 0.2 * coneLengthMm)
+                best = d;
     }
     return best;
 }
@@ -72,10 +75,11 @@ void fillChecks(ConePlan& out, const Scene& sc, const Feature& f) {
     // Over two rolls, the cone standing on its small end.
     const double g = cone.growthSign();
     const double zSmall = g > 0 ? f.zStartMm : f.zEndMm;
-    const double d = sc.planning.rollDiameterMm > 0 ? sc.planning.rollDiameterMm : chooseRollMm(len, u);
+    const double d =
+        sc.planning.rollDiameterMm > 0 ? sc.planning.rollDiameterMm : chooseRollMm(len, u);
     const double stack1 = roundStackMm(0.2 * len - d / 2.0, u);
-    const double stack2 = std::max(stack1 + (u == Units::Inch ? 2.54 : 1.0),
-                                   roundStackMm(0.75 * len - d / 2.0, u));
+    const double stack2 =
+        std::max(stack1 + (u == Units::Inch ? 2.54 : 1.0), roundStackMm(0.75 * len - d / 2.0, u));
     const RollReadings rr = rollReadingsForCone(cone.diameterAt(zSmall), th, d, stack1, stack2);
     out.rolls.rollDiameterMm = d;
     out.rolls.height1Mm = rr.centreHeight1Mm;
@@ -91,7 +95,8 @@ void fillChecks(ConePlan& out, const Scene& sc, const Feature& f) {
     const std::string want = u == Units::Inch ? "5 in" : "100 mm";
     SineBar bar = bars.front();
     for (const SineBar& b : bars)
-        if (b.name == want) bar = b;
+        if (b.name == want)
+            bar = b;
     out.sineBar.barLengthMm = bar.lengthMm;
     out.sineBar.angleRad = th;
     out.sineBar.stackMm = sineBarStackMm(bar.lengthMm, th);
@@ -99,12 +104,14 @@ void fillChecks(ConePlan& out, const Scene& sc, const Feature& f) {
     if (!sc.gaugeBlocksMm.empty()) {
         set.name = "the scene's gauge blocks";
         set.sizes.clear();
-        for (double b : sc.gaugeBlocksMm) set.sizes.push_back(fromMm(b, u));
+        for (double b : sc.gaugeBlocksMm)
+            set.sizes.push_back(fromMm(b, u));
         set.units = u;
     }
     const GaugeStack gs = combineGaugeBlocks(out.sineBar.stackMm, set);
     if (gs.found)
-        for (double b : gs.blocks) out.sineBar.blocksMm.push_back(toMm(b, set.units));
+        for (double b : gs.blocks)
+            out.sineBar.blocksMm.push_back(toMm(b, set.units));
 
     // Theoretical roughness of the finishing pass (references R2).
     const double feed = sc.planning.finishFeedMmPerRev, r = sc.tool.noseRadiusMm;
@@ -167,14 +174,17 @@ ConePlan planCone(const Scene& scene) {
     std::vector<const Feature*> cylinders;
     const Feature* longest = nullptr;
     for (const Feature& c : scene.part.features) {
-        if (c.kind != FeatureKind::Cylinder) continue;
-        if (!longest || c.zEndMm - c.zStartMm > longest->zEndMm - longest->zStartMm) longest = &c;
+        if (c.kind != FeatureKind::Cylinder)
+            continue;
+        if (!longest || c.zEndMm - c.zStartMm > longest->zEndMm - longest->zStartMm)
+            longest = &c;
         if (c.diameterMm > stockD + 1e-6) {
             out.cautions.push_back("the cylinder '" + c.name + "' (Ø" + L(c.diameterMm) +
                                    ") is larger than the bar: it cannot be turned from it");
             continue;
         }
-        if (c.diameterMm > stockD - 1e-6) continue;  // the bar's own diameter
+        if (c.diameterMm > stockD - 1e-6)
+            continue; // the bar's own diameter
         bool reachable = true;
         for (const Feature& o : scene.part.features)
             if (o.zEndMm <= c.zStartMm + 1e-9 && o.kind != FeatureKind::Face)
@@ -199,7 +209,8 @@ ConePlan planCone(const Scene& scene) {
     }
     if (placing == PlanningOptions::Placing::ReferenceShoulder) {
         double zRef = std::clamp(cone.gaugeZMm, f.zStartMm, f.zEndMm);
-        if (zRef - f.zStartMm < 2.0) zRef = f.zEndMm;  // too short a reference: use the large end
+        if (zRef - f.zStartMm < 2.0)
+            zRef = f.zEndMm; // too short a reference: use the large end
         const double div = scene.setup.saddle.mmPerDivision;
         zRef = std::clamp(z0 + std::round((zRef - z0) / div) * div, f.zStartMm, f.zEndMm);
         out.referenceZMm = zRef;
@@ -217,8 +228,9 @@ ConePlan planCone(const Scene& scene) {
     // 1. The compound.
     step(out, PlanStep::Kind::SetCompound,
          std::string("Swing the compound to ") + formatDms(setup.compoundReadingRad, 0) +
-             (setup.compoundScale == CompoundScale::FromAxis ? " on its scale (read from the spindle axis)"
-                                                            : " on its scale (read from the cross-slide)") +
+             (setup.compoundScale == CompoundScale::FromAxis
+                  ? " on its scale (read from the spindle axis)"
+                  : " on its scale (read from the cross-slide)") +
              ", so that winding it in moves the tool toward the " +
              (g > 0 ? "tailstock" : "chuck") + " and in toward the axis: half angle θ = " +
              formatDms(th, 1) + ". Set it exactly with the sine bar (see the checks), lock it.");
@@ -227,7 +239,8 @@ ConePlan planCone(const Scene& scene) {
                                " beyond the datum face: face it to length first (not planned)");
 
     // 2. Touch off on the bar and its end.
-    const bool stage0 = !cylinders.empty() || placing == PlanningOptions::Placing::ReferenceShoulder;
+    const bool stage0 =
+        !cylinders.empty() || placing == PlanningOptions::Placing::ReferenceShoulder;
     step(out, PlanStep::Kind::TouchOff,
          "With the compound at 0: touch the tool on the bar (Ø" + L(stockD) +
              ", measure it) and zero the cross-slide dial; touch the end face and zero the saddle "
@@ -250,11 +263,12 @@ ConePlan planCone(const Scene& scene) {
         step(out, PlanStep::Kind::TouchOff,
              "Work from the reference: touch the tool on the reference diameter and set the "
              "cross-slide dial to 0 (if it measured Ø d instead, set the dial to read (" +
-             L(out.referenceDiameterMm) + " − d)" + (b.crossK() < 1 ? "" : " / 2") +
-             "); touch the shoulder face and zero the saddle dial.");
+                 L(out.referenceDiameterMm) + " − d)" + (b.crossK() < 1 ? "" : " / 2") +
+                 "); touch the shoulder face and zero the saddle dial.");
     } else if (stage0) {
         step(out, PlanStep::Kind::Measure,
-             "Measure the finished diameter with a micrometer: Ø" + L(out.referenceDiameterMm) + ".");
+             "Measure the finished diameter with a micrometer: Ø" + L(out.referenceDiameterMm) +
+                 ".");
         step(out, PlanStep::Kind::TouchOff,
              "Work from the finished diameter: touch the tool on it and set the cross-slide dial "
              "to 0 (if it measured Ø d instead, set the dial to read (" +
@@ -274,20 +288,22 @@ ConePlan planCone(const Scene& scene) {
     b.planSettings();
     if (out.compoundSettings > 1)
         out.cautions.push_back(
-            "the compound's travel (" + L(scene.setup.compound.travelMm) + ") is shorter than the " +
-            "cone's length along its slant (" + L(out.compoundRunMm) + "): each pass is cut in " +
-            std::to_string(out.compoundSettings) +
+            "the compound's travel (" + L(scene.setup.compound.travelMm) +
+            ") is shorter than the " + "cone's length along its slant (" + L(out.compoundRunMm) +
+            "): each pass is cut in " + std::to_string(out.compoundSettings) +
             " settings of the saddle, moving and locking it between them; expect a faint mark "
             "where the settings meet. A taper attachment (or a tailstock set-over between "
             "centres) would cut it in one stroke.");
     const double thick = b.maxNormalThickness();
-    int n = thick > allowance + 1e-9
-                ? static_cast<int>(std::ceil((thick - allowance) / scene.planning.maxDepthMm - 1e-9))
-                : 0;
+    int n =
+        thick > allowance + 1e-9
+            ? static_cast<int>(std::ceil((thick - allowance) / scene.planning.maxDepthMm - 1e-9))
+            : 0;
     int made = 0;
     for (int i = 1; i <= n; ++i) {
         const double left = allowance + (thick - allowance) * (n - i) / n;
-        if (b.compoundPass(left, false, "cone roughing pass", i, n)) ++made;
+        if (b.compoundPass(left, false, "cone roughing pass", i, n))
+            ++made;
     }
     out.roughingPasses = made;
 
@@ -298,9 +314,9 @@ ConePlan planCone(const Scene& scene) {
              L(out.checkDiameterRoughMm) + " now (Ø" + L(out.checkDiameterFinishedMm) +
              " when finished).");
     step(out, PlanStep::Kind::Measure,
-         "Check the angle over two Ø" + L(out.rolls.rollDiameterMm) + " rolls at roll-centre heights " +
-             L(out.rolls.height1Mm) + " and " + L(out.rolls.height2Mm) +
-             " above the small end face: the readings must differ by " +
+         "Check the angle over two Ø" + L(out.rolls.rollDiameterMm) +
+             " rolls at roll-centre heights " + L(out.rolls.height1Mm) + " and " +
+             L(out.rolls.height2Mm) + " above the small end face: the readings must differ by " +
              L(out.rolls.reading2Mm - out.rolls.reading1Mm) + " (now " +
              L(out.rolls.reading1Mm + out.rolls.roughExtraMm) + " and " +
              L(out.rolls.reading2Mm + out.rolls.roughExtraMm) + "; finished " +
@@ -308,11 +324,13 @@ ConePlan planCone(const Scene& scene) {
              "). If the difference is off, correct the compound's angle before finishing.");
     b.compoundPass(0.0, true, "cone finishing pass (nose-radius offset applied)", 1, 1);
     step(out, PlanStep::Kind::Measure,
-         "Measure the finished cone: Ø" + L(out.checkDiameterFinishedMm) + " at " + L(out.checkZMm) +
-             ", over the rolls " + L(out.rolls.reading1Mm) + " and " + L(out.rolls.reading2Mm) + ".");
+         "Measure the finished cone: Ø" + L(out.checkDiameterFinishedMm) + " at " +
+             L(out.checkZMm) + ", over the rolls " + L(out.rolls.reading1Mm) + " and " +
+             L(out.rolls.reading2Mm) + ".");
 
     if (!scene.stock.tailstockSupport && scene.stock.stickOutMm > 3.0 * stockD)
-        out.cautions.push_back("the bar sticks out " + L(scene.stock.stickOutMm) + ", more than three "
+        out.cautions.push_back("the bar sticks out " + L(scene.stock.stickOutMm) +
+                               ", more than three "
                                "diameters, with no tailstock: support it, or expect it to spring "
                                "away (not simulated)");
     if (scene.tool.tipHeightMm != 0)
@@ -330,7 +348,8 @@ ConePlan planCone(const Scene& scene) {
     out.scene.expect = Expect{};
     out.scene.expect.withinTolerance = true;
     out.scene.expect.noFindings = true;
-    if (!out.planned) out.problems.push_back("there is no metal to remove: nothing was planned");
+    if (!out.planned)
+        out.problems.push_back("there is no metal to remove: nothing was planned");
     return out;
 }
 

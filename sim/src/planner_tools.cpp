@@ -21,11 +21,10 @@ struct HolderAngle {
     char letter;
     double kappaDeg;
 };
-constexpr HolderAngle kHolders[] = {{'A', 90},    {'B', 75},    {'D', 45},    {'E', 60},
-                                    {'F', 90},    {'G', 90},    {'J', 93},    {'K', 75},
-                                    {'L', 95},    {'N', 63},    {'S', 45},    {'T', 60},
-                                    {'Y', 85},    {'H', 107.5}, {'Q', 107.5}, {'P', 117.5},
-                                    {'V', 72.5}};
+constexpr HolderAngle kHolders[] = {{'A', 90},    {'B', 75},  {'D', 45}, {'E', 60},    {'F', 90},
+                                    {'G', 90},    {'J', 93},  {'K', 75}, {'L', 95},    {'N', 63},
+                                    {'S', 45},    {'T', 60},  {'Y', 85}, {'H', 107.5}, {'Q', 107.5},
+                                    {'P', 117.5}, {'V', 72.5}};
 
 // Insert-in-holder pairs that are usual in the trade (common practice), most usual first.
 struct Pair {
@@ -37,13 +36,15 @@ constexpr Pair kUsualPairs[] = {{'C', 'L'}, {'D', 'J'}, {'V', 'J'}, {'W', 'L'}, 
 
 double shapeIncludedRad(char letter) {
     for (const auto& s : kShapes)
-        if (s.letter == letter) return degToRad(s.includedDeg);
+        if (s.letter == letter)
+            return degToRad(s.includedDeg);
     return 0;
 }
 
 double holderKappaRad(char letter) {
     for (const auto& h : kHolders)
-        if (h.letter == letter) return degToRad(h.kappaDeg);
+        if (h.letter == letter)
+            return degToRad(h.kappaDeg);
     return 0;
 }
 
@@ -71,7 +72,8 @@ DialSetting dialSetting(const Slide& slide, double readingMm) {
     const double perTurn = slide.divisionsPerTurn;
     double turns = std::floor(divs / perTurn + 1e-9);
     double division = divs - turns * perTurn;
-    if (division < 0) division = 0;
+    if (division < 0)
+        division = 0;
     // Rounding noise near a whole turn shows as the next turn at division 0.
     if (division > perTurn - 1e-6) {
         division = 0;
@@ -86,9 +88,11 @@ double roundToDivision(const Slide& slide, double readingMm, int stepsPerDivisio
 }
 
 bool toolFollowsSlope(const Tool& tool, double pathAngleRad, double clearanceRad) {
-    if (tool.shape == 'R') return true;  // a round insert has no straight edge to rub
+    if (tool.shape == 'R')
+        return true; // a round insert has no straight edge to rub
     double eps = tool.includedAngleRad > 0 ? tool.includedAngleRad : shapeIncludedRad(tool.shape);
-    if (eps <= 0 || eps >= kPi - 1e-9) return true;
+    if (eps <= 0 || eps >= kPi - 1e-9)
+        return true;
     return follows(tool.enteringAngleRad, eps, tool.hand, pathAngleRad, clearanceRad);
 }
 
@@ -99,23 +103,25 @@ std::vector<std::string> suggestTools(const Tool& tool, double pathAngleRad, int
     char buf[320];
     for (Hand hand : {sameHand, otherHand}) {
         for (const Pair& p : kUsualPairs) {
-            if (static_cast<int>(out.size()) >= count) return out;
+            if (static_cast<int>(out.size()) >= count)
+                return out;
             const double kappa = holderKappaRad(p.holder);
             const double eps = shapeIncludedRad(p.shape);
-            if (!follows(kappa, eps, hand, pathAngleRad, kEdgeClearanceRad)) continue;
+            if (!follows(kappa, eps, hand, pathAngleRad, kEdgeClearanceRad))
+                continue;
             // Half angles it follows (with clearance) for a cone narrowing / widening toward the
             // chuck; a left-hand tool is the mirror image.
             const double down = descentLimitRad(kappa, eps, kEdgeClearanceRad);
             const double up = kappa - kEdgeClearanceRad;
             const double narrowing = hand == Hand::L ? up : down;
             const double widening = hand == Hand::L ? down : up;
-            std::snprintf(buf, sizeof buf,
-                          "shape %c insert (%.0f° corner, ISO 1832) in a style %c holder "
-                          "(entering angle %.1f°, ISO 5608), hand %c: follows cones narrowing "
-                          "toward the chuck up to %.1f° half angle and widening toward it up to %.1f°",
-                          p.shape, radToDeg(eps), p.holder, radToDeg(kappa),
-                          hand == Hand::L ? 'L' : 'R', std::min(radToDeg(narrowing), 90.0),
-                          std::min(radToDeg(widening), 90.0));
+            std::snprintf(
+                buf, sizeof buf,
+                "shape %c insert (%.0f° corner, ISO 1832) in a style %c holder "
+                "(entering angle %.1f°, ISO 5608), hand %c: follows cones narrowing "
+                "toward the chuck up to %.1f° half angle and widening toward it up to %.1f°",
+                p.shape, radToDeg(eps), p.holder, radToDeg(kappa), hand == Hand::L ? 'L' : 'R',
+                std::min(radToDeg(narrowing), 90.0), std::min(radToDeg(widening), 90.0));
             out.emplace_back(buf);
         }
     }

@@ -18,10 +18,14 @@ using namespace swarf;
 
 namespace {
 
-std::string scenePath(const std::string& name) { return std::string(SWARF_SCENES_DIR) + "/" + name; }
+std::string scenePath(const std::string& name) {
+    return std::string(SWARF_SCENES_DIR) + "/" + name;
+}
 
 // Relative closeness for values written with 12 significant digits.
-bool near(double a, double b) { return std::fabs(a - b) <= 1e-9 * std::max(1.0, std::fabs(a)); }
+bool near(double a, double b) {
+    return std::fabs(a - b) <= 1e-9 * std::max(1.0, std::fabs(a));
+}
 
 void checkSame(const Scene& a, const Scene& b) {
     CHECK(a.name == b.name);
@@ -65,7 +69,8 @@ void checkSame(const Scene& a, const Scene& b) {
     CHECK(s.crossDial == t.crossDial);
     CHECK(near(s.zeroDiameterMm, t.zeroDiameterMm));
     CHECK(near(s.zeroZMm, t.zeroZMm));
-    for (auto [p, q] : {std::pair{&s.compound, &t.compound}, {&s.cross, &t.cross}, {&s.saddle, &t.saddle}}) {
+    for (auto [p, q] :
+         {std::pair{&s.compound, &t.compound}, {&s.cross, &t.cross}, {&s.saddle, &t.saddle}}) {
         CHECK(near(p->mmPerDivision, q->mmPerDivision));
         CHECK(p->divisionsPerTurn == q->divisionsPerTurn);
         CHECK(near(p->backlashMm, q->backlashMm));
@@ -111,7 +116,8 @@ TEST_CASE("planned scenes round-trip and still prove themselves", "[io][writer][
     int count = 0;
     for (const auto& e : fs::directory_iterator(SWARF_SCENES_DIR)) {
         const std::string name = e.path().filename().string();
-        if (name.rfind("plan-", 0) != 0 || e.path().extension() != ".toml") continue;
+        if (name.rfind("plan-", 0) != 0 || e.path().extension() != ".toml")
+            continue;
         INFO(name);
         const Scene scene = io::readScene(e.path().string());
         const ConePlan plan = planCone(scene);
@@ -124,7 +130,8 @@ TEST_CASE("planned scenes round-trip and still prove themselves", "[io][writer][
         const Scene back = io::readSceneText(io::sceneToToml(plan.scene), name);
         checkSame(plan.scene, back);
         const CutResult r = simulate(back);
-        for (const Finding& f : r.findings) UNSCOPED_INFO(f.message);
+        for (const Finding& f : r.findings)
+            UNSCOPED_INFO(f.message);
         CHECK(r.findings.empty());
         CHECK(r.withinTolerance);
         ++count;
@@ -136,7 +143,7 @@ TEST_CASE("an inch scene is written back in inch", "[io][writer][units]") {
     const Scene a = io::readScene(scenePath("plan-morse-3-inch.toml"));
     const std::string text = io::sceneToToml(a);
     CHECK(text.find("units = \"inch\"") != std::string::npos);
-    CHECK(text.find("diameter = 1.0\n") != std::string::npos);  // the 1 in bar, not 25.4
+    CHECK(text.find("diameter = 1.0\n") != std::string::npos); // the 1 in bar, not 25.4
     checkSame(a, io::readSceneText(text, "inch.toml"));
 }
 

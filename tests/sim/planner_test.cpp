@@ -22,7 +22,7 @@ struct Job {
     FeatureKind kind = FeatureKind::Cone;
     double from = 0, to = 50, gaugeZ = 40, gaugeD = 29, halfAngleDeg = 2.862405, tol = 0.02;
     Widens widens = Widens::TowardChuck;
-    std::optional<double> bodyD;  // a cylinder from `to` to `to + bodyLen`
+    std::optional<double> bodyD; // a cylinder from `to` to `to + bodyLen`
     double bodyLen = 20;
     char shape = 'D';
     double epsDeg = 55, kappaDeg = 93, noseR = 0.4, edge = 11.6;
@@ -94,14 +94,14 @@ Scene makeScene(const Job& j) {
 std::vector<Job> cases() {
     std::vector<Job> v;
     {
-        Job j;  // 60° lathe centre, mm, diameter dial, zero on the finished body
+        Job j; // 60° lathe centre, mm, diameter dial, zero on the finished body
         j.name = "60° centre";
         j.stockD = 20, j.stickOut = 60, j.to = 12.990381, j.gaugeZ = 12.990381, j.gaugeD = 18;
         j.halfAngleDeg = 30, j.tol = 0.05, j.bodyD = 18;
         v.push_back(j);
     }
     {
-        Job j;  // 45° chamfer, radius dial, C insert in L holder, stepped saddle roughing
+        Job j; // 45° chamfer, radius dial, C insert in L holder, stepped saddle roughing
         j.name = "45° chamfer";
         j.kind = FeatureKind::Chamfer;
         j.stockD = 30, j.stickOut = 50, j.to = 4, j.gaugeZ = 0, j.gaugeD = 22, j.halfAngleDeg = 45;
@@ -112,7 +112,7 @@ std::vector<Job> cases() {
         v.push_back(j);
     }
     {
-        Job j;  // steep 7:24, reference shoulder at the gauge plane
+        Job j; // steep 7:24, reference shoulder at the gauge plane
         j.name = "7:24";
         j.stockD = 40, j.stickOut = 90, j.to = 48, j.gaugeZ = 44, j.gaugeD = 31.75;
         j.halfAngleDeg = radToDeg(std::atan(7.0 / 48.0)), j.tol = 0.02, j.bodyD = 40;
@@ -120,7 +120,7 @@ std::vector<Job> cases() {
         v.push_back(j);
     }
     {
-        Job j;  // Morse 3, inch, diameter dial, zero on the finished body
+        Job j; // Morse 3, inch, diameter dial, zero on the finished body
         j.name = "Morse 3 inch";
         j.units = Units::Inch;
         j.stockD = 1.0, j.stickOut = 3.5, j.to = 3.0, j.gaugeZ = 3.0, j.gaugeD = 0.938;
@@ -131,7 +131,7 @@ std::vector<Job> cases() {
         v.push_back(j);
     }
     {
-        Job j;  // Morse 2, inch, radius dial, reference shoulder
+        Job j; // Morse 2, inch, radius dial, reference shoulder
         j.name = "Morse 2 inch";
         j.units = Units::Inch;
         j.stockD = 0.875, j.stickOut = 3.0, j.to = 2.5, j.gaugeZ = 1.5, j.gaugeD = 0.700;
@@ -143,7 +143,7 @@ std::vector<Job> cases() {
         v.push_back(j);
     }
     {
-        Job j;  // shallow 1:50, 120 mm long: two saddle settings of a 70 mm compound
+        Job j; // shallow 1:50, 120 mm long: two saddle settings of a 70 mm compound
         j.name = "1:50";
         j.stockD = 22, j.stickOut = 160, j.to = 120, j.gaugeZ = 100, j.gaugeD = 20;
         j.halfAngleDeg = radToDeg(std::atan(0.01)), j.bodyD = 20.4, j.shape = 'V', j.epsDeg = 35;
@@ -151,14 +151,14 @@ std::vector<Job> cases() {
         v.push_back(j);
     }
     {
-        Job j;  // 10° flare narrowing toward the chuck: compound advances toward the chuck
+        Job j; // 10° flare narrowing toward the chuck: compound advances toward the chuck
         j.name = "10° flare";
         j.stockD = 25, j.stickOut = 50, j.to = 20, j.gaugeZ = 0, j.gaugeD = 24, j.halfAngleDeg = 10;
         j.tol = 0.05, j.widens = Widens::TowardTailstock;
         v.push_back(j);
     }
     {
-        Job j;  // 1:10 arbor with stepped saddle roughing, the bar itself as the reference
+        Job j; // 1:10 arbor with stepped saddle roughing, the bar itself as the reference
         j.name = "1:10 steps";
         j.stockD = 30, j.stickOut = 85, j.to = 50, j.gaugeZ = 40, j.gaugeD = 29;
         j.halfAngleDeg = radToDeg(std::atan(0.05)), j.bodyD = 30;
@@ -171,7 +171,7 @@ std::vector<Job> cases() {
 } // namespace
 
 TEST_CASE("dial settings wrap and count turns", "[planner]") {
-    const Slide s{0.02, 100, 0, 100};  // 2 mm a turn (common practice for a metric dial)
+    const Slide s{0.02, 100, 0, 100}; // 2 mm a turn (common practice for a metric dial)
     const DialSetting a = dialSetting(s, 2.53);
     CHECK(a.turns == 1);
     CHECK(a.division == Approx(26.5));
@@ -188,11 +188,13 @@ TEST_CASE("every planned cone proves itself in the kernel", "[planner][kernel]")
         const Scene scene = makeScene(j);
         REQUIRE_NOTHROW(scene.validate());
         const ConePlan plan = planCone(scene);
-        for (const std::string& p : plan.problems) INFO(p);
+        for (const std::string& p : plan.problems)
+            INFO(p);
         REQUIRE(plan.planned);
         REQUIRE_NOTHROW(plan.scene.validate());
         const CutResult r = simulate(plan.scene);
-        for (const Finding& f : r.findings) UNSCOPED_INFO(f.message);
+        for (const Finding& f : r.findings)
+            UNSCOPED_INFO(f.message);
         CHECK(r.findings.empty());
         CHECK(r.withinTolerance);
         const Feature& cone = plan.scene.part.features[plan.featureIndex];
@@ -240,13 +242,13 @@ TEST_CASE("hand-checked readings: 60/20/80 mm cone, r = 0.8, diameter dial", "[p
     CHECK(plan.scene.setup.compoundAdvanceToward == Widens::TowardTailstock);
     const Pass& fin = plan.scene.plan.passes.back();
     CHECK(fin.kind == PassKind::Compound);
-    CHECK(fin.saddleMm == Approx(82.0));            // derived above
-    CHECK(fin.crossMm == Approx(-0.65));            // derived above
-    CHECK(fin.fromMm == Approx(0.08));              // derived above
-    CHECK(fin.toMm == Approx(85.24));               // derived above
+    CHECK(fin.saddleMm == Approx(82.0)); // derived above
+    CHECK(fin.crossMm == Approx(-0.65)); // derived above
+    CHECK(fin.fromMm == Approx(0.08));   // derived above
+    CHECK(fin.toMm == Approx(85.24));    // derived above
     const DialSetting d = dialSetting(plan.scene.setup.cross, fin.crossMm);
-    CHECK(d.turns == -1);                           // derived above
-    CHECK(d.division == Approx(67.5));              // derived above
+    CHECK(d.turns == -1);              // derived above
+    CHECK(d.division == Approx(67.5)); // derived above
     // And the kernel agrees it cuts the drawn cone.
     const CutResult r = simulate(plan.scene);
     CHECK(r.findings.empty());
@@ -270,8 +272,8 @@ TEST_CASE("a cone the insert cannot follow is refused with suggestions", "[plann
     Tool t = makeScene(j).tool;
     CHECK_FALSE(toolFollowsSlope(t, -degToRad(45)));
     t.shape = 'V';
-    t.includedAngleRad = degToRad(35);  // Source: references R8 (V 35°)
-    t.enteringAngleRad = degToRad(93);  // Source: references R8 (J 93°)
+    t.includedAngleRad = degToRad(35); // Source: references R8 (V 35°)
+    t.enteringAngleRad = degToRad(93); // Source: references R8 (J 93°)
     CHECK(toolFollowsSlope(t, -degToRad(45)));
     CHECK(plan.suggestions.front().find("shape V") != std::string::npos);
     // The same tool follows the cone the other way round (widening toward the chuck).
@@ -279,13 +281,14 @@ TEST_CASE("a cone the insert cannot follow is refused with suggestions", "[plann
 }
 
 TEST_CASE("a cone longer than the compound's travel is split into saddle settings", "[planner]") {
-    Job j = cases()[5];  // the 1:50 cone, 120 mm against a 70 mm compound
+    Job j = cases()[5]; // the 1:50 cone, 120 mm against a 70 mm compound
     const ConePlan plan = planCone(makeScene(j));
     REQUIRE(plan.planned);
     CHECK(plan.compoundSettings == 2);
     CHECK(plan.compoundRunMm > toMm(j.compTravel, j.units));
     bool said = false;
-    for (const std::string& c : plan.cautions) said = said || c.find("taper attachment") != std::string::npos;
+    for (const std::string& c : plan.cautions)
+        said = said || c.find("taper attachment") != std::string::npos;
     CHECK(said);
     for (const Pass& p : plan.scene.plan.passes)
         if (p.kind == PassKind::Compound) {

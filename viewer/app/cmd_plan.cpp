@@ -27,7 +27,8 @@ void makeDir(const std::string& dir) {
     std::error_code ec;
     std::filesystem::create_directories(dir, ec);
     if (ec || !std::filesystem::is_directory(dir))
-        throw OutputError("cannot create the output folder " + dir + (ec ? ": " + ec.message() : ""));
+        throw OutputError("cannot create the output folder " + dir +
+                          (ec ? ": " + ec.message() : ""));
 }
 
 std::vector<std::string> headerFor(const ConePlan& plan, const std::string& from) {
@@ -37,16 +38,18 @@ std::vector<std::string> headerFor(const ConePlan& plan, const std::string& from
         "from below (wind back past each, then forward to it).",
         "",
         "CAUTION: this is a simulation of the tool path only. It does not model cutting forces,",
-        "deflection, chatter or tool wear. Keep guards closed, take the chuck key out, no gloves or",
+        "deflection, chatter or tool wear. Keep guards closed, take the chuck key out, no gloves "
+        "or",
         "loose clothing near rotating work, wear eye protection, take speeds and feeds from the",
         "tooling supplier, and defer to your shop's rules, local codes and licensed practice.",
     };
-    for (const std::string& c : plan.cautions) h.push_back("Note: " + c);
+    for (const std::string& c : plan.cautions)
+        h.push_back("Note: " + c);
     return h;
 }
 
 int runPlan(const PlanArgs& a) {
-    const Scene scene = io::readScene(a.scene);  // bad input throws before anything is written
+    const Scene scene = io::readScene(a.scene); // bad input throws before anything is written
     const ConePlan plan = planCone(scene);
     makeDir(a.outDir);
     const std::filesystem::path dir(a.outDir);
@@ -56,10 +59,12 @@ int runPlan(const PlanArgs& a) {
         io::writeTextAtomically((dir / "setup-sheet.txt").string(), viewer::setupSheetText(plan));
         io::writeTextAtomically((dir / "setup-sheet.html").string(), viewer::setupSheetHtml(plan));
         fmt::print("{}: NOT PLANNED\n", scene.name);
-        for (const std::string& p : plan.problems) fmt::print("  {}\n", p);
+        for (const std::string& p : plan.problems)
+            fmt::print("  {}\n", p);
         if (!plan.suggestions.empty()) {
             fmt::print("  Inserts and holders that can follow this cone:\n");
-            for (const std::string& s : plan.suggestions) fmt::print("  - {}\n", s);
+            for (const std::string& s : plan.suggestions)
+                fmt::print("  - {}\n", s);
         }
         fmt::print("wrote {} and {}\n", (dir / "setup-sheet.txt").string(),
                    (dir / "setup-sheet.html").string());
@@ -71,22 +76,31 @@ int runPlan(const PlanArgs& a) {
     // Prove the plan as written: read the file back and simulate it.
     const Scene written = io::readScene(plannedPath);
     const CutResult result = simulate(written);
-    io::writeTextAtomically((dir / "setup-sheet.txt").string(), viewer::setupSheetText(plan, &result));
-    io::writeTextAtomically((dir / "setup-sheet.html").string(), viewer::setupSheetHtml(plan, &result));
+    io::writeTextAtomically((dir / "setup-sheet.txt").string(),
+                            viewer::setupSheetText(plan, &result));
+    io::writeTextAtomically((dir / "setup-sheet.html").string(),
+                            viewer::setupSheetHtml(plan, &result));
 
     fmt::print("{}: {} passes ({} cone roughing, {} stepped saddle, compound in {} setting{})\n",
                scene.name, plan.scene.plan.passes.size(), plan.roughingPasses,
                plan.saddleStepPasses, plan.compoundSettings, plan.compoundSettings == 1 ? "" : "s");
     fmt::print("  compound {} on its scale; finishing pass offset {} on radius for the nose\n",
                formatDms(plan.compoundReadingRad, 0), formatLength(plan.noseOffsetRadialMm, u));
-    for (const std::string& c : plan.cautions) fmt::print("  note: {}\n", c);
+    for (const std::string& c : plan.cautions)
+        fmt::print("  note: {}\n", c);
     fmt::print("simulated: {}\n", result.withinTolerance ? "WITHIN TOLERANCE" : "OUT OF TOLERANCE");
+    if (!result.withinTolerance || !result.findings.empty())
+        fmt::print(
+            "  WARNING: the plan does not prove itself; do not cut from it before the findings "
+            "below are understood\n");
     fmt::print("  gauge diameter as cut {} (drawing {}), left on at most {}, overcut at most {}\n",
-               formatLength(result.gaugeAsCutDiameterMm, u), formatLength(result.gaugeNominalDiameterMm, u),
+               formatLength(result.gaugeAsCutDiameterMm, u),
+               formatLength(result.gaugeNominalDiameterMm, u),
                formatSmallLength(result.maxLeftOnMm, u), formatSmallLength(result.maxOvercutMm, u));
     for (const Finding& f : result.findings)
         fmt::print("  finding {} (pass {}): {}\n", findingKindName(f.kind), f.pass + 1, f.message);
-    if (result.findings.empty()) fmt::print("  no findings\n");
+    if (result.findings.empty())
+        fmt::print("  no findings\n");
     fmt::print("wrote {}, {}, {}\n", plannedPath, (dir / "setup-sheet.txt").string(),
                (dir / "setup-sheet.html").string());
     return kExitOk;

@@ -35,21 +35,28 @@ std::string printf1(const char* f, double v) {
     return buf;
 }
 
-Block para(std::string s) { return Block{Block::Kind::Para, {std::move(s)}, {}}; }
-Block list(std::vector<std::string> l, Block::Kind k = Block::Kind::List) { return Block{k, std::move(l), {}}; }
+Block para(std::string s) {
+    return Block{Block::Kind::Para, {std::move(s)}, {}};
+}
+Block list(std::vector<std::string> l, Block::Kind k = Block::Kind::List) {
+    return Block{k, std::move(l), {}};
+}
 
 const char* kCautions[] = {
     "Keep every guard in place and closed. Take the chuck key out of the chuck every time, before "
     "the spindle is started.",
     "No gloves, loose sleeves, ties, jewellery or long loose hair near rotating work. Wear eye "
-    "protection. Clear swarf with a brush or hook, never by hand, and only with the spindle stopped.",
-    "Keep the work's stick-out short (about three diameters or less in a chuck alone) or support it "
+    "protection. Clear swarf with a brush or hook, never by hand, and only with the spindle "
+    "stopped.",
+    "Keep the work's stick-out short (about three diameters or less in a chuck alone) or support "
+    "it "
     "with the tailstock; check the work is held tight before starting.",
     "Take cutting speeds, feeds and depths of cut from the tooling supplier's data for this insert "
     "and material; the feeds here are the plan's inputs, not a recommendation.",
     "Defer to your shop's rules, local codes and licensed practice; this sheet does not replace "
     "training or supervision.",
-    "The simulation behind this sheet models the tool path and the insert's shape only. It does not "
+    "The simulation behind this sheet models the tool path and the insert's shape only. It does "
+    "not "
     "model cutting forces, deflection of the work or the tool, chatter or tool wear. Check every "
     "reading on the machine and take a light trial cut before trusting any number here.",
 };
@@ -60,16 +67,21 @@ std::string cell(const Slide& slide, double readingMm, Units u) {
     const double frac = d.division - std::floor(d.division);
     char buf[96];
     std::snprintf(buf, sizeof buf, "%.*f [%ld t + %.*f]", u == Units::Inch ? 4 : 3,
-                  fromMm(readingMm, u), d.turns, frac < 1e-6 || frac > 1 - 1e-6 ? 0 : 1, d.division);
+                  fromMm(readingMm, u), d.turns, frac < 1e-6 || frac > 1 - 1e-6 ? 0 : 1,
+                  d.division);
     return buf;
 }
 
 std::string slideName(PassKind k) {
     switch (k) {
-    case PassKind::Compound: return "compound";
-    case PassKind::Saddle: return "saddle";
-    case PassKind::CrossSlide: return "cross-slide";
-    case PassKind::Path: return "path";
+    case PassKind::Compound:
+        return "compound";
+    case PassKind::Saddle:
+        return "saddle";
+    case PassKind::CrossSlide:
+        return "cross-slide";
+    case PassKind::Path:
+        return "path";
     }
     return "";
 }
@@ -84,8 +96,8 @@ Sheet buildSheet(const ConePlan& plan, const CutResult* proof) {
     sh.subtitle = sc.description;
 
     Section safety{"Safety first", {}};
-    safety.blocks.push_back(list(std::vector<std::string>(std::begin(kCautions), std::end(kCautions)),
-                                 Block::Kind::Warn));
+    safety.blocks.push_back(list(
+        std::vector<std::string>(std::begin(kCautions), std::end(kCautions)), Block::Kind::Warn));
     sh.sections.push_back(safety);
 
     if (!plan.planned) {
@@ -108,17 +120,23 @@ Sheet buildSheet(const ConePlan& plan, const CutResult* proof) {
                  L(f.zStartMm) + " to " + L(f.zEndMm) + ", widening toward the " +
                  (cone.widens == Widens::TowardChuck ? "chuck" : "tailstock") + ".");
     jl.push_back("Half angle θ = " + formatDms(plan.halfAngleRad, 1) + " (included " +
-                 formatDms(2 * plan.halfAngleRad, 1) + "; taper 1:" +
-                 printf1("%.3f", cone.ratioK()) + " on diameter), ± " +
+                 formatDms(2 * plan.halfAngleRad, 1) +
+                 "; taper 1:" + printf1("%.3f", cone.ratioK()) + " on diameter), ± " +
                  formatDms(f.angleToleranceRad, 0) + ".");
     jl.push_back("Bar Ø" + L(sc.stock.diameterMm) + ", " + L(sc.stock.stickOutMm) +
-                 " out of the jaws" + (sc.stock.material.empty() ? "" : ", " + sc.stock.material) + ".");
-    jl.push_back(std::string("Insert shape ") + (sc.tool.shape ? std::string(1, sc.tool.shape) : "?") +
-                 ", nose radius " + L(sc.tool.noseRadiusMm) + ", entering angle " +
-                 formatDms(sc.tool.enteringAngleRad, 0) +
-                 (sc.tool.holderCode.empty() ? "" : " (holder style " + sc.tool.holderCode + ")") +
-                 ", hand " + (sc.tool.hand == Hand::L ? "L" : sc.tool.hand == Hand::N ? "N" : "R") +
-                 ", tip " + (sc.tool.tipHeightMm == 0 ? "on centre" : L(sc.tool.tipHeightMm) + " off centre") + ".");
+                 " out of the jaws" + (sc.stock.material.empty() ? "" : ", " + sc.stock.material) +
+                 ".");
+    jl.push_back(
+        std::string("Insert shape ") + (sc.tool.shape ? std::string(1, sc.tool.shape) : "?") +
+        ", nose radius " + L(sc.tool.noseRadiusMm) + ", entering angle " +
+        formatDms(sc.tool.enteringAngleRad, 0) +
+        (sc.tool.holderCode.empty() ? "" : " (holder style " + sc.tool.holderCode + ")") +
+        ", hand " +
+        (sc.tool.hand == Hand::L   ? "L"
+         : sc.tool.hand == Hand::N ? "N"
+                                   : "R") +
+        ", tip " +
+        (sc.tool.tipHeightMm == 0 ? "on centre" : L(sc.tool.tipHeightMm) + " off centre") + ".");
     jl.push_back(std::string("Cross-slide dial reads on ") +
                  (su.crossDial == DialMode::Diameter ? "diameter" : "radius") + ", " +
                  L(su.cross.mmPerDivision) + " per division, " +
@@ -127,35 +145,43 @@ Sheet buildSheet(const ConePlan& plan, const CutResult* proof) {
                  std::to_string(su.compound.divisionsPerTurn) + " a turn; saddle " +
                  L(su.saddle.mmPerDivision) + " per division, " +
                  std::to_string(su.saddle.divisionsPerTurn) + " a turn.");
-    if (su.spindleRpm) jl.push_back("Spindle " + printf1("%.0f", *su.spindleRpm) + " rev/min (check it against the supplier's data).");
+    if (su.spindleRpm)
+        jl.push_back("Spindle " + printf1("%.0f", *su.spindleRpm) +
+                     " rev/min (check it against the supplier's data).");
     job.blocks.push_back(list(jl));
     sh.sections.push_back(job);
 
     Section setting{"Compound and nose-radius offset", {}};
     std::vector<std::string> cl;
     cl.push_back("Compound on its scale: " + formatDms(plan.compoundReadingRad, 0) +
-                 (su.compoundScale == CompoundScale::FromAxis ? " (scale read from the spindle axis)"
-                                                              : " (scale read from the cross-slide: 90° − θ)") +
+                 (su.compoundScale == CompoundScale::FromAxis
+                      ? " (scale read from the spindle axis)"
+                      : " (scale read from the cross-slide: 90° − θ)") +
                  "; winding it in moves the tool toward the " +
                  (su.compoundAdvanceToward == Widens::TowardChuck ? "chuck" : "tailstock") + ".");
     {
-        std::string s = "Sine bar " + L(plan.sineBar.barLengthMm) + " at " + formatDms(plan.sineBar.angleRad, 1) +
-                        ": gauge stack " + L(plan.sineBar.stackMm, u == Units::Inch ? 5 : 4);
+        std::string s = "Sine bar " + L(plan.sineBar.barLengthMm) + " at " +
+                        formatDms(plan.sineBar.angleRad, 1) + ": gauge stack " +
+                        L(plan.sineBar.stackMm, u == Units::Inch ? 5 : 4);
         if (!plan.sineBar.blocksMm.empty()) {
             s += " = ";
             for (std::size_t i = 0; i < plan.sineBar.blocksMm.size(); ++i)
                 s += (i ? " + " : "") + L(plan.sineBar.blocksMm[i], u == Units::Inch ? 4 : 3);
         }
-        s += ". Lay the bar at that angle to a reference trued parallel to the spindle axis, run an "
-             "indicator on the compound along it, and swivel the compound until the reading stays put.";
+        s +=
+            ". Lay the bar at that angle to a reference trued parallel to the spindle axis, run an "
+            "indicator on the compound along it, and swivel the compound until the reading stays "
+            "put.";
         cl.push_back(s);
     }
-    cl.push_back("Nose-radius offset (plane geometry): a tip placed on the drawn cone line "
-                 "would leave " + formatSmallLength(plan.noseNormalErrorMm, u) +
-                 " normal to the cone; the finishing readings already include the offset (tip line " +
-                 L(std::fabs(plan.noseOffsetRadialMm), u == Units::Inch ? 5 : 4) + " on radius " +
-                 (plan.noseOffsetRadialMm < 0 ? "inside" : "outside") + " the drawn line, the same as " +
-                 L(std::fabs(plan.noseOffsetAxialMm), u == Units::Inch ? 5 : 4) + " along the axis).");
+    cl.push_back(
+        "Nose-radius offset (plane geometry): a tip placed on the drawn cone line "
+        "would leave " +
+        formatSmallLength(plan.noseNormalErrorMm, u) +
+        " normal to the cone; the finishing readings already include the offset (tip line " +
+        L(std::fabs(plan.noseOffsetRadialMm), u == Units::Inch ? 5 : 4) + " on radius " +
+        (plan.noseOffsetRadialMm < 0 ? "inside" : "outside") + " the drawn line, the same as " +
+        L(std::fabs(plan.noseOffsetAxialMm), u == Units::Inch ? 5 : 4) + " along the axis).");
     setting.blocks.push_back(list(cl));
     sh.sections.push_back(setting);
 
@@ -170,7 +196,8 @@ Sheet buildSheet(const ConePlan& plan, const CutResult* proof) {
     refs.blocks.push_back(para(
         "Stage A readings count from the first touch-off on the bar (Ø" + L(sc.stock.diameterMm) +
         ") and its end face. Stage B readings count from the references: the cross-slide reads 0 "
-        "at Ø" + L(su.zeroDiameterMm) + ", the saddle reads 0 with the tip at " + L(su.zeroZMm) +
+        "at Ø" +
+        L(su.zeroDiameterMm) + ", the saddle reads 0 with the tip at " + L(su.zeroZMm) +
         " from the datum face."));
     sh.sections.push_back(refs);
 
@@ -178,8 +205,8 @@ Sheet buildSheet(const ConePlan& plan, const CutResult* proof) {
     std::vector<std::string> numbered;
     Table passes;
     const std::string un = unitName(u);
-    passes.head = {"step", "pass", "stage", "moves", "cross-slide " + un, "compound " + un,
-                   "saddle " + un, "from", "to", "feed " + un + "/rev"};
+    passes.head = {"step",           "pass",         "stage", "moves", "cross-slide " + un,
+                   "compound " + un, "saddle " + un, "from",  "to",    "feed " + un + "/rev"};
     int stepNo = 0;
     for (const PlanStep& st : plan.steps) {
         ++stepNo;
@@ -197,13 +224,13 @@ Sheet buildSheet(const ConePlan& plan, const CutResult* proof) {
         const double off = mC ? cOff : mS ? sOff : 0.0;
         numbered.push_back(std::to_string(stepNo) + ". Pass " + std::to_string(st.pass + 1) + ": " +
                            p.note + " (readings in the table).");
-        passes.rows.push_back({std::to_string(stepNo), std::to_string(st.pass + 1),
-                               d.stage == 0 ? "A" : "B", slideName(p.kind),
-                               mC ? "moves" : cell(su.cross, p.crossMm + cOff, u),
-                               mP ? "moves" : cell(su.compound, p.compoundMm, u),
-                               mS ? "moves" : cell(su.saddle, p.saddleMm + sOff, u),
-                               cell(moving, p.fromMm + off, u), cell(moving, p.toMm + off, u),
-                               printf1(u == Units::Inch ? "%.4f" : "%.3f", fromMm(p.feedMmPerRev, u))});
+        passes.rows.push_back(
+            {std::to_string(stepNo), std::to_string(st.pass + 1), d.stage == 0 ? "A" : "B",
+             slideName(p.kind), mC ? "moves" : cell(su.cross, p.crossMm + cOff, u),
+             mP ? "moves" : cell(su.compound, p.compoundMm, u),
+             mS ? "moves" : cell(su.saddle, p.saddleMm + sOff, u), cell(moving, p.fromMm + off, u),
+             cell(moving, p.toMm + off, u),
+             printf1(u == Units::Inch ? "%.4f" : "%.3f", fromMm(p.feedMmPerRev, u))});
     }
     ops.blocks.push_back(list(numbered, Block::Kind::Numbered));
     Block tb;
@@ -214,13 +241,15 @@ Sheet buildSheet(const ConePlan& plan, const CutResult* proof) {
 
     Section checks{"Checks before the finishing pass", {}};
     checks.blocks.push_back(list({
-        "Diameter at " + L(plan.checkZMm) + " from the datum face: Ø" + L(plan.checkDiameterRoughMm) +
-            " before finishing, Ø" + L(plan.checkDiameterFinishedMm) + " finished.",
-        "Over two Ø" + L(plan.rolls.rollDiameterMm) + " rolls, roll centres " + L(plan.rolls.height1Mm) +
-            " and " + L(plan.rolls.height2Mm) + " above the small end face: before finishing " +
+        "Diameter at " + L(plan.checkZMm) + " from the datum face: Ø" +
+            L(plan.checkDiameterRoughMm) + " before finishing, Ø" +
+            L(plan.checkDiameterFinishedMm) + " finished.",
+        "Over two Ø" + L(plan.rolls.rollDiameterMm) + " rolls, roll centres " +
+            L(plan.rolls.height1Mm) + " and " + L(plan.rolls.height2Mm) +
+            " above the small end face: before finishing " +
             L(plan.rolls.reading1Mm + plan.rolls.roughExtraMm) + " and " +
-            L(plan.rolls.reading2Mm + plan.rolls.roughExtraMm) + "; finished " + L(plan.rolls.reading1Mm) +
-            " and " + L(plan.rolls.reading2Mm) + ". The difference, " +
+            L(plan.rolls.reading2Mm + plan.rolls.roughExtraMm) + "; finished " +
+            L(plan.rolls.reading1Mm) + " and " + L(plan.rolls.reading2Mm) + ". The difference, " +
             L(plan.rolls.reading2Mm - plan.rolls.reading1Mm) + ", checks the angle at any size.",
         "Compound angle with the sine bar stack above, before the first cone pass.",
     }));
@@ -228,9 +257,10 @@ Sheet buildSheet(const ConePlan& plan, const CutResult* proof) {
 
     Section finish{"Expected finish", {}};
     finish.blocks.push_back(para(
-        "Finishing pass at " + formatLength(sc.planning.finishFeedMmPerRev, u, u == Units::Inch ? 4 : 3) +
-        "/rev with a " + L(sc.tool.noseRadiusMm) + " nose: theoretical Rt " +
-        formatSmallLength(plan.rtMm, u) + ", Ra " + formatSmallLength(plan.raMm, u) +
+        "Finishing pass at " +
+        formatLength(sc.planning.finishFeedMmPerRev, u, u == Units::Inch ? 4 : 3) + "/rev with a " +
+        L(sc.tool.noseRadiusMm) + " nose: theoretical Rt " + formatSmallLength(plan.rtMm, u) +
+        ", Ra " + formatSmallLength(plan.raMm, u) +
         " (from feed and nose radius only; the real finish also depends on the material, the edge, "
         "speed and rigidity)."));
     sh.sections.push_back(finish);
@@ -243,14 +273,17 @@ Sheet buildSheet(const ConePlan& plan, const CutResult* proof) {
     if (proof) {
         Section pr{"The plan, simulated", {}};
         std::vector<std::string> l;
-        l.push_back(std::string("Verdict: ") + (proof->withinTolerance ? "within tolerance" : "OUT OF TOLERANCE") + ".");
+        l.push_back(std::string("Verdict: ") +
+                    (proof->withinTolerance ? "within tolerance" : "OUT OF TOLERANCE") + ".");
         l.push_back("Gauge diameter as cut Ø" + L(proof->gaugeAsCutDiameterMm) + " (drawing Ø" +
                     L(proof->gaugeNominalDiameterMm) + "); most metal left on " +
                     formatSmallLength(proof->maxLeftOnMm, u) + ", deepest overcut " +
                     formatSmallLength(proof->maxOvercutMm, u) + ".");
         for (const Finding& fd : proof->findings)
-            l.push_back(std::string(findingKindName(fd.kind)) + " (pass " + std::to_string(fd.pass + 1) + "): " + fd.message);
-        if (proof->findings.empty()) l.push_back("No findings.");
+            l.push_back(std::string(findingKindName(fd.kind)) + " (pass " +
+                        std::to_string(fd.pass + 1) + "): " + fd.message);
+        if (proof->findings.empty())
+            l.push_back("No findings.");
         pr.blocks.push_back(list(l));
         sh.sections.push_back(pr);
     }
@@ -279,42 +312,53 @@ std::string wrap(const std::string& text, const std::string& first, const std::s
 // Display width of UTF-8 text (counts code points, not bytes).
 std::size_t cols(const std::string& s) {
     std::size_t n = 0;
-    for (unsigned char c : s) n += (c & 0xC0) != 0x80;
+    for (unsigned char c : s)
+        n += (c & 0xC0) != 0x80;
     return n;
 }
 
 std::string renderText(const Sheet& sh) {
     std::string out = sh.title + "\n" + std::string(cols(sh.title), '=') + "\n";
-    if (!sh.subtitle.empty()) out += sh.subtitle + "\n";
+    if (!sh.subtitle.empty())
+        out += sh.subtitle + "\n";
     for (const Section& s : sh.sections) {
         out += "\n" + s.title + "\n" + std::string(cols(s.title), '-') + "\n";
         for (const Block& b : s.blocks) {
             switch (b.kind) {
-            case Block::Kind::Para: out += wrap(b.lines[0], "", ""); break;
+            case Block::Kind::Para:
+                out += wrap(b.lines[0], "", "");
+                break;
             case Block::Kind::List:
-                for (const auto& l : b.lines) out += wrap(l, "- ", "  ");
+                for (const auto& l : b.lines)
+                    out += wrap(l, "- ", "  ");
                 break;
             case Block::Kind::Warn:
-                for (const auto& l : b.lines) out += wrap(l, "! ", "  ");
+                for (const auto& l : b.lines)
+                    out += wrap(l, "! ", "  ");
                 break;
             case Block::Kind::Numbered:
-                for (const auto& l : b.lines) out += wrap(l, "", "    ");
+                for (const auto& l : b.lines)
+                    out += wrap(l, "", "    ");
                 break;
             case Block::Kind::Table: {
                 const Table& t = b.table;
                 std::vector<std::size_t> w(t.head.size(), 0);
-                for (std::size_t i = 0; i < t.head.size(); ++i) w[i] = cols(t.head[i]);
+                for (std::size_t i = 0; i < t.head.size(); ++i)
+                    w[i] = cols(t.head[i]);
                 for (const auto& r : t.rows)
-                    for (std::size_t i = 0; i < r.size(); ++i) w[i] = std::max(w[i], cols(r[i]));
+                    for (std::size_t i = 0; i < r.size(); ++i)
+                        w[i] = std::max(w[i], cols(r[i]));
                 auto row = [&](const std::vector<std::string>& r) {
                     std::string line;
                     for (std::size_t i = 0; i < r.size(); ++i)
                         line += r[i] + std::string(w[i] - cols(r[i]) + 2, ' ');
-                    while (!line.empty() && line.back() == ' ') line.pop_back();
+                    while (!line.empty() && line.back() == ' ')
+                        line.pop_back();
                     return line + "\n";
                 };
                 out += "\n" + row(t.head);
-                for (const auto& r : t.rows) out += row(r);
+                for (const auto& r : t.rows)
+                    out += row(r);
                 break;
             }
             }
@@ -327,33 +371,50 @@ std::string esc(const std::string& s) {
     std::string o;
     for (char c : s) {
         switch (c) {
-        case '&': o += "&amp;"; break;
-        case '<': o += "&lt;"; break;
-        case '>': o += "&gt;"; break;
-        case '"': o += "&quot;"; break;
-        default: o += c;
+        case '&':
+            o += "&amp;";
+            break;
+        case '<':
+            o += "&lt;";
+            break;
+        case '>':
+            o += "&gt;";
+            break;
+        case '"':
+            o += "&quot;";
+            break;
+        default:
+            o += c;
         }
     }
     return o;
 }
 
 std::string renderHtml(const Sheet& sh) {
-    std::string o = "<!DOCTYPE html>\n<html lang=\"en\"><head><meta charset=\"utf-8\">\n<title>" +
-                    esc(sh.title) + "</title>\n<style>\n"
-                    "body{font-family:sans-serif;font-size:10.5pt;margin:1.5em;max-width:60em;color:#111}\n"
-                    "h1{font-size:16pt;margin-bottom:0}h2{font-size:12.5pt;border-bottom:1px solid #888;margin-top:1.2em}\n"
-                    "table{border-collapse:collapse;font-size:9pt}td,th{border:1px solid #999;padding:2px 5px;text-align:left;white-space:nowrap}\n"
-                    "th{background:#eee}.warn li{font-weight:bold}.warn{border:2px solid #000;padding:.4em .4em .4em 1.6em}\n"
-                    "ol.ops{list-style:none;padding-left:0}@page{size:auto;margin:12mm}\n"
-                    "@media print{body{margin:0}h2{break-after:avoid}table,li{break-inside:avoid}}\n"
-                    "</style></head><body>\n";
+    std::string o =
+        "<!DOCTYPE html>\n<html lang=\"en\"><head><meta charset=\"utf-8\">\n<title>" +
+        esc(sh.title) +
+        "</title>\n<style>\n"
+        "body{font-family:sans-serif;font-size:10.5pt;margin:1.5em;max-width:60em;color:#111}\n"
+        "h1{font-size:16pt;margin-bottom:0}h2{font-size:12.5pt;border-bottom:1px solid "
+        "#888;margin-top:1.2em}\n"
+        "table{border-collapse:collapse;font-size:9pt}td,th{border:1px solid #999;padding:2px "
+        "5px;text-align:left;white-space:nowrap}\n"
+        "th{background:#eee}.warn li{font-weight:bold}.warn{border:2px solid #000;padding:.4em "
+        ".4em .4em 1.6em}\n"
+        "ol.ops{list-style:none;padding-left:0}@page{size:auto;margin:12mm}\n"
+        "@media print{body{margin:0}h2{break-after:avoid}table,li{break-inside:avoid}}\n"
+        "</style></head><body>\n";
     o += "<h1>" + esc(sh.title) + "</h1>\n";
-    if (!sh.subtitle.empty()) o += "<p>" + esc(sh.subtitle) + "</p>\n";
+    if (!sh.subtitle.empty())
+        o += "<p>" + esc(sh.subtitle) + "</p>\n";
     for (const Section& s : sh.sections) {
         o += "<h2>" + esc(s.title) + "</h2>\n";
         for (const Block& b : s.blocks) {
             switch (b.kind) {
-            case Block::Kind::Para: o += "<p>" + esc(b.lines[0]) + "</p>\n"; break;
+            case Block::Kind::Para:
+                o += "<p>" + esc(b.lines[0]) + "</p>\n";
+                break;
             case Block::Kind::List:
             case Block::Kind::Warn:
             case Block::Kind::Numbered: {
@@ -361,17 +422,20 @@ std::string renderHtml(const Sheet& sh) {
                                    : b.kind == Block::Kind::Numbered ? "<ol class=\"ops\">"
                                                                      : "<ul>";
                 o += std::string(open) + "\n";
-                for (const auto& l : b.lines) o += "<li>" + esc(l) + "</li>\n";
+                for (const auto& l : b.lines)
+                    o += "<li>" + esc(l) + "</li>\n";
                 o += b.kind == Block::Kind::Numbered ? "</ol>\n" : "</ul>\n";
                 break;
             }
             case Block::Kind::Table:
                 o += "<table>\n<tr>";
-                for (const auto& h : b.table.head) o += "<th>" + esc(h) + "</th>";
+                for (const auto& h : b.table.head)
+                    o += "<th>" + esc(h) + "</th>";
                 o += "</tr>\n";
                 for (const auto& r : b.table.rows) {
                     o += "<tr>";
-                    for (const auto& c : r) o += "<td>" + esc(c) + "</td>";
+                    for (const auto& c : r)
+                        o += "<td>" + esc(c) + "</td>";
                     o += "</tr>\n";
                 }
                 o += "</table>\n";
@@ -388,8 +452,10 @@ std::string dialReadingText(const Slide& slide, double readingMm, Units units) {
     const DialSetting d = dialSetting(slide, readingMm);
     // Whole divisions print without decimals; half divisions with one.
     const double frac = d.division - std::floor(d.division);
-    const std::string div = printf1(std::fabs(frac) < 1e-6 || std::fabs(frac - 1) < 1e-6 ? "%.0f" : "%.1f", d.division);
-    return formatLength(readingMm, units) + " (" + std::to_string(d.turns) + " turns + " + div + " div)";
+    const std::string div =
+        printf1(std::fabs(frac) < 1e-6 || std::fabs(frac - 1) < 1e-6 ? "%.0f" : "%.1f", d.division);
+    return formatLength(readingMm, units) + " (" + std::to_string(d.turns) + " turns + " + div +
+           " div)";
 }
 
 std::string setupSheetText(const ConePlan& plan, const CutResult* proof) {

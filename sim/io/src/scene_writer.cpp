@@ -18,11 +18,21 @@ std::string quoted(const std::string& s) {
     std::string out = "\"";
     for (unsigned char c : s) {
         switch (c) {
-        case '"': out += "\\\""; break;
-        case '\\': out += "\\\\"; break;
-        case '\n': out += "\\n"; break;
-        case '\t': out += "\\t"; break;
-        case '\r': out += "\\r"; break;
+        case '"':
+            out += "\\\"";
+            break;
+        case '\\':
+            out += "\\\\";
+            break;
+        case '\n':
+            out += "\\n";
+            break;
+        case '\t':
+            out += "\\t";
+            break;
+        case '\r':
+            out += "\\r";
+            break;
         default:
             if (c < 0x20 || c == 0x7f) {
                 char buf[8];
@@ -38,11 +48,13 @@ std::string quoted(const std::string& s) {
 
 // A number as TOML: always with a decimal point or exponent so it reads as a float.
 std::string num(double v) {
-    if (v == 0) return "0.0";
+    if (v == 0)
+        return "0.0";
     char buf[64];
     std::snprintf(buf, sizeof buf, "%.12g", v);
     std::string s = buf;
-    if (s.find_first_of(".eEn") == std::string::npos) s += ".0";
+    if (s.find_first_of(".eEn") == std::string::npos)
+        s += ".0";
     return s;
 }
 
@@ -58,7 +70,8 @@ class Out {
         len("per_division", s.mmPerDivision);
         raw("divisions", std::to_string(s.divisionsPerTurn));
         len("backlash", s.backlashMm);
-        if (writeTravel) len("travel", s.travelMm);
+        if (writeTravel)
+            len("travel", s.travelMm);
     }
     std::string text() const { return os_.str(); }
 
@@ -67,7 +80,9 @@ class Out {
     std::ostringstream os_;
 };
 
-const char* widens(Widens w) { return w == Widens::TowardChuck ? "chuck" : "tailstock"; }
+const char* widens(Widens w) {
+    return w == Widens::TowardChuck ? "chuck" : "tailstock";
+}
 
 void writeFeature(Out& o, const Feature& f) {
     o.line("");
@@ -109,8 +124,10 @@ void writeFeature(Out& o, const Feature& f) {
         o.str("widens_toward", widens(f.cone.widens));
         break;
     }
-    if (!f.toleranceFromClass) o.len("tolerance", f.toleranceMm);
-    if ((f.kind == FeatureKind::Cone || f.kind == FeatureKind::Chamfer) && !f.angleToleranceFromClass)
+    if (!f.toleranceFromClass)
+        o.len("tolerance", f.toleranceMm);
+    if ((f.kind == FeatureKind::Cone || f.kind == FeatureKind::Chamfer) &&
+        !f.angleToleranceFromClass)
         o.deg("angle_tolerance", f.angleToleranceRad);
 }
 
@@ -120,26 +137,30 @@ void writePass(Out& o, const Pass& p) {
     switch (p.kind) {
     case PassKind::Compound:
         o.str("kind", "compound");
-        if (!p.note.empty()) o.str("note", p.note);
+        if (!p.note.empty())
+            o.str("note", p.note);
         o.len("cross", p.crossMm);
         o.len("saddle", p.saddleMm);
         break;
     case PassKind::Saddle:
         o.str("kind", "saddle");
-        if (!p.note.empty()) o.str("note", p.note);
+        if (!p.note.empty())
+            o.str("note", p.note);
         o.len("cross", p.crossMm);
         o.len("compound", p.compoundMm);
         break;
     case PassKind::CrossSlide:
         o.str("kind", "cross");
-        if (!p.note.empty()) o.str("note", p.note);
+        if (!p.note.empty())
+            o.str("note", p.note);
         o.len("compound", p.compoundMm);
         o.len("saddle", p.saddleMm);
         break;
     case PassKind::Path:
         // Its points follow the feed (written by the caller, in the scene's units).
         o.str("kind", "path");
-        if (!p.note.empty()) o.str("note", p.note);
+        if (!p.note.empty())
+            o.str("note", p.note);
         break;
     }
     if (p.kind != PassKind::Path) {
@@ -154,7 +175,8 @@ void writePass(Out& o, const Pass& p) {
 std::string sceneToToml(const Scene& sc, const std::vector<std::string>& headerComments) {
     const Units u = sc.units;
     Out o(u);
-    for (const std::string& c : headerComments) o.line(c.empty() ? "#" : "# " + c);
+    for (const std::string& c : headerComments)
+        o.line(c.empty() ? "#" : "# " + c);
     o.str("name", sc.name);
     o.str("description", sc.description);
     o.str("units", u == Units::Inch ? "inch" : "mm");
@@ -171,7 +193,8 @@ std::string sceneToToml(const Scene& sc, const std::vector<std::string>& headerC
     o.line("");
     o.line("[part]");
     o.str("tolerance_class", iso2768Name(sc.part.toleranceClass));
-    for (const Feature& f : sc.part.features) writeFeature(o, f);
+    for (const Feature& f : sc.part.features)
+        writeFeature(o, f);
 
     const Tool& t = sc.tool;
     o.line("");
@@ -193,7 +216,8 @@ std::string sceneToToml(const Scene& sc, const std::vector<std::string>& headerC
     const Setup& s = sc.setup;
     o.line("");
     o.line("[setup]");
-    if (s.spindleRpm) o.raw("spindle_rpm", num(*s.spindleRpm));
+    if (s.spindleRpm)
+        o.raw("spindle_rpm", num(*s.spindleRpm));
     o.line("");
     o.line("[setup.compound]");
     o.deg("angle", s.compoundReadingRad);
@@ -231,7 +255,8 @@ std::string sceneToToml(const Scene& sc, const std::vector<std::string>& headerC
     o.len("finish_feed", pl.finishFeedMmPerRev);
     o.str("placing", pl.placing == PlanningOptions::Placing::ZeroOnDiameter ? "zero_on_diameter"
                                                                             : "reference_shoulder");
-    o.str("roughing", pl.roughing == PlanningOptions::Roughing::Compound ? "compound" : "saddle_steps");
+    o.str("roughing",
+          pl.roughing == PlanningOptions::Roughing::Compound ? "compound" : "saddle_steps");
     o.len("roll_diameter", pl.rollDiameterMm);
 
     o.line("");
@@ -243,14 +268,16 @@ std::string sceneToToml(const Scene& sc, const std::vector<std::string>& headerC
     if (e.withinTolerance || !e.findings.empty() || e.noFindings) {
         o.line("");
         o.line("[expect]");
-        if (e.withinTolerance) o.str("verdict", *e.withinTolerance ? "in_tolerance" : "out_of_tolerance");
+        if (e.withinTolerance)
+            o.str("verdict", *e.withinTolerance ? "in_tolerance" : "out_of_tolerance");
         if (!e.findings.empty()) {
             std::string list = "[";
             for (std::size_t i = 0; i < e.findings.size(); ++i)
                 list += (i ? ", " : "") + quoted(e.findings[i]);
             o.raw("findings", list + "]");
         }
-        if (e.noFindings) o.raw("no_findings", "true");
+        if (e.noFindings)
+            o.raw("no_findings", "true");
     }
     if (!sc.gaugeBlocksMm.empty()) {
         o.line("");
@@ -267,7 +294,8 @@ void writeTextAtomically(const std::string& path, const std::string& text) {
     const std::string tmp = path + ".tmp";
     {
         std::ofstream f(tmp, std::ios::binary | std::ios::trunc);
-        if (!f) throw OutputError("cannot write " + tmp);
+        if (!f)
+            throw OutputError("cannot write " + tmp);
         f << text;
         f.flush();
         if (!f) {

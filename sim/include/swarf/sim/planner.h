@@ -14,8 +14,8 @@ namespace swarf {
 
 /// A reading as a person sets it on a dial that wraps: whole turns from zero, then a division.
 struct DialSetting {
-    long turns = 0;       ///< whole turns from the zero reading (negative: that many turns back)
-    double division = 0;  ///< the division the dial shows, 0 ≤ division < divisionsPerTurn
+    long turns = 0;      ///< whole turns from the zero reading (negative: that many turns back)
+    double division = 0; ///< the division the dial shows, 0 ≤ division < divisionsPerTurn
 };
 
 /// Splits a reading (mm of dial) into turns and the division shown. Example: 0.02 mm per
@@ -28,78 +28,80 @@ double roundToDivision(const Slide& slide, double readingMm, int stepsPerDivisio
 /// One step of the order of operations, in words (lengths in the scene's units).
 struct PlanStep {
     enum class Kind {
-        SetCompound,  ///< swing and set the compound
-        TouchOff,     ///< touch the tool on a surface and zero dials
-        Pass,         ///< one pass of the plan (see `pass`)
-        Measure,      ///< measure something, compare with the expected value
-        Note,         ///< anything else the person must know at this point
+        SetCompound, ///< swing and set the compound
+        TouchOff,    ///< touch the tool on a surface and zero dials
+        Pass,        ///< one pass of the plan (see `pass`)
+        Measure,     ///< measure something, compare with the expected value
+        Note,        ///< anything else the person must know at this point
     } kind = Kind::Note;
-    std::string text;  ///< what to do
-    int pass = -1;     ///< Pass: index into the planned scene's plan.passes
+    std::string text; ///< what to do
+    int pass = -1;    ///< Pass: index into the planned scene's plan.passes
 };
 
 /// How a pass's readings are shown: before the references are made the person works from a
 /// touch-off on the bar and its end; after, from the references. The planned scene holds one
 /// zero (the references'); shown reading = scene reading + the stage's offset.
 struct PassDisplay {
-    int stage = 1;                  ///< 0: from the first touch-off; 1: from the references
-    bool coneFinish = false;        ///< the cone's finishing pass
-    bool coneRough = false;         ///< a roughing pass of the cone (compound or saddle steps)
-    int setting = 0;                ///< compound passes: which saddle setting (0, 1, ...)
+    int stage = 1;           ///< 0: from the first touch-off; 1: from the references
+    bool coneFinish = false; ///< the cone's finishing pass
+    bool coneRough = false;  ///< a roughing pass of the cone (compound or saddle steps)
+    int setting = 0;         ///< compound passes: which saddle setting (0, 1, ...)
 };
 
 /// The reading over two equal rolls at two heights, to check the cone's angle and size.
 struct RollCheck {
     double rollDiameterMm = 0;
-    double height1Mm = 0, height2Mm = 0;    ///< roll-centre planes from the small end face, mm
-    double z1Mm = 0, z2Mm = 0;              ///< the same planes as part z
-    double reading1Mm = 0, reading2Mm = 0;  ///< expected micrometer readings over the rolls, finished
-    double roughExtraMm = 0;                ///< what both readings exceed these by before finishing
+    double height1Mm = 0, height2Mm = 0; ///< roll-centre planes from the small end face, mm
+    double z1Mm = 0, z2Mm = 0;           ///< the same planes as part z
+    double reading1Mm = 0,
+           reading2Mm = 0;   ///< expected micrometer readings over the rolls, finished
+    double roughExtraMm = 0; ///< what both readings exceed these by before finishing
 };
 
 /// The sine bar stack that sets the compound at its angle.
 struct SineBarCheck {
-    double barLengthMm = 0;         ///< centre distance of the sine bar's rolls
-    double angleRad = 0;            ///< the angle the bar is set to
-    double stackMm = 0;             ///< gauge stack height H = L sin(angle)
-    std::vector<double> blocksMm;   ///< blocks from the scene's set that make the stack (may be empty)
+    double barLengthMm = 0; ///< centre distance of the sine bar's rolls
+    double angleRad = 0;    ///< the angle the bar is set to
+    double stackMm = 0;     ///< gauge stack height H = L sin(angle)
+    std::vector<double>
+        blocksMm; ///< blocks from the scene's set that make the stack (may be empty)
 };
 
 /// The result of planning: either a planned scene or the reasons there is none.
 struct ConePlan {
-    bool planned = false;                  ///< false: no passes (see problems, suggestions)
-    Scene scene;                           ///< the input scene with set-up and passes planned
-    std::vector<std::string> problems;     ///< why nothing was planned
-    std::vector<std::string> suggestions;  ///< inserts/holders that could follow the cone
-    std::vector<std::string> cautions;     ///< things the person must know (travel, corners)
-    std::vector<PlanStep> steps;           ///< the order of operations
-    std::vector<PassDisplay> display;      ///< one per pass of scene.plan
-    double stage0CrossOffsetMm = 0;        ///< add to a stage-0 cross reading (mm of dial)
-    double stage0SaddleOffsetMm = 0;       ///< add to a stage-0 saddle reading
+    bool planned = false;                 ///< false: no passes (see problems, suggestions)
+    Scene scene;                          ///< the input scene with set-up and passes planned
+    std::vector<std::string> problems;    ///< why nothing was planned
+    std::vector<std::string> suggestions; ///< inserts/holders that could follow the cone
+    std::vector<std::string> cautions;    ///< things the person must know (travel, corners)
+    std::vector<PlanStep> steps;          ///< the order of operations
+    std::vector<PassDisplay> display;     ///< one per pass of scene.plan
+    double stage0CrossOffsetMm = 0;       ///< add to a stage-0 cross reading (mm of dial)
+    double stage0SaddleOffsetMm = 0;      ///< add to a stage-0 saddle reading
 
-    int featureIndex = -1;                 ///< the cone planned (index into part.features)
-    double halfAngleRad = 0;               ///< the cone's half angle θ
-    double compoundReadingRad = 0;         ///< what to set on the compound's scale
-    double noseOffsetRadialMm = 0;         ///< finishing path below the cone line, radius (signed)
-    double noseOffsetAxialMm = 0;          ///< the same shift expressed along the axis (R1 ΔZ)
-    double noseNormalErrorMm = 0;          ///< metal a tip-placed path would leave, normal to cone
-    int roughingPasses = 0;                ///< cone roughing passes (compound), per setting
-    int saddleStepPasses = 0;              ///< stepped saddle roughing passes
-    int compoundSettings = 1;              ///< saddle settings the compound's travel needs
-    double compoundRunMm = 0;              ///< compound travel one finishing pass needs in all
-    double referenceZMm = 0;               ///< plane of the reference diameter
-    double referenceDiameterMm = 0;        ///< reference diameter (finished cylinder or gauge)
-    double checkZMm = 0;                   ///< plane where the diameter is checked
-    double checkDiameterRoughMm = 0;       ///< its diameter before the finishing pass
-    double checkDiameterFinishedMm = 0;    ///< its diameter when finished
+    int featureIndex = -1;              ///< the cone planned (index into part.features)
+    double halfAngleRad = 0;            ///< the cone's half angle θ
+    double compoundReadingRad = 0;      ///< what to set on the compound's scale
+    double noseOffsetRadialMm = 0;      ///< finishing path below the cone line, radius (signed)
+    double noseOffsetAxialMm = 0;       ///< the same shift expressed along the axis (R1 ΔZ)
+    double noseNormalErrorMm = 0;       ///< metal a tip-placed path would leave, normal to cone
+    int roughingPasses = 0;             ///< cone roughing passes (compound), per setting
+    int saddleStepPasses = 0;           ///< stepped saddle roughing passes
+    int compoundSettings = 1;           ///< saddle settings the compound's travel needs
+    double compoundRunMm = 0;           ///< compound travel one finishing pass needs in all
+    double referenceZMm = 0;            ///< plane of the reference diameter
+    double referenceDiameterMm = 0;     ///< reference diameter (finished cylinder or gauge)
+    double checkZMm = 0;                ///< plane where the diameter is checked
+    double checkDiameterRoughMm = 0;    ///< its diameter before the finishing pass
+    double checkDiameterFinishedMm = 0; ///< its diameter when finished
     RollCheck rolls;
     SineBarCheck sineBar;
-    double rtMm = 0, raMm = 0;             ///< theoretical roughness of the finishing pass
+    double rtMm = 0, raMm = 0; ///< theoretical roughness of the finishing pass
 };
 
 /// Least angle (rad) kept between the path and the insert's trailing or leading edge: a
 /// clearance of a few degrees (references R8 give 2–7°).
-inline constexpr double kEdgeClearanceRad = 0.0872664626;  // 5°
+inline constexpr double kEdgeClearanceRad = 0.0872664626; // 5°
 
 /// Plans the drawing's main cone (Part::mainCone) on the scene's lathe with its tool, following
 /// scene.planning. The scene's own plan is ignored. Never throws for a cone the tool cannot
@@ -110,7 +112,8 @@ ConePlan planCone(const Scene& scene);
 /// Whether a tool can follow a straight path at angle pathAngleRad from +z (positive climbs
 /// outward toward the chuck) without its trailing or leading edge cutting behind the nose,
 /// keeping clearanceRad. Hand R leads toward +z, L toward −z (N is taken as R).
-bool toolFollowsSlope(const Tool& tool, double pathAngleRad, double clearanceRad = kEdgeClearanceRad);
+bool toolFollowsSlope(const Tool& tool, double pathAngleRad,
+                      double clearanceRad = kEdgeClearanceRad);
 
 /// Insert shapes and holder styles (ISO 1832 / ISO 5608 letters, references R8) that can follow
 /// a path at pathAngleRad, in words, most usual first; at most `count`.
