@@ -68,7 +68,7 @@ RunSolidsReport writeRunSolids(const Scene& scene, const CutResult& result,
     }
     if (options.writeSurfaceStl && result.surface.nz >= 2) {
         r.files.push_back(file("surface.stl"));
-        r.surfaceTriangles = writeSurfaceStl(result.surface, r.files.back());
+        r.surfaceTriangles = writeSurfaceStl(result.surface, r.files.back(), options.stl);
     }
     r.stockVolumeMm3 = s.stockVolumeMm3;
     r.nominalVolumeMm3 = s.nominalVolumeMm3;

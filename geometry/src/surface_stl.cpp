@@ -58,7 +58,8 @@ class StlSink {
 
 } // namespace
 
-std::size_t writeSurfaceStl(const HeightMap& s, const std::string& path) {
+std::size_t writeSurfaceStl(const HeightMap& s, const std::string& path,
+                            const SurfaceStlOptions& options) {
     static_assert(sizeof(float) == 4 && std::numeric_limits<float>::is_iec559);
     if (s.nz < 2 || s.nPhi < 3 ||
         s.radiusMm.size() != static_cast<std::size_t>(s.nz) * static_cast<std::size_t>(s.nPhi))
@@ -71,9 +72,28 @@ std::size_t writeSurfaceStl(const HeightMap& s, const std::string& path) {
     const char title[] = "swarf as-cut surface, mm, Z = spindle axis";
     std::memcpy(header.data(), title, sizeof title - 1);
     out.write(header.data(), header.size());
-    const std::uint32_t total = static_cast<std::uint32_t>(
-        2u * static_cast<std::uint32_t>(s.nz - 1) * static_cast<std::uint32_t>(s.nPhi) +
-        2u * static_cast<std::uint32_t>(s.nPhi));
+    // Rows kept: greedily, each at least `spacing` after the last kept one, and always the
+    // last row; the spacing is the smallest that meets the triangle limit. Where the kernel
+    // made rows dense (the finished surface) they are thinned first; sparse rows stay.
+    const std::size_t perRow = 2u * static_cast<std::size_t>(s.nPhi);
+    const auto keptRows = [&](double spacing) {
+        std::vector<int> rows{0};
+        for (int i = 1; i < s.nz - 1; ++i)
+            if (s.rowZ(i) - s.rowZ(rows.back()) >= spacing) rows.push_back(i);
+        rows.push_back(s.nz - 1);
+        return rows;
+    };
+    const auto trianglesOf = [&](const std::vector<int>& rows) { return rows.size() * perRow; };
+    std::vector<int> rows = keptRows(0.0);
+    if (options.maxTriangles > 0 && trianglesOf(rows) > options.maxTriangles) {
+        double lo = 0.0, hi = s.rowZ(s.nz - 1) - s.rowZ(0);
+        for (int it = 0; it < 60; ++it) {
+            const double mid = 0.5 * (lo + hi);
+            (trianglesOf(keptRows(mid)) > options.maxTriangles ? lo : hi) = mid;
+        }
+        rows = keptRows(hi);
+    }
+    const auto total = static_cast<std::uint32_t>((rows.size() - 1) * perRow + perRow);
     out.write(reinterpret_cast<const char*>(&total), 4);  // little-endian hosts only (x86, arm)
 
     std::vector<float> cosPhi(s.nPhi), sinPhi(s.nPhi);
@@ -84,19 +104,20 @@ std::size_t writeSurfaceStl(const HeightMap& s, const std::string& path) {
     }
     const auto vertex = [&](int i, int j) {
         const float r = s.at(i, j);
-        return Vec{r * cosPhi[j], r * sinPhi[j], static_cast<float>(s.z0Mm + i * s.dzMm)};
+        return Vec{r * cosPhi[j], r * sinPhi[j], static_cast<float>(s.rowZ(i))};
     };
     StlSink sink(out);
     // Outward normals: counter-clockwise seen from outside.
-    for (int i = 0; i + 1 < s.nz; ++i)
+    for (std::size_t r = 0; r + 1 < rows.size(); ++r)
         for (int j = 0; j < s.nPhi; ++j) {
+            const int i = rows[r], i1 = rows[r + 1];
             const int k = (j + 1) % s.nPhi;
-            const Vec a = vertex(i, j), b = vertex(i, k), c = vertex(i + 1, k), d = vertex(i + 1, j);
+            const Vec a = vertex(i, j), b = vertex(i, k), c = vertex(i1, k), d = vertex(i1, j);
             sink.triangle(a, b, c);
             sink.triangle(a, c, d);
         }
-    const Vec startCentre{0, 0, static_cast<float>(s.z0Mm)};
-    const Vec endCentre{0, 0, static_cast<float>(s.z0Mm + (s.nz - 1) * s.dzMm)};
+    const Vec startCentre{0, 0, static_cast<float>(s.rowZ(0))};
+    const Vec endCentre{0, 0, static_cast<float>(s.rowZ(s.nz - 1))};
     for (int j = 0; j < s.nPhi; ++j) {
         const int k = (j + 1) % s.nPhi;
         sink.triangle(startCentre, vertex(0, k), vertex(0, j));            // faces −Z

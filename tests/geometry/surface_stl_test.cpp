@@ -2,6 +2,7 @@
 
 #include <catch2/catch.hpp>
 
+#include <algorithm>
 #include <array>
 #include <cmath>
 #include <cstdint>
@@ -42,6 +43,7 @@ TEST_CASE("surface STL is a closed mesh of the height map", "[geometry][stl]") {
     s.z0Mm = -1;
     s.dzMm = 0.5;
     s.nz = 5;
+    s.zMm = {-1.0, -0.5, 0.0, 0.25, 1.0};  // rows need not be evenly spaced
     s.nPhi = 12;
     for (int i = 0; i < s.nz; ++i)
         for (int j = 0; j < s.nPhi; ++j) s.radiusMm.push_back(10.0f + 0.01f * static_cast<float>(j % 2));
@@ -80,7 +82,34 @@ TEST_CASE("surface STL is a closed mesh of the height map", "[geometry][stl]") {
     CHECK(side.n[0] * cx + side.n[1] * cy > 0);
     // The point (i, j) sits at radius R(i, j), angle 2πj/nPhi, z0 + i·dz.
     CHECK(std::abs(side.v[0][2] - (-1.0f)) < 1e-6f);
+    float zMax = -10;
+    for (const Tri& t : tris)
+        for (const auto& v : t.v) zMax = std::max(zMax, v[2]);
+    CHECK(zMax == 1.0f);
     CHECK(std::abs(std::hypot(side.v[0][0], side.v[0][1]) - 10.0f) < 1e-5f);
+}
+
+TEST_CASE("surface STL keeps under its triangle limit", "[geometry][stl]") {
+    HeightMap s;
+    s.dzMm = 0.001;
+    s.nz = 1001;
+    s.nPhi = 36;
+    s.radiusMm.assign(static_cast<std::size_t>(s.nz) * 36, 5.0f);
+    const std::string path = (fs::temp_directory_path() / "swarf-limited-surface.stl").string();
+    SurfaceStlOptions o;
+    o.maxTriangles = 3000;
+    const std::size_t n = writeSurfaceStl(s, path, o);
+    CHECK(n <= 3000);
+    CHECK(n >= 2000);  // the smallest spacing that fits, not much coarser
+    std::uint32_t declared = 0;
+    const auto tris = readStl(path, declared);
+    CHECK(tris.size() == n);
+    // The last row is kept: the mesh still ends at z = 1 mm.
+    float zMax = -1;
+    for (const Tri& t : tris)
+        for (const auto& v : t.v) zMax = std::max(zMax, v[2]);
+    CHECK(std::abs(zMax - 1.0f) < 1e-6f);
+    fs::remove(path);
 }
 
 TEST_CASE("surface STL refuses a grid it cannot mesh", "[geometry][stl]") {

@@ -3,6 +3,7 @@
 // writes from them.
 #include "swarf/geometry/revolve.h"
 #include "swarf/geometry/solid.h"
+#include "swarf/geometry/surface_stl.h"
 #include "swarf/sim/cut.h"
 #include "swarf/sim/scene.h"
 
@@ -35,6 +36,7 @@ struct RunSolidsOptions {
     bool writeLeftover = true;    ///< leftover.step (only if there is leftover)
     bool writeOvercut = true;     ///< overcut.step (only if there is an overcut)
     bool writeSurfaceStl = false; ///< surface.stl: the 3D surface with feed marks (large)
+    SurfaceStlOptions stl;        ///< how finely surface.stl is meshed
 };
 
 /// What writeRunSolids() made.
