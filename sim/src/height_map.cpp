@@ -161,7 +161,9 @@ HeightMap buildHeightMap(const Scene& scene, const ToolOutline& outline,
                     } else if (sStar <= phiF) {
                         x = xAt(phiF);
                     } else {
-                        const double sa = phiF + std::floor((sStar - phiF) / m.f) * m.f;
+                        // sStar > phiF here, so truncation is the floor.
+                        const double sa =
+                            phiF + static_cast<double>(static_cast<long long>((sStar - phiF) / m.f)) * m.f;
                         const double sb = sa + m.f;
                         x = std::min(xAt(sa), sb < m.len ? xAt(sb) : xEnd);
                     }

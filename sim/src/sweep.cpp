@@ -9,10 +9,6 @@
 namespace swarf {
 namespace {
 
-constexpr double kInf = std::numeric_limits<double>::infinity();
-
-// Frustum volume between radii a and b over length h.
-double frustum(double a, double b, double h) { return kPi * h / 3.0 * (a * a + a * b + b * b); }
 
 // Below this many samples one thread is quicker than two.
 constexpr std::size_t kThreadMinSamples = 4000;
@@ -97,7 +93,6 @@ ExactSweep sweepExact(const Scene& scene, const ToolOutline& outline,
         const double hi = std::floor((sweeps[k].zHiMm - z0) / dz) + 1;
         c.sampleLo = static_cast<std::size_t>(std::clamp(lo, 0.0, double(n)));
         c.sampleHi = static_cast<std::size_t>(std::clamp(hi, double(c.sampleLo), double(n)));
-        c.envelopeRadiusMm.assign(c.sampleHi - c.sampleLo, kInf);
     }
     // Which moves end each pass (pass index → last move index + 1).
     const std::size_t nPass = scene.plan.passes.size();
@@ -106,10 +101,8 @@ ExactSweep sweepExact(const Scene& scene, const ToolOutline& outline,
     // Each thread sweeps every move over its own sample range: disjoint writes, and the result
     // does not depend on the thread count except through the per-thread partial sums below.
     struct Partial {
-        std::vector<double> maxRemoved, zOfMax, thickness, minX, volume;
+        std::vector<double> maxRemoved, zOfMax, thickness, minX;
     };
-    // (Each move's removed volume leaves out the one interval that straddles the threads'
-    // boundary; the kernel takes volumes from whole profiles, this one is for findings only.)
     const int nThreads = n >= kThreadMinSamples ? 2 : 1;
     std::vector<Partial> parts(nThreads);
     auto work = [&](int t, std::size_t a, std::size_t b) {
@@ -118,7 +111,6 @@ ExactSweep sweepExact(const Scene& scene, const ToolOutline& outline,
         P.zOfMax.assign(count, 0.0);
         P.thickness.assign(count, 0.0);
         P.minX.assign(count, 1e300);
-        P.volume.assign(count, 0.0);
         std::vector<double>& r = out.asCut.radiusMm;
         std::size_t passDone = 0;  // passes whose snapshot is taken
         auto snapshotUpTo = [&](std::size_t passLimit) {
@@ -138,12 +130,10 @@ ExactSweep sweepExact(const Scene& scene, const ToolOutline& outline,
             const double len = d.norm();
             const bool vertical = std::abs(d.x()) <= 1e-12;
             const double cosA = len > 0 ? std::abs(d.x()) / len : 1.0;
-            double prevBefore = 0, prevAfter = 0;
             for (std::size_t i = lo; i < hi; ++i) {
                 const double z = z0 + static_cast<double>(i) * dz;
                 const double x = sweptLowestX(outline, s, z);
                 const double rc = cutRadiusMm(x, h);
-                c.envelopeRadiusMm[i - c.sampleLo] = rc;
                 const double before = r[i];
                 if (before > 0 && x < P.minX[k]) P.minX[k] = x;
                 const double after = std::min(before, rc);
@@ -157,9 +147,6 @@ ExactSweep sweepExact(const Scene& scene, const ToolOutline& outline,
                 } else if (removed > 1e-6) {
                     P.thickness[k] += dz;  // a plunge: the cut's width along z
                 }
-                if (i > lo) P.volume[k] += frustum(prevBefore, before, dz) - frustum(prevAfter, after, dz);
-                prevBefore = before;
-                prevAfter = after;
                 if (rc < before) {
                     r[i] = rc;
                     out.finalMove[i] = static_cast<int>(k);
@@ -188,7 +175,6 @@ ExactSweep sweepExact(const Scene& scene, const ToolOutline& outline,
             c.maxThicknessNormalMm = vertical ? c.maxThicknessNormalMm + P.thickness[k]
                                               : std::max(c.maxThicknessNormalMm, P.thickness[k]);
             c.minXOverStockMm = std::min(c.minXOverStockMm, P.minX[k]);
-            c.removedVolumeMm3 += P.volume[k];
         }
     }
     return out;

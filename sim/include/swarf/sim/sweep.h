@@ -35,6 +35,7 @@ double sweptLowestX(const ToolOutline& outline, const MoveSweep& sweep, double z
 /// Radius (mm) cut by a tool point at horizontal distance x with the tip h off centre.
 inline double cutRadiusMm(double xMm, double tipHeightMm) {
     const double xp = xMm > 0 ? xMm : 0.0;
+    if (tipHeightMm == 0) return xp;  // on centre: no square root (and the same number)
     return std::sqrt(xp * xp + tipHeightMm * tipHeightMm);
 }
 
@@ -52,9 +53,7 @@ struct MoveCut {
     double zOfMaxRemovedMm = 0;   ///< where
     double maxThicknessNormalMm = 0;  ///< largest depth of cut normal to the move direction
     double minXOverStockMm = 1e300;   ///< lowest tool x where there is stock (< 0: past centre)
-    double removedVolumeMm3 = 0;  ///< volume this move removed
     std::size_t sampleLo = 0, sampleHi = 0;  ///< samples the sweep covers [lo, hi)
-    std::vector<double> envelopeRadiusMm;    ///< the move's swept radius on [lo, hi)
 };
 
 /// The exact sweep of the first `count` moves (the last only `fraction` of the way).
