@@ -2,7 +2,10 @@
 // ensureDisplay start a virtual display).
 #include "swarf/viewer/snapshots.h"
 
+#include "swarf/io/scene_reader.h"
+#include "swarf/sim/kernel.h"
 #include "swarf/viewer/image.h"
+#include "swarf/viewer/report.h"
 #include "synthetic.h"
 
 #include <catch2/catch.hpp>
@@ -104,4 +107,25 @@ TEST_CASE("snapshots of a part within tolerance carry the near-zero colour", "[v
     // The section and the chart are drawn (more than a background and a few lines of text).
     CHECK(distinctColours(viewer::readPng(rep.sectionPng)) > 10);
     CHECK(distinctColours(viewer::readPng(rep.chartPng)) > 10);
+}
+
+TEST_CASE("demo scene: pictures and report", "[viewer][snapshots][demo]") {
+    const Scene s = io::readScene(std::string(SWARF_SCENES_DIR) + "/fixture-arbor.toml");
+    const CutResult r = simulate(s);
+    const std::string dir = freshDir("demo");
+    const auto rep = viewer::renderSnapshots(s, r, dir);
+    for (const std::string& f : rep.files()) {
+        INFO(f);
+        const auto img = viewer::readPng(f);
+        CHECK(img.widthPx == 1200);
+        CHECK(distinctColours(img) > 20);
+    }
+    const std::string html = viewer::writeReport(s, r, dir, &rep);
+    CHECK(fs::exists(html));
+    // The demo is made to come out within tolerance: its close-up is on the near-zero colour.
+    if (r.withinTolerance) {
+        const Census c = census(viewer::readPng(rep.conePng));
+        INFO("red " << c.red << " blue " << c.blue << " neutral " << c.neutralPart);
+        CHECK(c.neutralPart > 0.5);
+    }
 }

@@ -2,6 +2,8 @@
 // was handed to VTK (no pixels).
 #include "swarf/viewer/viewer.h"
 
+#include "swarf/io/scene_reader.h"
+#include "swarf/sim/kernel.h"
 #include "swarf/viewer/display.h"
 #include "swarf/viewer/moment.h"
 #include "synthetic.h"
@@ -9,6 +11,7 @@
 #include <catch2/catch.hpp>
 
 #include <cmath>
+#include <filesystem>
 
 using namespace swarf;
 
@@ -48,4 +51,76 @@ TEST_CASE("stepping to pass k draws the cut after pass k", "[viewer][window]") {
     }
     view.setPosition(0);
     CHECK(drawnVersus(view.drawnSection(), r.stock) < 1e-5);
+}
+
+TEST_CASE("demo scene: each pass's drawn part matches the kernel's profile after it", "[viewer][window][demo]") {
+    viewer::ensureDisplay();
+    const Scene s = io::readScene(std::string(SWARF_SCENES_DIR) + "/fixture-arbor.toml");
+    const CutResult r = simulate(s);
+    REQUIRE(r.afterPass.size() == s.plan.passes.size());
+    viewer::ViewerOptions o;
+    o.offScreen = true;
+    o.widthPx = 400;
+    o.heightPx = 300;
+    viewer::ViewerSession view(s, r, o);
+    const int n = view.passCount();
+    REQUIRE(n >= 2);
+    for (int k = 0; k + 1 < n; ++k) {  // the last position draws the 3D surface instead
+        view.setPosition(k + 1.0);
+        INFO("after pass " << k + 1);
+        CHECK(view.moment().pass == k);
+        CHECK(drawnVersus(view.drawnSection(), r.afterPass[static_cast<std::size_t>(k)]) < 1e-5);
+    }
+    // Half way through a pass, the part lies between the profiles before and after that pass:
+    // cutting only removes metal.
+    for (int k = 1; k < n; ++k) {
+        const auto m = viewer::describeMoment(s, r, k + 0.5);
+        const Profile& before = r.afterPass[static_cast<std::size_t>(k - 1)];
+        const Profile& after = r.afterPass[static_cast<std::size_t>(k)];
+        REQUIRE(m.profile.radiusMm.size() == before.radiusMm.size());
+        double above = 0, below = 0;
+        for (std::size_t i = 0; i < m.profile.radiusMm.size(); ++i) {
+            above = std::max(above, m.profile.radiusMm[i] - before.radiusMm[i]);
+            below = std::max(below, after.radiusMm[i] - m.profile.radiusMm[i]);
+        }
+        INFO("half way through pass " << k + 1);
+        CHECK(above < 1e-9);
+        CHECK(below < 1e-9);
+    }
+}
+
+TEST_CASE("keys step through the plan and toggle the help", "[viewer][window]") {
+    viewer::ensureDisplay();
+    const Scene s = test::syntheticScene(3);
+    const CutResult r = test::syntheticResult(s, [](int k) { return 1.0 - 0.4 * k; });
+    viewer::ViewerOptions o;
+    o.offScreen = true;
+    o.widthPx = 400;
+    o.heightPx = 300;
+    o.startPosition = 0;
+    viewer::ViewerSession view(s, r, o);
+    CHECK(view.moment().position == 0);
+    view.pressKey("Right");
+    CHECK(view.moment().position == 1);
+    view.pressKey("Right");
+    CHECK(view.moment().position == 2);
+    view.pressKey("Left");
+    CHECK(view.moment().position == 1);
+    view.pressKey("Up");
+    CHECK(view.moment().position == Approx(1.05));
+    view.pressKey("Right");  // from inside pass 2 to its end
+    CHECK(view.moment().position == 2);
+    view.pressKey("End");
+    CHECK(view.moment().finished);
+    view.pressKey("Home");
+    CHECK(view.moment().pass == -1);
+    view.pressKey("not-a-key");
+    CHECK(view.moment().pass == -1);
+    // The help overlay, saved for a look (and checked to be written).
+    view.pressKey("Right");
+    view.pressKey("h");
+    const auto png = std::filesystem::temp_directory_path() / "swarf-viewer-test-help.png";
+    std::filesystem::remove(png);
+    view.saveSnapshot(png.string());
+    CHECK(std::filesystem::exists(png));
 }

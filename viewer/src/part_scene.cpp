@@ -45,7 +45,7 @@ constexpr double kDeg = kPi / 180.0;
 // operator's side toward the top) is left out so the section shows.
 constexpr double kCutFrom = 45 * kDeg, kCutTo = 135 * kDeg;
 constexpr std::size_t kCoarseRows = 1500;
-constexpr std::size_t kFineRows = 12000;
+constexpr std::size_t kFineRows = 6000;
 
 vtkSmartPointer<vtkActor> makeActor(vtkSmartPointer<vtkPolyDataMapper>& mapper) {
     mapper = vtkSmartPointer<vtkPolyDataMapper>::New();
@@ -252,7 +252,7 @@ void PartScene::Impl::buildSection() {
     secAsCutMapper->SetLookupTable(lut);
     secAsCutMapper->UseLookupTableScalarRangeOn();
     secAsCutMapper->SetScalarModeToUsePointData();
-    secAsCutActor->GetProperty()->SetLineWidth(3);
+    secAsCutActor->GetProperty()->SetLineWidth(4);
     secAsCutActor->GetProperty()->LightingOff();
     section->AddActor(secRefActor);
     section->AddActor(secAsCutActor);
@@ -378,6 +378,7 @@ void PartScene::Impl::updateSection() {
     auto cutDev = vtkSmartPointer<vtkFloatArray>::New();
     cutDev->SetName("deviation");
     const double clampMm = 1.5 * scale.limitMm;
+    bool offScale = false;
     const std::size_t i0 = std::min(coneI0, n ? n - 1 : 0), i1 = std::min(coneI1, n ? n - 1 : 0);
     const auto rows = pickRows(i0, std::max(i0, i1), 4000);
     const std::size_t nn = result.nominal.radiusMm.size();
@@ -394,7 +395,7 @@ void PartScene::Impl::updateSection() {
         if (ids.size() > 1) {
             refLines->InsertNextCell(static_cast<vtkIdType>(ids.size()), ids.data());
             if (offset == 0)
-                refColours->InsertNextTuple3(255, 255, 255);  // the drawing
+                refColours->InsertNextTuple3(90, 220, 120);  // the drawing
             else
                 refColours->InsertNextTuple3(235, 200, 60);  // the tolerance band
         }
@@ -412,6 +413,7 @@ void PartScene::Impl::updateSection() {
             continue;
         }
         const double shown = std::clamp(d, -clampMm, clampMm);
+        offScale = offScale || shown != d;
         ids.push_back(cutPoints->InsertNextPoint(p.zAt(i), rn + magnification * shown, 0.01));
         cutDev->InsertNextValue(static_cast<float>(scale.toDisplay(d)));
     }
@@ -427,9 +429,10 @@ void PartScene::Impl::updateSection() {
     cut->GetPointData()->SetScalars(cutDev);
     secAsCutMapper->SetInputData(cut);
     secTitle->SetInput(
-        fmt::format("Section, deviation x{:g}   white: drawing   yellow: tolerance +/-{}   "
-                    "coloured: as cut",
-                    magnification, formatSmallLength(scale.bandMm, scale.units))
+        fmt::format("Section, deviation x{:g}   green: drawing   yellow: tolerance +/-{}   "
+                    "coloured: as cut{}",
+                    magnification, formatSmallLength(scale.bandMm, scale.units),
+                    offScale ? " (off the scale where flat at the edge)" : "")
             .c_str());
 }
 
@@ -445,19 +448,24 @@ void PartScene::Impl::updateChart() {
         for (std::size_t i : pickRows(i0, std::max(i0, i1), 3000))
             if (i < moment.deviationMm.size() && !std::isnan(moment.deviationMm[i])) keep.push_back(i);
     }
+    // The scale is the result's unless this moment goes beyond it (early passes): then it widens
+    // to show everything, and the tolerance lines close up around zero.
+    double worst = 0;
+    for (std::size_t i : keep) worst = std::max(worst, std::fabs(scale.toDisplay(moment.deviationMm[i])));
+    const double range = std::max(l, 1.1 * worst);
     table->SetNumberOfRows(static_cast<vtkIdType>(keep.size()));
     for (std::size_t k = 0; k < keep.size(); ++k) {
         const auto row = static_cast<vtkIdType>(k);
         const std::size_t i = keep[k];
         table->SetValue(row, 0, vtkVariant(static_cast<float>(p.zAt(i) * zScale)));
-        const double d = std::clamp(scale.toDisplay(moment.deviationMm[i]), -1.02 * l, 1.02 * l);
+        const double d = scale.toDisplay(moment.deviationMm[i]);
         table->SetValue(row, 1, vtkVariant(static_cast<float>(d)));
         table->SetValue(row, 2, vtkVariant(static_cast<float>(band)));
         table->SetValue(row, 3, vtkVariant(static_cast<float>(-band)));
     }
     table->Modified();
     chartItem->RecalculateBounds();
-    chartItem->GetAxis(vtkAxis::LEFT)->SetRange(-l, l);
+    chartItem->GetAxis(vtkAxis::LEFT)->SetRange(-range, range);
 }
 
 std::string PartScene::Impl::panelText() const {
@@ -614,7 +622,7 @@ void PartScene::view(View v) {
     }
     cam->ParallelProjectionOff();
     d.main->ResetCamera(bounds);
-    if (v == View::Cone) cam->Zoom(1.25);
+    cam->Zoom(v == View::Cone ? 1.25 : 1.3);
     d.main->ResetCameraClippingRange();
 }
 

@@ -22,6 +22,7 @@ namespace {
 void shoot(vtkRenderer* renderer, int w, int h, const std::string& path,
            const std::function<void()>& beforeRender = {}) {
     vtkNew<vtkRenderWindow> window;
+    window->SetDisplayId(sharedDisplayConnection());
     window->SetOffScreenRendering(1);
     window->SetSize(w, h);
     window->SetMultiSamples(4);

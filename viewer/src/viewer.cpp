@@ -23,6 +23,7 @@
 #include <fmt/format.h>
 
 #include <algorithm>
+#include <cctype>
 #include <cmath>
 #include <filesystem>
 #include <functional>
@@ -134,7 +135,6 @@ void ViewerSession::Impl::onKey(const std::string& key, bool shift) {
     } else return;
     if (layersChanged) part->setLayers(layers);
     part->setStatus(status);
-    window->Render();
 }
 
 ViewerSession::ViewerSession(const Scene& scene, const CutResult& result, const ViewerOptions& options)
@@ -144,6 +144,7 @@ ViewerSession::ViewerSession(const Scene& scene, const CutResult& result, const 
     d.part = std::make_unique<detail::PartScene>(scene, result, options.magnification);
     d.part->setTextScale(static_cast<int>(std::max(options.heightPx, 240) * (1 - kSplitY)));
     d.window = vtkSmartPointer<vtkRenderWindow>::New();
+    d.window->SetDisplayId(sharedDisplayConnection());
     d.window->SetSize(std::max(options.widthPx, 320), std::max(options.heightPx, 240));
     d.window->SetWindowName(("swarf view: " + (scene.name.empty() ? scene.file : scene.name)).c_str());
     if (options.offScreen) d.window->SetOffScreenRendering(1);
@@ -157,8 +158,10 @@ ViewerSession::ViewerSession(const Scene& scene, const CutResult& result, const 
     d.interactor = vtkSmartPointer<vtkRenderWindowInteractor>::New();
     d.interactor->SetRenderWindow(d.window);
     vtkNew<SwarfStyle> style;
-    style->onKey = [&d](const std::string& key, bool shift) { d.onKey(key, shift); };
-    style->SetDefaultRenderer(d.part->main());
+    style->onKey = [&d](const std::string& key, bool shift) {
+        d.onKey(key, shift);
+        d.window->Render();
+    };
     d.interactor->SetInteractorStyle(style);
 
     // The pass slider along the bottom of the 3D view.
@@ -166,12 +169,17 @@ ViewerSession::ViewerSession(const Scene& scene, const CutResult& result, const 
     d.sliderRep->SetMinimumValue(0);
     d.sliderRep->SetMaximumValue(std::max(1, d.part->passCount()));
     d.sliderRep->SetValue(d.part->passCount());
-    d.sliderRep->SetTitleText("pass (drag; arrows step)");
+    d.sliderRep->SetTitleText("plan: drag, or arrow keys (h: help)");
+    d.sliderRep->SetTitleHeight(0.022);
+    d.sliderRep->SetLabelHeight(0.022);
     d.sliderRep->SetLabelFormat("%.2f");
+    // VTK 9.1 draws the slider's 2D parts offset by its renderer's viewport origin, so the ends
+    // are given in normalized display units measured from that origin.
+    const double sliderY = 0.09 * (1 - kSplitY);
     d.sliderRep->GetPoint1Coordinate()->SetCoordinateSystemToNormalizedDisplay();
-    d.sliderRep->GetPoint1Coordinate()->SetValue(0.06, kSplitY + 0.06);
+    d.sliderRep->GetPoint1Coordinate()->SetValue(0.05, sliderY);
     d.sliderRep->GetPoint2Coordinate()->SetCoordinateSystemToNormalizedDisplay();
-    d.sliderRep->GetPoint2Coordinate()->SetValue(0.80, kSplitY + 0.06);
+    d.sliderRep->GetPoint2Coordinate()->SetValue(0.82, sliderY);
     d.sliderRep->SetSliderLength(0.015);
     d.sliderRep->SetSliderWidth(0.025);
     d.sliderRep->SetTubeWidth(0.006);
@@ -201,6 +209,8 @@ ViewerSession::ViewerSession(const Scene& scene, const CutResult& result, const 
 
     if (options.startPosition >= 0) d.go(options.startPosition);
     d.window->Render();
+    d.sliderRep->Modified();
+    d.window->Render();
     d.part->resetSection();
 }
 
@@ -211,6 +221,11 @@ ViewerSession::~ViewerSession() {
 void ViewerSession::setPosition(double position) { impl_->go(position); }
 const MomentView& ViewerSession::moment() const { return impl_->part->moment(); }
 int ViewerSession::passCount() const { return impl_->part->passCount(); }
+void ViewerSession::pressKey(const std::string& key) {
+    const bool shift = key.size() == 1 && std::isupper(static_cast<unsigned char>(key[0]));
+    impl_->onKey(key, shift);
+}
+
 void ViewerSession::render() { impl_->window->Render(); }
 
 void ViewerSession::orbit(double degrees) {

@@ -10,6 +10,12 @@ namespace swarf::viewer {
 /// Throws swarf::RenderError if Xvfb is not installed or does not start.
 void ensureDisplay();
 
+/// The X connection (an Xlib Display*, as void*) that every window of this process draws
+/// through: opened once, after ensureDisplay(), retrying for a few seconds if the server is
+/// slow to answer, and kept open until exit (one connection instead of one per picture).
+/// Throws swarf::RenderError if the display cannot be opened.
+void* sharedDisplayConnection();
+
 /// True if ensureDisplay() started a virtual display in this process.
 bool startedVirtualDisplay();
 

@@ -39,6 +39,9 @@ class ViewerSession {
     const MomentView& moment() const;
     /// Number of passes (the slider's upper end).
     int passCount() const;
+    /// Acts as if `key` had been pressed in the window (X key names: "Right", "Home", "h", "M",
+    /// ...; see viewer/KEYS.md), without drawing. Unknown keys do nothing. For tests and demos.
+    void pressKey(const std::string& key);
     /// Draws one frame.
     void render();
     /// Turns the 3D camera about the vertical by `degrees` (benchmarks, demos).
