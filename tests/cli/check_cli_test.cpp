@@ -83,3 +83,22 @@ TEST_CASE("swarf check on a missing file is bad input too", "[cli][check]") {
     CHECK(r.exitCode == 2);
     CHECK(r.err.find("/nonexistent/scene.toml") != std::string::npos);
 }
+
+TEST_CASE("swarf check notes a long stick-out but still accepts the scene", "[cli][check]") {
+    std::string text = slurp(std::string(SWARF_SCENES_DIR) + "/fixture-arbor.toml");
+    const std::string from = "stick_out = 85.0";
+    const auto at = text.find(from);
+    REQUIRE(at != std::string::npos);
+    text.replace(at, from.size(), "stick_out = 140.0");
+    const std::string file = "check_cli_test_long_stick_out.toml";
+    {
+        std::ofstream out(file);
+        out << text;
+    }
+    const Run r = runSwarf("check " + file);
+    std::remove(file.c_str());
+    INFO(r.out << r.err);
+    CHECK(r.exitCode == 0);
+    // common practice: about three diameters of stick-out for work in a chuck alone
+    CHECK(r.out.find("note: stick-out is 4.7 bar diameters") != std::string::npos);
+}
