@@ -70,8 +70,16 @@ bool PlanBuilder::endIsFree(bool highEnd) const {
     if (!nb)
         return true; // the drawing says nothing there
     const bool largeEnd = (g_ > 0) == highEnd;
+    const double rEnd = coneR(highEnd ? zHi_ : zLo_);
     // A convex corner (the neighbour no larger than the cone's large end) lets the tool run on.
-    return largeEnd && *nb <= coneR(highEnd ? zHi_ : zLo_) + 1e-3;
+    if (largeEnd)
+        return *nb <= rEnd + 1e-3;
+    // Past the small end the cone line runs on downward: free if it stays clear of the
+    // neighbour over the whole run-out (nose, margin and a millimetre).
+    const double runMm = 2.0 * r_ + r_ + 0.5 + sc_.setup.compound.backlashMm + 1.0;
+    const auto nbFar = sc_.part.nominalRadiusAt(highEnd ? zHi_ + runMm : zLo_ - runMm);
+    const double lowest = rEnd - std::tan(th_) * runMm - r_;
+    return *nb <= lowest && (!nbFar || *nbFar <= lowest);
 }
 
 std::optional<std::pair<double, double>> PlanBuilder::tipRange(double normalLeftMm) const {

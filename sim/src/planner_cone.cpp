@@ -215,10 +215,24 @@ ConePlan planCone(const Scene& scene) {
         zRef = std::clamp(z0 + std::round((zRef - z0) / div) * div, f.zStartMm, f.zEndMm);
         out.referenceZMm = zRef;
         out.referenceDiameterMm = cone.diameterAt(zRef);
-    } else {
+        // The metal just beyond the reference plane once the cylinders are turned: a shoulder
+        // needs it to stand proud of the reference diameter.
+        double beyond = stockD / 2.0;
+        for (const Feature* c : cylinders)
+            if (c->zEndMm > zRef + 1e-9)
+                beyond = std::min(beyond, c->diameterMm / 2.0);
+        if (beyond < out.referenceDiameterMm / 2.0 + 0.05) {
+            out.cautions.push_back("no shoulder can be turned at the gauge plane (the metal beyond "
+                                   "it is no larger than the gauge diameter), so the dials are "
+                                   "zeroed on a finished diameter and the datum face instead");
+            placing = PlanningOptions::Placing::ZeroOnDiameter;
+        }
+    }
+    if (placing != PlanningOptions::Placing::ReferenceShoulder) {
         out.referenceZMm = 0.0;
         out.referenceDiameterMm = longest ? longest->diameterMm : stockD;
     }
+    out.scene.planning.placing = placing; // as planned (a fallback is said in the cautions)
     setup.zeroDiameterMm = out.referenceDiameterMm;
     setup.zeroZMm = out.referenceZMm;
     b.setZero(setup.zeroDiameterMm, setup.zeroZMm);
@@ -279,11 +293,13 @@ ConePlan planCone(const Scene& scene) {
     // 3. Roughing.
     const double allowance = scene.planning.finishAllowanceMm;
     if (scene.planning.roughing == PlanningOptions::Roughing::SaddleSteps) {
-        if (g > 0)
+        if (g > 0) {
             b.saddleSteps();
-        else
+        } else {
+            out.scene.planning.roughing = PlanningOptions::Roughing::Compound;
             out.cautions.push_back("stepped saddle roughing needs the cone's small end toward "
                                    "the tailstock; roughed with the compound instead");
+        }
     }
     b.planSettings();
     if (out.compoundSettings > 1)
@@ -315,8 +331,9 @@ ConePlan planCone(const Scene& scene) {
              " when finished).");
     step(out, PlanStep::Kind::Measure,
          "Check the angle over two Ø" + L(out.rolls.rollDiameterMm) +
-             " rolls at roll-centre heights " + L(out.rolls.height1Mm) + " and " +
-             L(out.rolls.height2Mm) + " above the small end face: the readings must differ by " +
+             " rolls with their centres at " + L(out.rolls.z1Mm) + " and " + L(out.rolls.z2Mm) +
+             " from the datum face (" + L(out.rolls.height1Mm) + " and " + L(out.rolls.height2Mm) +
+             " from the cone's small end): the readings must differ by " +
              L(out.rolls.reading2Mm - out.rolls.reading1Mm) + " (now " +
              L(out.rolls.reading1Mm + out.rolls.roughExtraMm) + " and " +
              L(out.rolls.reading2Mm + out.rolls.roughExtraMm) + "; finished " +

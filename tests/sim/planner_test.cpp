@@ -165,7 +165,29 @@ std::vector<Job> cases() {
         j.roughing = PlanningOptions::Roughing::SaddleSteps;
         v.push_back(j);
     }
+    {
+        Job j; // 1:5 cone between a Ø12 pilot and a Ø30 body: the tool runs out over the pilot
+        j.name = "1:5 between pilot and body";
+        j.stockD = 32, j.stickOut = 80, j.from = 10, j.to = 40, j.gaugeZ = 40, j.gaugeD = 30;
+        j.halfAngleDeg = radToDeg(std::atan(0.1)), j.tol = 0.03, j.bodyD = 30;
+        v.push_back(j);
+    }
     return v;
+}
+
+// The Ø12 pilot in front of the 1:5 cone (the last case).
+Scene withPilot(const Job& j) {
+    Scene s = makeScene(j);
+    Feature p;
+    p.kind = FeatureKind::Cylinder;
+    p.name = "pilot";
+    p.zStartMm = 0;
+    p.zEndMm = 10;
+    p.diameterMm = 12;
+    p.toleranceMm = 0.1;
+    p.toleranceFromClass = false;
+    s.part.features.insert(s.part.features.begin(), p);
+    return s;
 }
 
 } // namespace
@@ -185,7 +207,7 @@ TEST_CASE("every planned cone proves itself in the kernel", "[planner][kernel]")
     int planned = 0;
     for (const Job& j : cases()) {
         INFO(j.name);
-        const Scene scene = makeScene(j);
+        const Scene scene = j.from > 0 ? withPilot(j) : makeScene(j);
         REQUIRE_NOTHROW(scene.validate());
         const ConePlan plan = planCone(scene);
         for (const std::string& p : plan.problems)

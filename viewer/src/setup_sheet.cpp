@@ -244,9 +244,10 @@ Sheet buildSheet(const ConePlan& plan, const CutResult* proof) {
         "Diameter at " + L(plan.checkZMm) + " from the datum face: Ø" +
             L(plan.checkDiameterRoughMm) + " before finishing, Ø" +
             L(plan.checkDiameterFinishedMm) + " finished.",
-        "Over two Ø" + L(plan.rolls.rollDiameterMm) + " rolls, roll centres " +
+        "Over two Ø" + L(plan.rolls.rollDiameterMm) + " rolls, roll centres at " +
+            L(plan.rolls.z1Mm) + " and " + L(plan.rolls.z2Mm) + " from the datum face (" +
             L(plan.rolls.height1Mm) + " and " + L(plan.rolls.height2Mm) +
-            " above the small end face: before finishing " +
+            " from the cone's small end): before finishing " +
             L(plan.rolls.reading1Mm + plan.rolls.roughExtraMm) + " and " +
             L(plan.rolls.reading2Mm + plan.rolls.roughExtraMm) + "; finished " +
             L(plan.rolls.reading1Mm) + " and " + L(plan.rolls.reading2Mm) + ". The difference, " +
