@@ -57,6 +57,14 @@ std::vector<double> normalDeviation(const Part& part, const Profile& nominal, co
     return d;
 }
 
+double normalDeviationAt(const Part& part, double zMm, double radiusMm) {
+    const int fi = featureAt(part, zMm);
+    if (fi < 0) return kNaN;
+    const Feature& f = part.features[static_cast<std::size_t>(fi)];
+    const double rn = f.radiusAt(std::clamp(zMm, f.zStartMm, f.zEndMm));
+    return (radiusMm - rn) * std::cos(f.surfaceHalfAngleRad());
+}
+
 double normalBandMm(const Feature& f) {
     if (f.kind == FeatureKind::Face) return f.toleranceMm;
     return 0.5 * f.toleranceMm * std::cos(f.surfaceHalfAngleRad());

@@ -71,7 +71,13 @@ void printSummary(const Scene& s, const CutResult& r) {
                signedSmall(r.gaugeAsCutDiameterMm - r.gaugeNominalDiameterMm, u));
     fmt::print("largest metal left on: {}   largest overcut: {}   (normal to the surface)\n",
                formatSmallLength(r.maxLeftOnMm, u), formatSmallLength(r.maxOvercutMm, u));
-    fmt::print("feed marks of the finishing pass: Rt {:.2f} µm, Ra {:.2f} µm\n", r.rtUm, r.raUm);
+    if (u == Units::Inch) {
+        // The inch trade gives roughness in microinches (1 µm = 39.37 µin).
+        fmt::print("feed marks of the finishing pass: Rt {:.0f} µin, Ra {:.0f} µin ({:.2f} µm, {:.2f} µm)\n",
+                   r.rtUm * 1000.0 / 25.4, r.raUm * 1000.0 / 25.4, r.rtUm, r.raUm);
+    } else {
+        fmt::print("feed marks of the finishing pass: Rt {:.2f} µm, Ra {:.2f} µm\n", r.rtUm, r.raUm);
+    }
     for (const FeatureReport& f : r.features) {
         const Feature& ft = s.part.features[static_cast<std::size_t>(f.feature)];
         std::string extra;
