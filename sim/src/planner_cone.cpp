@@ -109,9 +109,29 @@ void fillChecks(ConePlan& out, const Scene& sc, const Feature& f) {
         set.units = u;
     }
     const GaugeStack gs = combineGaugeBlocks(out.sineBar.stackMm, set);
-    if (gs.found)
+    if (gs.found) {
         for (double b : gs.blocks)
             out.sineBar.blocksMm.push_back(toMm(b, set.units));
+    } else {
+        // Too short a stack to build (small angles): raise both rolls on stacks that differ by it.
+        const double step = u == Units::Inch ? 0.5 * kMmPerInch : 10.0;
+        for (int i = 1; i <= 6 && out.sineBar.blocksMm.empty(); ++i) {
+            const GaugeStack lo = combineGaugeBlocks(i * step, set);
+            const GaugeStack hi = combineGaugeBlocks(i * step + out.sineBar.stackMm, set);
+            if (!lo.found || !hi.found)
+                continue;
+            bool shared = false; // each block of the set exists once
+            for (double a : lo.blocks)
+                for (double c : hi.blocks)
+                    shared = shared || std::fabs(a - c) < 1e-9;
+            if (shared)
+                continue;
+            for (double b : hi.blocks)
+                out.sineBar.blocksMm.push_back(toMm(b, set.units));
+            for (double b : lo.blocks)
+                out.sineBar.baseBlocksMm.push_back(toMm(b, set.units));
+        }
+    }
 
     // Theoretical roughness of the finishing pass (references R2).
     const double feed = sc.planning.finishFeedMmPerRev, r = sc.tool.noseRadiusMm;

@@ -318,3 +318,24 @@ TEST_CASE("a cone longer than the compound's travel is split into saddle setting
             CHECK(p.toMm <= 70.0 + 1e-9);
         }
 }
+
+TEST_CASE("the sine bar stack is built from the block set, on a base when too short", "[planner]") {
+    // Morse 3 in inch: H = 5 in · sin θ ≈ 0.1254 in, shorter than any two blocks of a common
+    // 81-piece set can make (Source: references R4 for H = L sin θ; the set: common practice).
+    const ConePlan plan = planCone(makeScene(cases()[3]));
+    REQUIRE(plan.planned);
+    CHECK(plan.sineBar.stackMm == Approx(5 * 25.4 * std::sin(plan.halfAngleRad)));
+    REQUIRE_FALSE(plan.sineBar.blocksMm.empty());
+    double hi = 0, lo = 0;
+    for (double b : plan.sineBar.blocksMm)
+        hi += b;
+    for (double b : plan.sineBar.baseBlocksMm)
+        lo += b;
+    // The difference of the two stacks is the wanted height to the set's 0.0001 in step.
+    CHECK(std::fabs((hi - lo) - plan.sineBar.stackMm) <= 0.00005 * 25.4 + 1e-9);
+    // A 30° centre on a 100 mm bar: one 50 mm block (Source: references R4, sin 30° = 0.5).
+    const ConePlan centre = planCone(makeScene(cases()[0]));
+    REQUIRE(centre.sineBar.blocksMm.size() == 1);
+    CHECK(centre.sineBar.blocksMm[0] == Approx(50.0));
+    CHECK(centre.sineBar.baseBlocksMm.empty());
+}

@@ -163,11 +163,21 @@ Sheet buildSheet(const ConePlan& plan, const CutResult* proof) {
         std::string s = "Sine bar " + L(plan.sineBar.barLengthMm) + " at " +
                         formatDms(plan.sineBar.angleRad, 1) + ": gauge stack " +
                         L(plan.sineBar.stackMm, u == Units::Inch ? 5 : 4);
-        if (!plan.sineBar.blocksMm.empty()) {
-            s += " = ";
-            for (std::size_t i = 0; i < plan.sineBar.blocksMm.size(); ++i)
-                s += (i ? " + " : "") + L(plan.sineBar.blocksMm[i], u == Units::Inch ? 4 : 3);
-        }
+        auto blocks = [&](const std::vector<double>& b) {
+            std::string t;
+            for (std::size_t i = 0; i < b.size(); ++i)
+                t += (i ? " + " : "") + L(b[i], u == Units::Inch ? 4 : 3);
+            return t;
+        };
+        if (!plan.sineBar.blocksMm.empty() && plan.sineBar.baseBlocksMm.empty())
+            s += " = " + blocks(plan.sineBar.blocksMm);
+        else if (!plan.sineBar.blocksMm.empty())
+            s += ", too short to build alone: stand the raised roll on " +
+                 blocks(plan.sineBar.blocksMm) + " and the other roll on " +
+                 blocks(plan.sineBar.baseBlocksMm);
+        else
+            s += " (the gauge block set cannot build it: use the nearest stack and note the "
+                 "angle it gives)";
         s +=
             ". Lay the bar at that angle to a reference trued parallel to the spindle axis, run an "
             "indicator on the compound along it, and swivel the compound until the reading stays "

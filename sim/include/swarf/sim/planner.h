@@ -63,8 +63,11 @@ struct SineBarCheck {
     double barLengthMm = 0; ///< centre distance of the sine bar's rolls
     double angleRad = 0;    ///< the angle the bar is set to
     double stackMm = 0;     ///< gauge stack height H = L sin(angle)
-    std::vector<double>
-        blocksMm; ///< blocks from the scene's set that make the stack (may be empty)
+    /// Blocks from the scene's set under the raised roll (empty if the set cannot make it).
+    std::vector<double> blocksMm;
+    /// Blocks under the other roll when the stack alone is too short to build from the set (the
+    /// raised roll then stands on blocksMm, stackMm higher); empty when it sits on the plate.
+    std::vector<double> baseBlocksMm;
 };
 
 /// The result of planning: either a planned scene or the reasons there is none.
