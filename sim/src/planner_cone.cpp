@@ -217,6 +217,11 @@ ConePlan planCone(const Scene& scene) {
         }
         cylinders.push_back(&c);
     }
+    for (const Feature& o : scene.part.features)
+        if (&o != &f && (o.kind == FeatureKind::Cone || o.kind == FeatureKind::Chamfer))
+            out.cautions.push_back("'" + o.name +
+                                   "' is not planned here (one cone per plan): plan "
+                                   "it on its own, or the simulation shows it as left on");
     std::sort(cylinders.begin(), cylinders.end(),
               [](const Feature* x, const Feature* y) { return x->diameterMm > y->diameterMm; });
 
