@@ -66,9 +66,9 @@ std::string cell(const Slide& slide, double readingMm, Units u) {
     const DialSetting d = dialSetting(slide, readingMm);
     const double frac = d.division - std::floor(d.division);
     char buf[96];
-    std::snprintf(buf, sizeof buf, "%.*f [%ld t + %.*f]", u == Units::Inch ? 4 : 3,
-                  fromMm(readingMm, u), d.turns, frac < 1e-6 || frac > 1 - 1e-6 ? 0 : 1,
-                  d.division);
+    std::snprintf(buf, sizeof buf, "%.*f\u00a0[%ld\u00a0t\u00a0+\u00a0%.*f]",
+                  u == Units::Inch ? 4 : 3, fromMm(readingMm, u), d.turns,
+                  frac < 1e-6 || frac > 1 - 1e-6 ? 0 : 1, d.division);
     return buf;
 }
 
@@ -232,8 +232,23 @@ Sheet buildSheet(const ConePlan& plan, const CutResult* proof) {
                    mS = p.kind == PassKind::Saddle;
         const Slide& moving = mC ? su.cross : mP ? su.compound : su.saddle;
         const double off = mC ? cOff : mS ? sOff : 0.0;
-        numbered.push_back(std::to_string(stepNo) + ". Pass " + std::to_string(st.pass + 1) + ": " +
-                           p.note + " (readings in the table).");
+        // The readings in words too, so the line can be followed without the table.
+        std::string locked;
+        if (!mC)
+            locked += "cross-slide " + cell(su.cross, p.crossMm + cOff, u);
+        if (!mP)
+            locked += std::string(locked.empty() ? "" : ", ") + "compound " +
+                      cell(su.compound, p.compoundMm, u);
+        if (!mS)
+            locked += std::string(locked.empty() ? "" : ", ") + "saddle " +
+                      cell(su.saddle, p.saddleMm + sOff, u);
+        numbered.push_back(std::to_string(stepNo) + ". Pass " + std::to_string(st.pass + 1) +
+                           " (stage " + (d.stage == 0 ? "A" : "B") + "): " + p.note + ". Set " +
+                           locked + "; wind the " + slideName(p.kind) + " from " +
+                           cell(moving, p.fromMm + off, u) + " to " +
+                           cell(moving, p.toMm + off, u) + " at " +
+                           printf1(u == Units::Inch ? "%.4f" : "%.3f", fromMm(p.feedMmPerRev, u)) +
+                           " " + unitName(u) + "/rev.");
         passes.rows.push_back(
             {std::to_string(stepNo), std::to_string(st.pass + 1), d.stage == 0 ? "A" : "B",
              slideName(p.kind), mC ? "moves" : cell(su.cross, p.crossMm + cOff, u),
