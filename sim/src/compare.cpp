@@ -11,12 +11,18 @@ namespace {
 constexpr double kNaN = std::numeric_limits<double>::quiet_NaN();
 constexpr double kEpsZ = 1e-9;
 
-bool isRadial(const Feature& f) { return f.kind != FeatureKind::Face; }
+bool isRadial(const Feature& f) {
+    return f.kind != FeatureKind::Face;
+}
 
-double frustum(double a, double b, double h) { return kPi * h / 3.0 * (a * a + a * b + b * b); }
+double frustum(double a, double b, double h) {
+    return kPi * h / 3.0 * (a * a + a * b + b * b);
+}
 
 // Radius of the as-cut part below which a sample counts as no metal (a facing pip), mm.
-double noMetalRadiusMm(double faceRadiusMm) { return std::max(0.05, 0.01 * faceRadiusMm); }
+double noMetalRadiusMm(double faceRadiusMm) {
+    return std::max(0.05, 0.01 * faceRadiusMm);
+}
 
 } // namespace
 
@@ -25,7 +31,8 @@ int featureAt(const Part& part, double zMm) {
     double bestR = -1;
     for (std::size_t i = 0; i < part.features.size(); ++i) {
         const Feature& f = part.features[i];
-        if (!isRadial(f) || zMm < f.zStartMm - kEpsZ || zMm > f.zEndMm + kEpsZ) continue;
+        if (!isRadial(f) || zMm < f.zStartMm - kEpsZ || zMm > f.zEndMm + kEpsZ)
+            continue;
         const double r = f.radiusAt(std::clamp(zMm, f.zStartMm, f.zEndMm));
         if (r > bestR) {
             bestR = r;
@@ -40,17 +47,20 @@ Profile nominalOnGrid(const Part& part, const Profile& grid) {
     for (std::size_t i = 0; i < n.radiusMm.size(); ++i) {
         const double z = grid.zAt(i);
         const int f = featureAt(part, z);
-        n.radiusMm[i] = f < 0 ? kNaN : part.features[f].radiusAt(std::clamp(
-                                           z, part.features[f].zStartMm, part.features[f].zEndMm));
+        n.radiusMm[i] = f < 0 ? kNaN
+                              : part.features[f].radiusAt(std::clamp(z, part.features[f].zStartMm,
+                                                                     part.features[f].zEndMm));
     }
     return n;
 }
 
-std::vector<double> normalDeviation(const Part& part, const Profile& nominal, const Profile& asCut) {
+std::vector<double> normalDeviation(const Part& part, const Profile& nominal,
+                                    const Profile& asCut) {
     std::vector<double> d(asCut.radiusMm.size(), kNaN);
     for (std::size_t i = 0; i < d.size(); ++i) {
         const int f = featureAt(part, asCut.zAt(i));
-        if (f < 0) continue;
+        if (f < 0)
+            continue;
         const double cosT = std::cos(part.features[f].surfaceHalfAngleRad());
         d[i] = (asCut.radiusMm[i] - nominal.radiusMm[i]) * cosT;
     }
@@ -59,14 +69,16 @@ std::vector<double> normalDeviation(const Part& part, const Profile& nominal, co
 
 double normalDeviationAt(const Part& part, double zMm, double radiusMm) {
     const int fi = featureAt(part, zMm);
-    if (fi < 0) return kNaN;
+    if (fi < 0)
+        return kNaN;
     const Feature& f = part.features[static_cast<std::size_t>(fi)];
     const double rn = f.radiusAt(std::clamp(zMm, f.zStartMm, f.zEndMm));
     return (radiusMm - rn) * std::cos(f.surfaceHalfAngleRad());
 }
 
 double normalBandMm(const Feature& f) {
-    if (f.kind == FeatureKind::Face) return f.toleranceMm;
+    if (f.kind == FeatureKind::Face)
+        return f.toleranceMm;
     return 0.5 * f.toleranceMm * std::cos(f.surfaceHalfAngleRad());
 }
 
@@ -74,13 +86,16 @@ std::vector<bool> verdictMask(const Part& part, const Profile& grid, double nose
     // Internal corners: a radial feature's end where a neighbour stands taller.
     std::vector<double> corners;
     for (const Feature& f : part.features) {
-        if (!isRadial(f)) continue;
+        if (!isRadial(f))
+            continue;
         for (double ze : {f.zStartMm, f.zEndMm}) {
             const double r = f.radiusAt(ze);
             for (const Feature& g : part.features) {
-                if (&g == &f || ze < g.zStartMm - kEpsZ || ze > g.zEndMm + kEpsZ) continue;
+                if (&g == &f || ze < g.zStartMm - kEpsZ || ze > g.zEndMm + kEpsZ)
+                    continue;
                 const double rg = isRadial(g) ? g.radiusAt(ze) : 0.5 * g.diameterMm;
-                if (rg > r + 1e-6) corners.push_back(ze);
+                if (rg > r + 1e-6)
+                    corners.push_back(ze);
             }
         }
     }
@@ -88,7 +103,8 @@ std::vector<bool> verdictMask(const Part& part, const Profile& grid, double nose
     for (std::size_t i = 0; i < mask.size(); ++i) {
         const double z = grid.zAt(i);
         for (double c : corners) {
-            if (std::abs(z - c) < noseRadiusMm) mask[i] = false;
+            if (std::abs(z - c) < noseRadiusMm)
+                mask[i] = false;
         }
     }
     return mask;
@@ -99,7 +115,8 @@ std::vector<FeatureReport> compareFeatures(const Scene& scene, const Profile& as
                                            const std::vector<bool>& mask) {
     const Part& part = scene.part;
     std::vector<int> owner(asCut.radiusMm.size());
-    for (std::size_t i = 0; i < owner.size(); ++i) owner[i] = featureAt(part, asCut.zAt(i));
+    for (std::size_t i = 0; i < owner.size(); ++i)
+        owner[i] = featureAt(part, asCut.zAt(i));
 
     std::vector<FeatureReport> out;
     for (std::size_t fi = 0; fi < part.features.size(); ++fi) {
@@ -115,7 +132,8 @@ std::vector<FeatureReport> compareFeatures(const Scene& scene, const Profile& as
                 const double thresh = noMetalRadiusMm(0.5 * f.diameterMm);
                 for (std::size_t i = 0; i < asCut.radiusMm.size(); ++i) {
                     const double z = asCut.zAt(i);
-                    if (z >= f.zStartMm - kEpsZ) break;
+                    if (z >= f.zStartMm - kEpsZ)
+                        break;
                     if (asCut.radiusMm[i] > thresh) {
                         rep.maxLeftOnMm = f.zStartMm - z;
                         break;
@@ -129,10 +147,12 @@ std::vector<FeatureReport> compareFeatures(const Scene& scene, const Profile& as
         // Samples that count; all of the feature's samples if the corners take every one.
         std::vector<std::size_t> idx;
         for (std::size_t i = 0; i < owner.size(); ++i)
-            if (owner[i] == static_cast<int>(fi) && mask[i]) idx.push_back(i);
+            if (owner[i] == static_cast<int>(fi) && mask[i])
+                idx.push_back(i);
         if (idx.empty())
             for (std::size_t i = 0; i < owner.size(); ++i)
-                if (owner[i] == static_cast<int>(fi)) idx.push_back(i);
+                if (owner[i] == static_cast<int>(fi))
+                    idx.push_back(i);
         double sumR = 0, sz = 0, sr = 0, szz = 0, szr = 0;
         for (std::size_t i : idx) {
             const double d = dev[i];
@@ -158,8 +178,8 @@ std::vector<FeatureReport> compareFeatures(const Scene& scene, const Profile& as
                 ok = ok && std::abs(rep.asCutHalfAngleRad - f.cone.halfAngleRad) <=
                                f.angleToleranceRad + 1e-12;
             if (f.kind == FeatureKind::Cone && f.toleranceMm > 0)
-                ok = ok && std::abs(rep.asCutDiameterMm - f.cone.gaugeDiameterMm) <=
-                               f.toleranceMm + 1e-9;
+                ok = ok &&
+                     std::abs(rep.asCutDiameterMm - f.cone.gaugeDiameterMm) <= f.toleranceMm + 1e-9;
         }
         rep.withinTolerance = ok;
         out.push_back(rep);
@@ -171,7 +191,8 @@ double leftoverVolumeMm3(const Profile& nominal, const Profile& asCut) {
     double v = 0;
     for (std::size_t i = 1; i < asCut.radiusMm.size(); ++i) {
         const double n0 = nominal.radiusMm[i - 1], n1 = nominal.radiusMm[i];
-        if (std::isnan(n0) || std::isnan(n1)) continue;
+        if (std::isnan(n0) || std::isnan(n1))
+            continue;
         const double a0 = std::max(asCut.radiusMm[i - 1], n0), a1 = std::max(asCut.radiusMm[i], n1);
         v += frustum(a0, a1, asCut.dzMm) - frustum(n0, n1, asCut.dzMm);
     }

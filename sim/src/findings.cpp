@@ -9,7 +9,9 @@
 namespace swarf {
 namespace {
 
-bool rightHanded(const ToolOutline& o) { return o.imaginaryTip().x() > 0; }
+bool rightHanded(const ToolOutline& o) {
+    return o.imaginaryTip().x() > 0;
+}
 
 double enteringAngle(const ToolOutline& o) {
     return rightHanded(o) ? o.leadingEdgeAngleRad() : kPi - o.leadingEdgeAngleRad();
@@ -34,7 +36,8 @@ std::string featureName(const Scene& s, int fi) {
 
 double rampLimitRad(const ToolOutline& outline) {
     const double eps = includedAngle(outline);
-    if (eps >= kPi - 1e-9) return kPi / 2;  // a round insert follows any ramp
+    if (eps >= kPi - 1e-9)
+        return kPi / 2; // a round insert follows any ramp
     return kPi - enteringAngle(outline) - eps - kRampClearanceRad;
 }
 
@@ -52,7 +55,7 @@ std::vector<Finding> findCutFindings(const Scene& scene, const ToolOutline& outl
         for (const Finding& f : out)
             if (f.kind == kind && f.pass == pass && kind != FindingKind::LeftOn &&
                 kind != FindingKind::Overcut)
-                return;  // one of a kind per pass is enough
+                return; // one of a kind per pass is enough
         Finding f;
         f.kind = kind;
         f.pass = pass;
@@ -80,8 +83,10 @@ std::vector<Finding> findCutFindings(const Scene& scene, const ToolOutline& outl
         for (std::size_t i = 0; i < dev.size(); ++i) {
             if (!mask[i] || std::isnan(dev[i]) || featureAt(scene.part, g.zAt(i)) != rep.feature)
                 continue;
-            if (dev[i] > dMax) dMax = dev[i], iMax = i;
-            if (dev[i] < dMin) dMin = dev[i], iMin = i;
+            if (dev[i] > dMax)
+                dMax = dev[i], iMax = i;
+            if (dev[i] < dMin)
+                dMin = dev[i], iMin = i;
         }
         if (rep.maxLeftOnMm > band + 1e-9) {
             const int m = sweep.finalMove[iMax];
@@ -97,16 +102,17 @@ std::vector<Finding> findCutFindings(const Scene& scene, const ToolOutline& outl
             int pass = nPass - 1;
             const double cosT = std::cos(f.surfaceHalfAngleRad());
             for (int p = 0; p < static_cast<int>(sweep.afterPass.size()); ++p) {
-                const double d = (sweep.afterPass[p].radiusMm[iMin] - nominal.radiusMm[iMin]) * cosT;
+                const double d =
+                    (sweep.afterPass[p].radiusMm[iMin] - nominal.radiusMm[iMin]) * cosT;
                 if (d < -band - 1e-9) {
                     pass = p;
                     break;
                 }
             }
             add(FindingKind::Overcut, pass,
-                name + ": overcut " + formatSmallLength(rep.maxOvercutMm, u) + " at z = " +
-                    formatLength(g.zAt(iMin), u) + " (band ±" + formatSmallLength(band, u) +
-                    "): an overcut cannot be recut",
+                name + ": overcut " + formatSmallLength(rep.maxOvercutMm, u) +
+                    " at z = " + formatLength(g.zAt(iMin), u) + " (band ±" +
+                    formatSmallLength(band, u) + "): an overcut cannot be recut",
                 g.zAt(iMin), rep.maxOvercutMm);
         }
     }
@@ -121,7 +127,8 @@ std::vector<Finding> findCutFindings(const Scene& scene, const ToolOutline& outl
         const ToolMove& m = moves[k];
         const MoveCut& c = sweep.cuts[k];
         const int p = m.pass;
-        if (p >= 0 && p < nPass) passRemoved[p] = std::max(passRemoved[p], c.maxRemovedMm);
+        if (p >= 0 && p < nPass)
+            passRemoved[p] = std::max(passRemoved[p], c.maxRemovedMm);
         const PassKind kind = p >= 0 && p < nPass ? scene.plan.passes[p].kind : PassKind::Path;
         const Eigen::Vector2d d = m.tipTo - m.tipFrom;
         const bool cuts = c.maxRemovedMm >= kAirCutMm;
@@ -145,8 +152,8 @@ std::vector<Finding> findCutFindings(const Scene& scene, const ToolOutline& outl
         if (s.zHiMm > jawZ - kJawClearanceMm) {
             add(FindingKind::JawCrash, p,
                 "the insert reaches z = " + formatLength(s.zHiMm, u) + ", within " +
-                    formatLength(kJawClearanceMm, u) + " of the jaws' face at z = " +
-                    formatLength(jawZ, u) + ": stop the pass short",
+                    formatLength(kJawClearanceMm, u) +
+                    " of the jaws' face at z = " + formatLength(jawZ, u) + ": stop the pass short",
                 s.zHiMm, s.zHiMm - jawZ);
         }
         if (c.minXOverStockMm < -1e-6) {
@@ -159,8 +166,8 @@ std::vector<Finding> findCutFindings(const Scene& scene, const ToolOutline& outl
             const double engaged = c.maxThicknessNormalMm / std::max(std::sin(kappa), 0.05);
             if (engaged > scene.tool.edgeLengthMm) {
                 add(FindingKind::DepthOfCut, p,
-                    "depth of cut " + formatLength(c.maxThicknessNormalMm, u) +
-                        " engages " + formatLength(engaged, u) + " of edge, longer than the " +
+                    "depth of cut " + formatLength(c.maxThicknessNormalMm, u) + " engages " +
+                        formatLength(engaged, u) + " of edge, longer than the " +
                         formatLength(scene.tool.edgeLengthMm, u) + " cutting edge",
                     c.zOfMaxRemovedMm, c.maxThicknessNormalMm);
             }

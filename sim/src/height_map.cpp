@@ -13,9 +13,11 @@ constexpr double kInf = std::numeric_limits<double>::infinity();
 
 // Largest vertical cusp a move with feed f can leave (with margin), mm.
 double cuspBoundMm(double f, double r, double cosAlpha) {
-    if (f <= 0) return 0;
+    if (f <= 0)
+        return 0;
     const double h = 0.5 * f;
-    if (h >= r) return f;
+    if (h >= r)
+        return f;
     const double rt = h * h / (r + std::sqrt(r * r - h * h));
     return 1.5 * rt / std::max(cosAlpha, 0.05) + 1e-6;
 }
@@ -40,8 +42,10 @@ double markedRadiusMm(const ToolOutline& outline, const MoveSweep& s, double f, 
         const Eigen::Vector2d p = s.centreFrom + (len > 0 ? sPos / len : 0.0) * d;
         return outline.lowerEnvelope(zMm - p.x()) + p.y();
     };
-    if (len <= 1e-12) return cutRadiusMm(xAt(0), h);
-    if (f <= 0) return cutRadiusMm(sweptLowestX(outline, s, zMm), h);
+    if (len <= 1e-12)
+        return cutRadiusMm(xAt(0), h);
+    if (f <= 0)
+        return cutRadiusMm(sweptLowestX(outline, s, zMm), h);
     // Continuous optimum: where the support point sits over z (monotone along a vertical move).
     double sStar;
     const double dzu = d.x() / len;
@@ -53,7 +57,7 @@ double markedRadiusMm(const ToolOutline& outline, const MoveSweep& s, double f, 
     const double phiF = f * phiRad / (2.0 * kPi);
     double x;
     if (phiF >= len || sStar >= len) {
-        x = xAt(len);  // the dwell at the end is the position nearest the optimum
+        x = xAt(len); // the dwell at the end is the position nearest the optimum
     } else if (sStar <= phiF) {
         x = xAt(phiF);
     } else {
@@ -96,10 +100,12 @@ HeightMap buildHeightMap(const Scene& scene, const ToolOutline& outline,
             step = std::min(step, cuspRowSpacingMm(moves[m0].feedMmPerRev, cosA[m0]));
         }
         const int sub = std::max(1, static_cast<int>(std::ceil(g.dzMm / step - 1e-9)));
-        for (int j = 0; j < sub; ++j) map.zMm.push_back(g.zAt(i) + g.dzMm * j / sub);
+        for (int j = 0; j < sub; ++j)
+            map.zMm.push_back(g.zAt(i) + g.dzMm * j / sub);
         map.dzMm = std::min(map.dzMm, g.dzMm / sub);
     }
-    if (n > 0) map.zMm.push_back(g.zAt(n - 1));
+    if (n > 0)
+        map.zMm.push_back(g.zAt(n - 1));
     map.nz = static_cast<int>(map.zMm.size());
     map.z0Mm = map.zMm.empty() ? g.z0Mm : map.zMm.front();
     map.radiusMm.assign(static_cast<std::size_t>(map.nz) * map.nPhi, static_cast<float>(stockR));
@@ -129,20 +135,23 @@ HeightMap buildHeightMap(const Scene& scene, const ToolOutline& outline,
             double finalR = stockR;
             for (std::size_t k = 0; k < count; ++k) {
                 env[k] = kInf;
-                if (z < ms[k].zLoMm || z > ms[k].zHiMm) continue;
+                if (z < ms[k].zLoMm || z > ms[k].zHiMm)
+                    continue;
                 env[k] = cutRadiusMm(sweptLowestX(outline, ms[k], z), h);
                 finalR = std::min(finalR, env[k]);
             }
             relevant.clear();
             for (std::size_t k = 0; k < count; ++k)
-                if (env[k] <= finalR + cusp) relevant.push_back(k);
-            std::fill(best.begin(), best.end(), kInf);  // lowest tool x per φ
+                if (env[k] <= finalR + cusp)
+                    relevant.push_back(k);
+            std::fill(best.begin(), best.end(), kInf); // lowest tool x per φ
             for (std::size_t k : relevant) {
                 const Mark& m = mk[k];
                 if (m.len <= 1e-12 || m.f <= 0) {
                     // A null move or no feed: the continuous envelope.
                     const double x = sweptLowestX(outline, ms[k], z);
-                    for (int j = 0; j < map.nPhi; ++j) best[j] = std::min(best[j], x);
+                    for (int j = 0; j < map.nPhi; ++j)
+                        best[j] = std::min(best[j], x);
                     continue;
                 }
                 auto xAt = [&](double sp) {
@@ -151,7 +160,7 @@ HeightMap buildHeightMap(const Scene& scene, const ToolOutline& outline,
                 };
                 const double sStar = m.vertical ? (m.dir.y() < 0 ? m.len : 0.0)
                                                 : (z - m.supportZ - m.c0.x()) / m.dir.x();
-                const double xEnd = xAt(m.len);  // the dwell at the end
+                const double xEnd = xAt(m.len); // the dwell at the end
                 for (int j = 0; j < map.nPhi; ++j) {
                     // Same bracketing as markedRadiusMm.
                     const double phiF = m.f * j / map.nPhi;
@@ -163,7 +172,8 @@ HeightMap buildHeightMap(const Scene& scene, const ToolOutline& outline,
                     } else {
                         // sStar > phiF here, so truncation is the floor.
                         const double sa =
-                            phiF + static_cast<double>(static_cast<long long>((sStar - phiF) / m.f)) * m.f;
+                            phiF +
+                            static_cast<double>(static_cast<long long>((sStar - phiF) / m.f)) * m.f;
                         const double sb = sa + m.f;
                         x = std::min(xAt(sa), sb < m.len ? xAt(sb) : xEnd);
                     }
@@ -173,7 +183,8 @@ HeightMap buildHeightMap(const Scene& scene, const ToolOutline& outline,
             float* row = &map.radiusMm[i * map.nPhi];
             for (int j = 0; j < map.nPhi; ++j)
                 row[j] = static_cast<float>(std::min(stockR, cutRadiusMm(best[j], h)));
-            if (report && progress && (i - a) % 2048 == 0) progress(double(i - a) / double(b - a));
+            if (report && progress && (i - a) % 2048 == 0)
+                progress(double(i - a) / double(b - a));
         }
     };
     const std::size_t nz = map.zMm.size();
@@ -185,7 +196,8 @@ HeightMap buildHeightMap(const Scene& scene, const ToolOutline& outline,
         work(0, mid, true);
         t.join();
     }
-    if (progress) progress(1.0);
+    if (progress)
+        progress(1.0);
     return map;
 }
 
@@ -195,9 +207,11 @@ Roughness measureRoughness(const HeightMap& map, const ToolOutline& outline, con
     std::vector<int> rows;
     for (int i = 0; i < map.nz; ++i) {
         const double z = map.rowZ(i);
-        if (z >= zLoMm && z <= zHiMm) rows.push_back(i);
+        if (z >= zLoMm && z <= zHiMm)
+            rows.push_back(i);
     }
-    if (rows.size() < 3) return out;
+    if (rows.size() < 3)
+        return out;
     const double cosA = cosOfMove(s);
     std::vector<double> base(rows.size()), w(rows.size());
     for (std::size_t k = 0; k < rows.size(); ++k) {
@@ -223,7 +237,8 @@ Roughness measureRoughness(const HeightMap& map, const ToolOutline& outline, con
     }
     for (std::size_t k = 0; k < rows.size(); ++k) {
         const float* row = &map.radiusMm[static_cast<std::size_t>(rows[k]) * nPhi];
-        for (std::size_t j = 0; j < nPhi; ++j) sa[j] += w[k] * std::abs(row[j] - base[k] - sm[j] / sw);
+        for (std::size_t j = 0; j < nPhi; ++j)
+            sa[j] += w[k] * std::abs(row[j] - base[k] - sm[j] / sw);
     }
     double rtSum = 0, raSum = 0;
     for (std::size_t j = 0; j < nPhi; ++j) {

@@ -34,18 +34,22 @@ bool finishingRegion(const Scene& scene, const ExactSweep& sw, const std::vector
                 break;
             }
     }
-    if (!main) return false;
+    if (!main)
+        return false;
     const Profile& g = sw.asCut;
     std::map<int, std::size_t> votes;
     for (std::size_t i = 0; i < g.radiusMm.size(); ++i) {
         const double z = g.zAt(i);
-        if (z >= main->zStartMm && z <= main->zEndMm && sw.finalMove[i] >= 0) ++votes[sw.finalMove[i]];
+        if (z >= main->zStartMm && z <= main->zEndMm && sw.finalMove[i] >= 0)
+            ++votes[sw.finalMove[i]];
     }
-    if (votes.empty()) return false;
-    move = std::max_element(votes.begin(), votes.end(),
-                            [](auto& a, auto& b) { return a.second < b.second; })
-               ->first;
-    if (moves[move].feedMmPerRev <= 0) return false;
+    if (votes.empty())
+        return false;
+    move = std::max_element(votes.begin(), votes.end(), [](auto& a, auto& b) {
+               return a.second < b.second;
+           })->first;
+    if (moves[move].feedMmPerRev <= 0)
+        return false;
     std::size_t bestLo = 0, bestLen = 0;
     for (std::size_t i = 0; i < g.radiusMm.size();) {
         if (sw.finalMove[i] != move) {
@@ -53,10 +57,10 @@ bool finishingRegion(const Scene& scene, const ExactSweep& sw, const std::vector
             continue;
         }
         std::size_t j = i;
-        while (j < g.radiusMm.size() && sw.finalMove[j] == move &&
-               g.zAt(j) <= main->zEndMm)
+        while (j < g.radiusMm.size() && sw.finalMove[j] == move && g.zAt(j) <= main->zEndMm)
             ++j;
-        if (g.zAt(i) >= main->zStartMm - 1e-9 && j - i > bestLen) bestLo = i, bestLen = j - i;
+        if (g.zAt(i) >= main->zStartMm - 1e-9 && j - i > bestLen)
+            bestLo = i, bestLen = j - i;
         i = j + (j == i ? 1 : 0);
     }
     const double trim = 2.0 * moves[move].feedMmPerRev + scene.tool.noseRadiusMm;
@@ -69,7 +73,8 @@ bool finishingRegion(const Scene& scene, const ExactSweep& sw, const std::vector
 
 CutResult simulate(const Scene& scene, const ProgressFn& progress) {
     auto report = [&](double f) {
-        if (progress) progress(f);
+        if (progress)
+            progress(f);
     };
     CutResult res;
     const ToolOutline outline(scene.tool);
@@ -114,9 +119,8 @@ CutResult simulate(const Scene& scene, const ProgressFn& progress) {
                                    res.deviationMm, mask);
     report(0.15);
 
-    res.surface = buildHeightMap(scene, outline, res.moves, sw, [&](double f) {
-        report(0.15 + 0.8 * f);
-    });
+    res.surface =
+        buildHeightMap(scene, outline, res.moves, sw, [&](double f) { report(0.15 + 0.8 * f); });
 
     int fm = -1;
     double zLo = 0, zHi = 0;

@@ -22,7 +22,8 @@ Eigen::Vector2d tipFromTravels(const Setup& setup, double crossTravelMm, double 
     const double alpha = setup.compoundAxisAngleRad();
     const double advance = setup.compoundAdvanceToward == Widens::TowardChuck ? 1.0 : -1.0;
     const double z = setup.zeroZMm + saddleTravelMm + compoundTravelMm * advance * std::cos(alpha);
-    const double x = 0.5 * setup.zeroDiameterMm - crossTravelMm - compoundTravelMm * std::sin(alpha);
+    const double x =
+        0.5 * setup.zeroDiameterMm - crossTravelMm - compoundTravelMm * std::sin(alpha);
     return {z, x};
 }
 
@@ -38,9 +39,10 @@ struct Slides {
 std::vector<ToolMove> planMoves(const Scene& scene) {
     const Setup& su = scene.setup;
     std::vector<ToolMove> moves;
-    Slides at;  // travels; all readings zero, each slide last moved increasing
+    Slides at; // travels; all readings zero, each slide last moved increasing
     auto setCross = [&](double reading) {
-        at.cross = followWithBacklash(at.cross, crossTravelFromReading(su, reading), su.cross.backlashMm);
+        at.cross =
+            followWithBacklash(at.cross, crossTravelFromReading(su, reading), su.cross.backlashMm);
     };
     auto setCompound = [&](double reading) {
         at.compound = followWithBacklash(at.compound, reading, su.compound.backlashMm);
@@ -94,14 +96,22 @@ std::vector<ToolMove> planMoves(const Scene& scene) {
             m.crossFrom = ps.fromMm;
             m.crossTo = ps.toMm;
             break;
-        case PassKind::Path: break;
+        case PassKind::Path:
+            break;
         }
         m.tipFrom = tipNow();
         switch (ps.kind) {
-        case PassKind::Compound: setCompound(ps.toMm); break;
-        case PassKind::Saddle: setSaddle(ps.toMm); break;
-        case PassKind::CrossSlide: setCross(ps.toMm); break;
-        case PassKind::Path: break;
+        case PassKind::Compound:
+            setCompound(ps.toMm);
+            break;
+        case PassKind::Saddle:
+            setSaddle(ps.toMm);
+            break;
+        case PassKind::CrossSlide:
+            setCross(ps.toMm);
+            break;
+        case PassKind::Path:
+            break;
         }
         m.tipTo = tipNow();
         moves.push_back(m);

@@ -9,7 +9,6 @@
 namespace swarf {
 namespace {
 
-
 // Below this many samples one thread is quicker than two.
 constexpr std::size_t kThreadMinSamples = 4000;
 
@@ -96,7 +95,8 @@ ExactSweep sweepExact(const Scene& scene, const ToolOutline& outline,
     }
     // Which moves end each pass (pass index → last move index + 1).
     const std::size_t nPass = scene.plan.passes.size();
-    if (perPass) out.afterPass.assign(nPass, grid);
+    if (perPass)
+        out.afterPass.assign(nPass, grid);
 
     // Each thread sweeps every move over its own sample range: disjoint writes, and the result
     // does not depend on the thread count except through the per-thread partial sums below.
@@ -112,7 +112,7 @@ ExactSweep sweepExact(const Scene& scene, const ToolOutline& outline,
         P.thickness.assign(count, 0.0);
         P.minX.assign(count, 1e300);
         std::vector<double>& r = out.asCut.radiusMm;
-        std::size_t passDone = 0;  // passes whose snapshot is taken
+        std::size_t passDone = 0; // passes whose snapshot is taken
         auto snapshotUpTo = [&](std::size_t passLimit) {
             for (; passDone < passLimit && passDone < nPass; ++passDone) {
                 if (perPass) {
@@ -135,7 +135,8 @@ ExactSweep sweepExact(const Scene& scene, const ToolOutline& outline,
                 const double x = sweptLowestX(outline, s, z);
                 const double rc = cutRadiusMm(x, h);
                 const double before = r[i];
-                if (before > 0 && x < P.minX[k]) P.minX[k] = x;
+                if (before > 0 && x < P.minX[k])
+                    P.minX[k] = x;
                 const double after = std::min(before, rc);
                 const double removed = before - after;
                 if (removed > P.maxRemoved[k]) {
@@ -145,7 +146,7 @@ ExactSweep sweepExact(const Scene& scene, const ToolOutline& outline,
                 if (!vertical) {
                     P.thickness[k] = std::max(P.thickness[k], removed * cosA);
                 } else if (removed > 1e-6) {
-                    P.thickness[k] += dz;  // a plunge: the cut's width along z
+                    P.thickness[k] += dz; // a plunge: the cut's width along z
                 }
                 if (rc < before) {
                     r[i] = rc;
@@ -171,7 +172,8 @@ ExactSweep sweepExact(const Scene& scene, const ToolOutline& outline,
                 c.maxRemovedMm = P.maxRemoved[k];
                 c.zOfMaxRemovedMm = P.zOfMax[k];
             }
-            const bool vertical = std::abs(sweeps[k].centreTo.x() - sweeps[k].centreFrom.x()) <= 1e-12;
+            const bool vertical =
+                std::abs(sweeps[k].centreTo.x() - sweeps[k].centreFrom.x()) <= 1e-12;
             c.maxThicknessNormalMm = vertical ? c.maxThicknessNormalMm + P.thickness[k]
                                               : std::max(c.maxThicknessNormalMm, P.thickness[k]);
             c.minXOverStockMm = std::min(c.minXOverStockMm, P.minX[k]);

@@ -23,25 +23,38 @@ constexpr double kTwoPi = 2.0 * kPi;
 // ISO 1832 corner angle of a shape letter (references R8); 0 if unknown.
 double includedAngleOfShape(char shape) {
     switch (shape) {
-    case 'C': return degToRad(80);
-    case 'D': return degToRad(55);
-    case 'E': return degToRad(75);
-    case 'S': return degToRad(90);
-    case 'T': return degToRad(60);
-    case 'V': return degToRad(35);
-    case 'W': return degToRad(80);
-    default: return 0;
+    case 'C':
+        return degToRad(80);
+    case 'D':
+        return degToRad(55);
+    case 'E':
+        return degToRad(75);
+    case 'S':
+        return degToRad(90);
+    case 'T':
+        return degToRad(60);
+    case 'V':
+        return degToRad(35);
+    case 'W':
+        return degToRad(80);
+    default:
+        return 0;
     }
 }
 
-Eigen::Vector2d polar(double angleRad) { return {std::cos(angleRad), std::sin(angleRad)}; }
+Eigen::Vector2d polar(double angleRad) {
+    return {std::cos(angleRad), std::sin(angleRad)};
+}
 
-Eigen::Vector2d mirrorZ(const Eigen::Vector2d& p) { return {-p.x(), p.y()}; }
+Eigen::Vector2d mirrorZ(const Eigen::Vector2d& p) {
+    return {-p.x(), p.y()};
+}
 
 // Angle a brought into [s, s + 2π).
 double wrapFrom(double a, double s) {
     double d = std::fmod(a - s, kTwoPi);
-    if (d < 0) d += kTwoPi;
+    if (d < 0)
+        d += kTwoPi;
     return s + d;
 }
 
@@ -75,7 +88,8 @@ ToolOutline::ToolOutline(const Tool& tool) {
     r_ = tool.noseRadiusMm;
     assert(r_ > 0);
     const double kappa = tool.enteringAngleRad;
-    double eps = tool.includedAngleRad > 0 ? tool.includedAngleRad : includedAngleOfShape(tool.shape);
+    double eps =
+        tool.includedAngleRad > 0 ? tool.includedAngleRad : includedAngleOfShape(tool.shape);
     const bool round = tool.shape == 'R' || eps >= kPi - 1e-9 || eps <= 0;
     const bool left = tool.hand == Hand::L;
 

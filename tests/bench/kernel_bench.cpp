@@ -71,7 +71,8 @@ void BM_Kernel_ExactProfile(benchmark::State& state) {
         Profile p = profileUpTo(scene(), moves, moves.size());
         benchmark::DoNotOptimize(p.radiusMm.data());
     }
-    state.counters["samples"] = static_cast<double>(profileUpTo(scene(), moves, moves.size()).radiusMm.size());
+    state.counters["samples"] =
+        static_cast<double>(profileUpTo(scene(), moves, moves.size()).radiusMm.size());
     state.counters["passes"] = static_cast<double>(scene().plan.passes.size());
 }
 BENCHMARK(BM_Kernel_ExactProfile)->Unit(benchmark::kMillisecond);

@@ -37,7 +37,8 @@ TEST_CASE("result.json holds the listed fields in mm", "[result_writer]") {
     CHECK(j["features"].size() == s.part.features.size());
     // Per-pass removed volumes add up to the whole (derived).
     double sum = 0;
-    for (const auto& p : j["passes"]) sum += p["removed_mm3"].get<double>();
+    for (const auto& p : j["passes"])
+        sum += p["removed_mm3"].get<double>();
     CHECK(sum == Approx(r.removedVolumeMm3).epsilon(1e-9));
 }
 
@@ -52,10 +53,11 @@ TEST_CASE("profile.csv has one row per sample and empty cells off the drawing", 
     std::size_t rows = 0, empty = 0;
     while (std::getline(in, line)) {
         ++rows;
-        if (line.find(",,") != std::string::npos) ++empty;
+        if (line.find(",,") != std::string::npos)
+            ++empty;
     }
     CHECK(rows == r.asCut.radiusMm.size());
-    CHECK(empty > 0);  // past the drawing's end (z > 80), toward the jaws
+    CHECK(empty > 0); // past the drawing's end (z > 80), toward the jaws
 }
 
 TEST_CASE("result files are written whole or not at all", "[result_writer]") {

@@ -18,24 +18,28 @@ TEST_CASE("every scene in scenes/ gives what it expects", "[corpus][kernel]") {
     int checked = 0;
     std::vector<fs::path> files;
     for (const auto& e : fs::directory_iterator(SWARF_SCENES_DIR))
-        if (e.path().extension() == ".toml") files.push_back(e.path());
+        if (e.path().extension() == ".toml")
+            files.push_back(e.path());
     std::sort(files.begin(), files.end());
     for (const fs::path& p : files) {
         const Scene s = io::readScene(p.string());
-        if (s.plan.passes.empty()) continue;  // planning scenes: `swarf plan` makes their plan
+        if (s.plan.passes.empty())
+            continue; // planning scenes: `swarf plan` makes their plan
         INFO(p.filename().string());
         const CutResult r = simulate(s);
         ++checked;
-        if (s.expect.withinTolerance) CHECK(r.withinTolerance == *s.expect.withinTolerance);
+        if (s.expect.withinTolerance)
+            CHECK(r.withinTolerance == *s.expect.withinTolerance);
         for (const std::string& kind : s.expect.findings) {
             INFO("expected finding " << kind);
-            const bool found = std::any_of(r.findings.begin(), r.findings.end(), [&](const Finding& f) {
-                return kind == findingKindName(f.kind);
-            });
+            const bool found =
+                std::any_of(r.findings.begin(), r.findings.end(),
+                            [&](const Finding& f) { return kind == findingKindName(f.kind); });
             CHECK(found);
         }
         if (s.expect.noFindings) {
-            for (const Finding& f : r.findings) INFO(findingKindName(f.kind) << ": " << f.message);
+            for (const Finding& f : r.findings)
+                INFO(findingKindName(f.kind) << ": " << f.message);
             CHECK(r.findings.empty());
         }
         // Removed volume is stock minus as-cut on the same samples (property).
@@ -48,7 +52,8 @@ TEST_CASE("every scene in scenes/ gives what it expects", "[corpus][kernel]") {
 TEST_CASE("the demo's plan raises no finding and is in tolerance", "[corpus][kernel]") {
     const Scene s = io::readScene(std::string(SWARF_SCENES_DIR) + "/fixture-arbor.toml");
     const CutResult r = simulate(s);
-    for (const Finding& f : r.findings) INFO(findingKindName(f.kind) << ": " << f.message);
+    for (const Finding& f : r.findings)
+        INFO(findingKindName(f.kind) << ": " << f.message);
     CHECK(r.findings.empty());
     CHECK(r.withinTolerance);
 }

@@ -31,7 +31,7 @@ TEST_CASE("nominal profile and the feature that gives it", "[compare]") {
     part.features.push_back(cylinderFeature(0, 10, 20, 0.1));
     part.features.push_back(cylinderFeature(10, 20, 30, 0.1));
     CHECK(featureAt(part, 5) == 0);
-    CHECK(featureAt(part, 10) == 1);  // the larger where two meet
+    CHECK(featureAt(part, 10) == 1); // the larger where two meet
     CHECK(featureAt(part, 25) == -1);
     const Profile n = nominalOnGrid(part, gridOf(-1, 0.5, 50, 0));
     CHECK(std::isnan(n.radiusMm[0]));
@@ -45,10 +45,10 @@ TEST_CASE("internal corners keep the nose radius out of the verdict", "[compare]
     part.features.push_back(cylinderFeature(10, 20, 30, 0.1));
     const Profile g = gridOf(0, 0.1, 201, 0);
     const auto mask = verdictMask(part, g, 0.8);
-    CHECK(mask[50]);         // z = 5
-    CHECK_FALSE(mask[95]);   // z = 9.5, within 0.8 of the corner at 10
-    CHECK_FALSE(mask[105]);  // z = 10.5
-    CHECK(mask[120]);        // z = 12
+    CHECK(mask[50]);        // z = 5
+    CHECK_FALSE(mask[95]);  // z = 9.5, within 0.8 of the corner at 10
+    CHECK_FALSE(mask[105]); // z = 10.5
+    CHECK(mask[120]);       // z = 12
 }
 
 TEST_CASE("a cone cut parallel but off by more than its band is out", "[compare]") {
@@ -57,7 +57,7 @@ TEST_CASE("a cone cut parallel but off by more than its band is out", "[compare]
     s.part.features.push_back(coneFeature(0, 20, 20, th, 0.02));
     s.part.features.back().cone.gaugeZMm = 10;
     s.part.features.back().cone.gaugeDiameterMm = 20 + 20 * std::tan(th);
-    for (double shift : {0.009, 0.011}) {  // normal band 0.01·cos 5° = 0.00996 (derived)
+    for (double shift : {0.009, 0.011}) { // normal band 0.01·cos 5° = 0.00996 (derived)
         Profile cut = gridOf(0, 0.01, 2001, 0);
         for (std::size_t i = 0; i < cut.radiusMm.size(); ++i)
             cut.radiusMm[i] = 10 + cut.zAt(i) * std::tan(th) + shift / std::cos(th);

@@ -5,8 +5,8 @@
 #include "kernel_scenes.h"
 #include "swarf/sim/kernel.h"
 
-#include <catch2/catch.hpp>
 #include <algorithm>
+#include <catch2/catch.hpp>
 #include <cmath>
 
 using namespace swarf;
@@ -14,7 +14,8 @@ using namespace swarf::testing;
 
 namespace {
 bool has(const CutResult& r, FindingKind k) {
-    return std::any_of(r.findings.begin(), r.findings.end(), [&](const Finding& f) { return f.kind == k; });
+    return std::any_of(r.findings.begin(), r.findings.end(),
+                       [&](const Finding& f) { return f.kind == k; });
 }
 
 // A good plan: a cylinder turned to size in two passes by a CNC path, well clear of the jaws.
@@ -46,7 +47,8 @@ TEST_CASE("trailing edge limit of a 55 degree insert in a 93 degree holder", "[f
 
 TEST_CASE("a good plan raises no finding", "[findings]") {
     const CutResult r = simulate(goodPlan());
-    for (const Finding& f : r.findings) INFO(findingKindName(f.kind) << ": " << f.message);
+    for (const Finding& f : r.findings)
+        INFO(findingKindName(f.kind) << ": " << f.message);
     CHECK(r.findings.empty());
     CHECK(r.withinTolerance);
 }
@@ -92,7 +94,7 @@ TEST_CASE("each finding from a plan made for it", "[findings]") {
         Scene s = goodPlan();
         Pass p;
         p.kind = PassKind::Compound;
-        p.crossMm = -10;  // far out: cuts nothing
+        p.crossMm = -10; // far out: cuts nothing
         p.fromMm = 0;
         p.toMm = 120;
         s.setup.compound.travelMm = 100;

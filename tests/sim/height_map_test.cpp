@@ -63,7 +63,8 @@ TEST_CASE("the map never lies below the exact profile and keeps the stock", "[he
         const double exact = std::min(20.0, cutRadiusMm(sweptLowestX(o, ms, m.rowZ(i)), 0));
         for (int j = 0; j < m.nPhi; ++j) {
             worstBelow = std::max(worstBelow, exact - m.at(i, j));
-            if (m.rowZ(i) > 2 && m.rowZ(i) < 28) maxAbove = std::max(maxAbove, m.at(i, j) - exact);
+            if (m.rowZ(i) > 2 && m.rowZ(i) < 28)
+                maxAbove = std::max(maxAbove, m.at(i, j) - exact);
         }
     }
     // Float storage: 1e-5 mm.
@@ -91,12 +92,14 @@ TEST_CASE("one tool position per revolution and angle", "[height_map]") {
         for (double phi : {0.0, 1.0, 3.0, 6.0}) {
             double brute = std::numeric_limits<double>::infinity();
             auto at = [&](double sp) {
-                const Eigen::Vector2d c = ms.centreFrom + (sp / len) * (ms.centreTo - ms.centreFrom);
+                const Eigen::Vector2d c =
+                    ms.centreFrom + (sp / len) * (ms.centreTo - ms.centreFrom);
                 brute = std::min(brute, o.lowerEnvelope(z - c.x()) + c.y());
             };
             for (int k = 0;; ++k) {
                 const double sp = 0.17 * (k + phi / (2 * kPi));
-                if (sp > len) break;
+                if (sp > len)
+                    break;
                 at(sp);
             }
             at(len);

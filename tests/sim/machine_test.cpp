@@ -48,7 +48,7 @@ TEST_CASE("compound pass follows the machine model", "[machine]") {
 TEST_CASE("compound scale read from the cross-slide and its error", "[machine]") {
     Scene s = compoundScene();
     s.setup.compoundScale = CompoundScale::FromCrossSlide;
-    s.setup.compoundReadingRad = degToRad(80);  // references R5: set 90° − θ
+    s.setup.compoundReadingRad = degToRad(80); // references R5: set 90° − θ
     s.setup.compoundErrorRad = degToRad(0.1);
     const auto m = planMoves(s);
     const double a = degToRad(10.1);
@@ -67,7 +67,7 @@ TEST_CASE("backlash: a slide that reverses lags by its backlash", "[machine]") {
     CHECK(followWithBacklash(0.0, -1.0, 0.05) == Approx(-0.95));
     CHECK(followWithBacklash(-0.95, -0.5, 0.05) == Approx(-0.5));
     CHECK(followWithBacklash(0.0, 0.03, 0.05) == Approx(0.03));
-    CHECK(followWithBacklash(0.0, -0.03, 0.05) == Approx(0.0));  // inside the gap: no motion
+    CHECK(followWithBacklash(0.0, -0.03, 0.05) == Approx(0.0)); // inside the gap: no motion
 
     Scene s = compoundScene();
     s.setup.cross.backlashMm = 0.05;

@@ -35,7 +35,8 @@ double worstOffset(const Scene& s, double want) {
     double worst = 0;
     for (std::size_t i = 0; i < dev.size(); ++i) {
         const double z = p.zAt(i);
-        if (z < 2 || z > 8) continue;
+        if (z < 2 || z > 8)
+            continue;
         worst = std::max(worst, std::abs(dev[i] - want));
     }
     return worst;
@@ -51,9 +52,9 @@ TEST_CASE("R1: the imaginary tip along the drawing line leaves r(sin+cos-1)", "[
     // Source: references R1, table "normal error, no offset" for r = 0.8 mm.
     for (Row row : {Row{45, 0.33137}, Row{30, 0.29282}, Row{60, 0.29282}}) {
         const double th = degToRad(row.thetaDeg);
-        const double formula = r * (std::sin(th) + std::cos(th) - 1);  // references R1
+        const double formula = r * (std::sin(th) + std::cos(th) - 1); // references R1
         CHECK(formula == Approx(row.table).margin(5e-6));
-        CHECK(worstOffset(coneByTip(row.thetaDeg, 0, 0), formula) < 1e-4);  // 0.1 µm
+        CHECK(worstOffset(coneByTip(row.thetaDeg, 0, 0), formula) < 1e-4); // 0.1 µm
     }
 }
 
@@ -68,7 +69,8 @@ TEST_CASE("R1: with the offset applied the cone comes out on the line", "[sweep]
         CHECK(worstOffset(coneByTip(deg, dZ, 0), 0.0) < 1e-4);
     }
     // Source: references R1 table, r = 0.8, θ = 30°: ΔX radius 0.33812, ΔZ 0.58564.
-    CHECK(r * (1 + std::tan(degToRad(30)) - 1 / std::cos(degToRad(30))) == Approx(0.33812).margin(5e-6));
+    CHECK(r * (1 + std::tan(degToRad(30)) - 1 / std::cos(degToRad(30))) ==
+          Approx(0.33812).margin(5e-6));
     CHECK(r * (1 - std::tan(degToRad(15))) == Approx(0.58564).margin(5e-6));
 }
 
@@ -94,7 +96,8 @@ TEST_CASE("R7: a tip off centre makes a hyperboloid", "[sweep]") {
         double worst = 0;
         for (std::size_t i = 0; i < p.radiusMm.size(); ++i) {
             const double z = p.zAt(i);
-            if (z < 2 || z > 8) continue;
+            if (z < 2 || z > 8)
+                continue;
             const double x = 5 + z * std::tan(th) + offset;
             worst = std::max(worst, std::abs(p.radiusMm[i] - std::sqrt(x * x + h * h)));
         }

@@ -23,16 +23,20 @@ namespace {
 // A progress bar on stderr, drawn only once the run has taken more than a moment.
 class ProgressBar {
   public:
-    ProgressBar() : enabled_(isatty(fileno(stderr)) != 0), start_(std::chrono::steady_clock::now()) {}
+    ProgressBar()
+        : enabled_(isatty(fileno(stderr)) != 0), start_(std::chrono::steady_clock::now()) {}
     ~ProgressBar() { finish(); }
     void update(double fraction) {
-        if (!enabled_) return;
+        if (!enabled_)
+            return;
         const double secs =
             std::chrono::duration<double>(std::chrono::steady_clock::now() - start_).count();
-        if (secs < 0.4) return;
+        if (secs < 0.4)
+            return;
         const int width = 30, filled = static_cast<int>(fraction * width + 0.5);
         const int pct = static_cast<int>(fraction * 100 + 0.5);
-        if (pct == lastPct_) return;
+        if (pct == lastPct_)
+            return;
         lastPct_ = pct;
         std::fprintf(stderr, "\r  simulating [%s%s] %3d%%", std::string(filled, '#').c_str(),
                      std::string(width - filled, ' ').c_str(), pct);
@@ -40,7 +44,8 @@ class ProgressBar {
         drawn_ = true;
     }
     void finish() {
-        if (drawn_) std::fprintf(stderr, "\r%60s\r", "");
+        if (drawn_)
+            std::fprintf(stderr, "\r%60s\r", "");
         drawn_ = false;
     }
 
@@ -52,7 +57,8 @@ class ProgressBar {
 };
 
 std::string passName(const Scene& s, int pass) {
-    if (pass < 0 || pass >= static_cast<int>(s.plan.passes.size())) return "the plan";
+    if (pass < 0 || pass >= static_cast<int>(s.plan.passes.size()))
+        return "the plan";
     const Pass& p = s.plan.passes[static_cast<std::size_t>(pass)];
     return fmt::format("pass {}{}", pass + 1, p.note.empty() ? "" : " (" + p.note + ")");
 }
@@ -66,17 +72,20 @@ void printSummary(const Scene& s, const CutResult& r) {
     fmt::print("scene: {}\n", s.name);
     fmt::print("verdict: {}\n", r.withinTolerance ? "IN TOLERANCE" : "OUT OF TOLERANCE");
     fmt::print("gauge plane z = {}: diameter as cut {}, drawing {} ({})\n",
-               formatLength(r.gaugeZMm, u), formatLength(r.gaugeAsCutDiameterMm, u, u == Units::Inch ? 5 : 4),
+               formatLength(r.gaugeZMm, u),
+               formatLength(r.gaugeAsCutDiameterMm, u, u == Units::Inch ? 5 : 4),
                formatLength(r.gaugeNominalDiameterMm, u, u == Units::Inch ? 5 : 4),
                signedSmall(r.gaugeAsCutDiameterMm - r.gaugeNominalDiameterMm, u));
     fmt::print("largest metal left on: {}   largest overcut: {}   (normal to the surface)\n",
                formatSmallLength(r.maxLeftOnMm, u), formatSmallLength(r.maxOvercutMm, u));
     if (u == Units::Inch) {
         // The inch trade gives roughness in microinches (1 µm = 39.37 µin).
-        fmt::print("feed marks of the finishing pass: Rt {:.0f} µin, Ra {:.0f} µin ({:.2f} µm, {:.2f} µm)\n",
+        fmt::print("feed marks of the finishing pass: Rt {:.0f} µin, Ra {:.0f} µin ({:.2f} µm, "
+                   "{:.2f} µm)\n",
                    r.rtUm * 1000.0 / 25.4, r.raUm * 1000.0 / 25.4, r.rtUm, r.raUm);
     } else {
-        fmt::print("feed marks of the finishing pass: Rt {:.2f} µm, Ra {:.2f} µm\n", r.rtUm, r.raUm);
+        fmt::print("feed marks of the finishing pass: Rt {:.2f} µm, Ra {:.2f} µm\n", r.rtUm,
+                   r.raUm);
     }
     for (const FeatureReport& f : r.features) {
         const Feature& ft = s.part.features[static_cast<std::size_t>(f.feature)];
@@ -86,7 +95,8 @@ void printSummary(const Scene& s, const CutResult& r) {
                                 formatDms(ft.cone.halfAngleRad));
         fmt::print("  {} {}: left on {}, overcut {}{}\n", f.withinTolerance ? "ok " : "OUT",
                    ft.name.empty() ? fmt::format("feature {}", f.feature + 1) : ft.name,
-                   formatSmallLength(f.maxLeftOnMm, u), formatSmallLength(f.maxOvercutMm, u), extra);
+                   formatSmallLength(f.maxLeftOnMm, u), formatSmallLength(f.maxOvercutMm, u),
+                   extra);
     }
     if (r.findings.empty()) {
         fmt::print("findings: none\n");
@@ -106,7 +116,8 @@ void registerRun(CLI::App& app, int& exitCode) {
     auto noStep = std::make_shared<bool>(false);
     auto noPictures = std::make_shared<bool>(false);
     cmd->add_option("scene", *scene, "Scene file (.toml)")->required();
-    cmd->add_option("--out", *outDir, "Directory for result.json, profile.csv and the rest")->required();
+    cmd->add_option("--out", *outDir, "Directory for result.json, profile.csv and the rest")
+        ->required();
     cmd->add_flag("--no-step", *noStep, "Do not export the as-cut solid as STEP");
     cmd->add_flag("--no-pictures", *noPictures, "Do not render pictures or the report");
     cmd->callback([scene, outDir, noStep, noPictures, &exitCode] {
@@ -120,7 +131,8 @@ void registerRun(CLI::App& app, int& exitCode) {
         namespace fs = std::filesystem;
         std::error_code ec;
         fs::create_directories(*outDir, ec);
-        if (ec) throw OutputError("cannot create " + *outDir + ": " + ec.message());
+        if (ec)
+            throw OutputError("cannot create " + *outDir + ": " + ec.message());
         const std::string json = (fs::path(*outDir) / "result.json").string();
         const std::string csv = (fs::path(*outDir) / "profile.csv").string();
         io::writeResultJson(json, s, result);
@@ -135,8 +147,9 @@ void registerRun(CLI::App& app, int& exitCode) {
 
         printSummary(s, result);
         fmt::print("wrote {} and {}\n", json, csv);
-        fmt::print("CAUTION: a simulation of the tool path only; it does not model cutting forces,\n"
-                   "deflection or chatter. Check every reading on the machine and take a trial cut.\n");
+        fmt::print(
+            "CAUTION: a simulation of the tool path only; it does not model cutting forces,\n"
+            "deflection or chatter. Check every reading on the machine and take a trial cut.\n");
         exitCode = kExitOk;
     });
 }

@@ -16,29 +16,41 @@ namespace {
 using nlohmann::ordered_json;
 
 // NaN and infinities become null.
-ordered_json num(double v) { return std::isfinite(v) ? ordered_json(v) : ordered_json(nullptr); }
+ordered_json num(double v) {
+    return std::isfinite(v) ? ordered_json(v) : ordered_json(nullptr);
+}
 
 const char* featureKindName(FeatureKind k) {
     switch (k) {
-    case FeatureKind::Cylinder: return "cylinder";
-    case FeatureKind::Cone: return "cone";
-    case FeatureKind::Chamfer: return "chamfer";
-    case FeatureKind::Face: return "face";
+    case FeatureKind::Cylinder:
+        return "cylinder";
+    case FeatureKind::Cone:
+        return "cone";
+    case FeatureKind::Chamfer:
+        return "chamfer";
+    case FeatureKind::Face:
+        return "face";
     }
     return "?";
 }
 
 const char* passKindName(PassKind k) {
     switch (k) {
-    case PassKind::Compound: return "compound";
-    case PassKind::Saddle: return "saddle";
-    case PassKind::CrossSlide: return "cross";
-    case PassKind::Path: return "path";
+    case PassKind::Compound:
+        return "compound";
+    case PassKind::Saddle:
+        return "saddle";
+    case PassKind::CrossSlide:
+        return "cross";
+    case PassKind::Path:
+        return "path";
     }
     return "?";
 }
 
-ordered_json point(const Eigen::Vector2d& p) { return {{"z_mm", p.x()}, {"x_mm", p.y()}}; }
+ordered_json point(const Eigen::Vector2d& p) {
+    return {{"z_mm", p.x()}, {"x_mm", p.y()}};
+}
 
 } // namespace
 
@@ -126,7 +138,8 @@ std::string resultJson(const Scene& scene, const CutResult& r) {
                           {"feed_mm_per_rev", ps.feedMmPerRev}};
         ordered_json mv = ordered_json::array();
         for (const ToolMove& m : r.moves) {
-            if (m.pass != static_cast<int>(p)) continue;
+            if (m.pass != static_cast<int>(p))
+                continue;
             mv.push_back({{"tip_from", point(m.tipFrom)},
                           {"tip_to", point(m.tipTo)},
                           {"cross_from_mm", m.crossFrom},
@@ -142,14 +155,14 @@ std::string resultJson(const Scene& scene, const CutResult& r) {
             o["max_radial_depth_mm"] = num(sums[p].maxRadialDepthMm);
         }
         int nFind = 0;
-        for (const Finding& f : r.findings) nFind += f.pass == static_cast<int>(p);
+        for (const Finding& f : r.findings)
+            nFind += f.pass == static_cast<int>(p);
         o["findings"] = nFind;
         passes.push_back(o);
     }
     j["passes"] = passes;
-    j["profile"] = {{"samples", r.asCut.radiusMm.size()},
-                    {"z0_mm", r.asCut.z0Mm},
-                    {"step_mm", r.asCut.dzMm}};
+    j["profile"] = {
+        {"samples", r.asCut.radiusMm.size()}, {"z0_mm", r.asCut.z0Mm}, {"step_mm", r.asCut.dzMm}};
     j["surface"] = {{"rows", r.surface.nz},
                     {"angle_samples", r.surface.nPhi},
                     {"finest_row_step_mm", r.surface.dzMm}};

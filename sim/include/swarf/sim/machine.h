@@ -5,12 +5,12 @@
 // toward the chuck), all in mm of slide travel measured from the zero readings, the imaginary
 // tip is at
 //     z = zeroZ + s + p·a·cos α,   x = zeroDiameter/2 − c − p·sin α,
-// where α is the compound's true angle from the spindle axis (Setup::compoundAxisAngleRad) and a = +1 if the compound
-// advances toward the chuck (−1 toward the tailstock). A cross-slide reading on a diameter dial
-// is twice its travel. Backlash: the slide sits somewhere in a gap of width b behind the
-// handwheel; when the handwheel moves, the slide is dragged along only once the gap is closed,
-// so its travel is clamp(previous travel, w, w + b) for handwheel position w (in travel mm). At
-// the zero readings each slide has last moved with its reading increasing (travel = w).
+// where α is the compound's true angle from the spindle axis (Setup::compoundAxisAngleRad) and a =
+// +1 if the compound advances toward the chuck (−1 toward the tailstock). A cross-slide reading on
+// a diameter dial is twice its travel. Backlash: the slide sits somewhere in a gap of width b
+// behind the handwheel; when the handwheel moves, the slide is dragged along only once the gap is
+// closed, so its travel is clamp(previous travel, w, w + b) for handwheel position w (in travel
+// mm). At the zero readings each slide has last moved with its reading increasing (travel = w).
 #include "swarf/sim/cut.h"
 #include "swarf/sim/scene.h"
 

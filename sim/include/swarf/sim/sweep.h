@@ -18,12 +18,12 @@ namespace swarf {
 
 /// One move prepared for sweeping: nose-centre ends and the bridge between them. mm.
 struct MoveSweep {
-    Eigen::Vector2d centreFrom{0, 0}, centreTo{0, 0};  ///< nose centre (z, x) at the ends
-    bool hasBridge = false;                            ///< false for a vertical or null move
-    double bridgeZLo = 0, bridgeZHi = 0;               ///< z-range of the bridge
-    double bridgeZ0 = 0, bridgeX0 = 0, bridgeSlope = 0;  ///< x = X0 + slope·(z − Z0)
-    double zLoMm = 0, zHiMm = 0;                       ///< z-range the swept outline covers
-    Eigen::Vector2d support{0, 0};  ///< outline point (from the nose centre) touching the bridge
+    Eigen::Vector2d centreFrom{0, 0}, centreTo{0, 0};   ///< nose centre (z, x) at the ends
+    bool hasBridge = false;                             ///< false for a vertical or null move
+    double bridgeZLo = 0, bridgeZHi = 0;                ///< z-range of the bridge
+    double bridgeZ0 = 0, bridgeX0 = 0, bridgeSlope = 0; ///< x = X0 + slope·(z − Z0)
+    double zLoMm = 0, zHiMm = 0;                        ///< z-range the swept outline covers
+    Eigen::Vector2d support{0, 0}; ///< outline point (from the nose centre) touching the bridge
 };
 
 /// Prepares a move; `fraction` (0..1) stops it part of the way along.
@@ -35,7 +35,8 @@ double sweptLowestX(const ToolOutline& outline, const MoveSweep& sweep, double z
 /// Radius (mm) cut by a tool point at horizontal distance x with the tip h off centre.
 inline double cutRadiusMm(double xMm, double tipHeightMm) {
     const double xp = xMm > 0 ? xMm : 0.0;
-    if (tipHeightMm == 0) return xp;  // on centre: no square root (and the same number)
+    if (tipHeightMm == 0)
+        return xp; // on centre: no square root (and the same number)
     return std::sqrt(xp * xp + tipHeightMm * tipHeightMm);
 }
 
@@ -49,20 +50,20 @@ Profile stockOnGrid(const Scene& scene, const Profile& grid);
 
 /// What one move did to the profile.
 struct MoveCut {
-    double maxRemovedMm = 0;      ///< largest radius reduction made by this move
-    double zOfMaxRemovedMm = 0;   ///< where
-    double maxThicknessNormalMm = 0;  ///< largest depth of cut normal to the move direction
-    double minXOverStockMm = 1e300;   ///< lowest tool x where there is stock (< 0: past centre)
-    std::size_t sampleLo = 0, sampleHi = 0;  ///< samples the sweep covers [lo, hi)
+    double maxRemovedMm = 0;         ///< largest radius reduction made by this move
+    double zOfMaxRemovedMm = 0;      ///< where
+    double maxThicknessNormalMm = 0; ///< largest depth of cut normal to the move direction
+    double minXOverStockMm = 1e300;  ///< lowest tool x where there is stock (< 0: past centre)
+    std::size_t sampleLo = 0, sampleHi = 0; ///< samples the sweep covers [lo, hi)
 };
 
 /// The exact sweep of the first `count` moves (the last only `fraction` of the way).
 struct ExactSweep {
-    Profile stock;                    ///< stock radius on the grid
-    Profile asCut;                    ///< as-cut radius on the grid
-    std::vector<Profile> afterPass;   ///< as-cut after each pass (empty unless asked for)
-    std::vector<MoveCut> cuts;        ///< one per move swept
-    std::vector<int> finalMove;       ///< per sample: the move that leaves the surface, −1: stock
+    Profile stock;                  ///< stock radius on the grid
+    Profile asCut;                  ///< as-cut radius on the grid
+    std::vector<Profile> afterPass; ///< as-cut after each pass (empty unless asked for)
+    std::vector<MoveCut> cuts;      ///< one per move swept
+    std::vector<int> finalMove;     ///< per sample: the move that leaves the surface, −1: stock
 };
 
 /// Sweeps moves [0, count) over the stock. With `perPass`, also keeps the profile after each

@@ -15,10 +15,10 @@ namespace swarf {
 /// One piece of the outline's boundary, counter-clockwise in (z, x).
 struct OutlinePiece {
     enum class Kind { Segment, Arc } kind = Kind::Segment;
-    Eigen::Vector2d a, b;        ///< Segment: ends. Arc: start and end points.
-    Eigen::Vector2d centre{0, 0};  ///< Arc only
-    double radius = 0;           ///< Arc only
-    double startRad = 0, sweepRad = 0;  ///< Arc only: polar angle of a about centre, CCW sweep
+    Eigen::Vector2d a, b;              ///< Segment: ends. Arc: start and end points.
+    Eigen::Vector2d centre{0, 0};      ///< Arc only
+    double radius = 0;                 ///< Arc only
+    double startRad = 0, sweepRad = 0; ///< Arc only: polar angle of a about centre, CCW sweep
 };
 
 /// The insert outline of a Tool. Immutable value; all lengths mm, nose centre at the origin.
@@ -33,11 +33,13 @@ class ToolOutline {
     /// Lowest x of the outline at axial offset u from the nose centre; +inf outside [uMin, uMax].
     /// (Inline: the sweep and the height map call it hundreds of millions of times.)
     double lowerEnvelope(double uMm) const {
-        if (uMm < uMin_ || uMm > uMax_) return std::numeric_limits<double>::infinity();
+        if (uMm < uMin_ || uMm > uMax_)
+            return std::numeric_limits<double>::infinity();
         // The lower chain is contiguous and sorted: the first piece whose end is past u.
         const std::size_t n = lower_.size();
         std::size_t i = 0;
-        while (i + 1 < n && uMm > lower_[i].u1) ++i;
+        while (i + 1 < n && uMm > lower_[i].u1)
+            ++i;
         const LowerPiece& p = lower_[i];
         if (p.arc) {
             const double d = uMm - p.cz;
@@ -66,13 +68,13 @@ class ToolOutline {
     struct LowerPiece {
         double u0 = 0, u1 = 0;
         bool arc = false;
-        double x0 = 0, slope = 0;         // line
-        double cz = 0, cx = 0, rad = 0;   // arc
+        double x0 = 0, slope = 0;       // line
+        double cz = 0, cx = 0, rad = 0; // arc
     };
     double r_ = 0, uMin_ = 0, uMax_ = 0, leadAngle_ = 0, trailAngle_ = 0;
     Eigen::Vector2d tip_{0, 0};
     std::vector<OutlinePiece> pieces_;
-    std::vector<LowerPiece> lower_;   // sorted by u0, covering [uMin_, uMax_]
+    std::vector<LowerPiece> lower_; // sorted by u0, covering [uMin_, uMax_]
 };
 
 } // namespace swarf
