@@ -103,7 +103,8 @@ vtkSmartPointer<vtkPolyData> revolve(const Profile& profile, const std::vector<s
 
 vtkSmartPointer<vtkPolyData> heightMapSurface(const HeightMap& map, const Profile& nominal,
                                               double zFromMm, double zToMm, std::size_t maxRows,
-                                              double phi0, double phiSpan, double toDisplay) {
+                                              double phi0, double phiSpan, double toDisplay,
+                                              int maxCols) {
     auto pd = vtkSmartPointer<vtkPolyData>::New();
     if (map.nz < 2 || map.nPhi < 3) return pd;
     auto rowZ = [&](int i) { return map.rowZ(i); };
@@ -125,6 +126,14 @@ vtkSmartPointer<vtkPolyData> heightMapSurface(const HeightMap& map, const Profil
             auto rel = [&](int j) { return std::fmod(kTwoPi * j / map.nPhi - phi0 + 2 * kTwoPi, kTwoPi); };
             return rel(a) < rel(b);
         });
+    }
+    // Fewer columns for a whole-part view: keep every stride-th, and the run's last one.
+    const int stride = std::max(1, (static_cast<int>(cols.size()) + maxCols - 1) / std::max(maxCols, 1));
+    if (stride > 1) {
+        std::vector<int> kept;
+        for (std::size_t c = 0; c < cols.size(); c += static_cast<std::size_t>(stride)) kept.push_back(cols[c]);
+        if (!full && kept.back() != cols.back()) kept.push_back(cols.back());
+        cols = kept;
     }
     const int nc = static_cast<int>(cols.size());
     auto points = vtkSmartPointer<vtkPoints>::New();

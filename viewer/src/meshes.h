@@ -25,10 +25,12 @@ vtkSmartPointer<vtkPolyData> revolve(const Profile& profile, const std::vector<s
                                      double phiSpan);
 
 /// The 3D surface with feed marks from a height map (rows subsampled to maxRows, within
-/// [zFromMm, zToMm]), with deviation scalars from the nominal profile (display-unit factor).
+/// [zFromMm, zToMm]) and columns (to maxCols), with deviation scalars from the nominal profile
+/// (display-unit factor).
 vtkSmartPointer<vtkPolyData> heightMapSurface(const HeightMap& map, const Profile& nominal,
                                               double zFromMm, double zToMm, std::size_t maxRows,
-                                              double phi0, double phiSpan, double toDisplay);
+                                              double phi0, double phiSpan, double toDisplay,
+                                              int maxCols);
 
 /// The two faces of a cut-away wedge at φ = a and φ = b: strips between innerMm[i] and
 /// outerMm[i] (radii on the samples of `grid`) where both are numbers and outer > inner.

@@ -330,9 +330,9 @@ void PartScene::Impl::updatePart() {
         const double z0 = fine ? coneZ0 : p.z0Mm, z1 = fine ? coneZ1 : p.zAt(n - 1);
         partMapper->SetInputData(heightMapSurface(map, result.nominal, z0, z1,
                                                   fine ? kFineRows : kCoarseRows, phi0, span,
-                                                  toDisp));
+                                                  toDisp, fine ? 360 : 120));
     } else {
-        partMapper->SetInputData(revolve(p, rows, &devDisplay, fine ? 180 : 120, phi0, span));
+        partMapper->SetInputData(revolve(p, rows, &devDisplay, fine ? 180 : 96, phi0, span));
     }
 
     // The cut-away faces: leftover metal (above the drawing) and the part below it.
