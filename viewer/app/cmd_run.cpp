@@ -7,9 +7,14 @@
 #include "swarf/io/scene_reader.h"
 #include "swarf/sim/error.h"
 #include "swarf/sim/kernel.h"
+#include "swarf/geometry/reference_cut.h"
+#include "swarf/geometry/run_solids.h"
+#include "swarf/viewer/report.h"
+#include "swarf/viewer/snapshots.h"
 
 #include <fmt/core.h>
 
+#include <algorithm>
 #include <chrono>
 #include <cstdio>
 #include <filesystem>
@@ -120,7 +125,13 @@ void registerRun(CLI::App& app, int& exitCode) {
         ->required();
     cmd->add_flag("--no-step", *noStep, "Do not export the as-cut solid as STEP");
     cmd->add_flag("--no-pictures", *noPictures, "Do not render pictures or the report");
-    cmd->callback([scene, outDir, noStep, noPictures, &exitCode] {
+    auto stl = std::make_shared<bool>(false);
+    auto reference = std::make_shared<bool>(false);
+    cmd->add_flag("--surface-stl", *stl,
+                  "Also write surface.stl: the 3D surface with feed marks as triangles (large)");
+    cmd->add_flag("--reference", *reference,
+                  "Also cut the scene with the solid modeller alone and compare (slow)");
+    cmd->callback([scene, outDir, noStep, noPictures, stl, reference, &exitCode] {
         // Read first: a bad scene writes nothing.
         const Scene s = io::readScene(*scene);
         CutResult result;
@@ -128,6 +139,7 @@ void registerRun(CLI::App& app, int& exitCode) {
             ProgressBar bar;
             result = simulate(s, [&bar](double f) { bar.update(f); });
         }
+        std::string stepNote, referenceNote;
         namespace fs = std::filesystem;
         std::error_code ec;
         fs::create_directories(*outDir, ec);
@@ -138,15 +150,41 @@ void registerRun(CLI::App& app, int& exitCode) {
         io::writeResultJson(json, s, result);
         io::writeProfileCsv(csv, result);
 
-        // ---- LEAD: STEP export and PNG / report writing go here (other helpers' libraries).
-        //      --no-step and --no-pictures are accepted and currently do nothing: nothing of
-        //      the kind is written yet.
-        (void)*noStep;
-        (void)*noPictures;
-        // ---- end of the place for the lead.
+        std::vector<std::string> written{json, csv};
+        if (!*noStep) {
+            geometry::RunSolidsOptions so;
+            so.writeSurfaceStl = *stl;
+            const geometry::RunSolidsReport rep = geometry::writeRunSolids(s, result, *outDir, so);
+            written.insert(written.end(), rep.files.begin(), rep.files.end());
+            stepNote = fmt::format("as-cut solid: {} lines, {} arcs, {} B-splines; largest "
+                                   "distance from the kernel's profile {:.3f} µm",
+                                   rep.lineCount, rep.arcCount, rep.splineCount,
+                                   rep.fitErrorMm * 1000.0);
+        }
+        if (!*noPictures) {
+            const viewer::SnapshotReport pics = viewer::renderSnapshots(s, result, *outDir);
+            for (const std::string& f : pics.files()) written.push_back(f);
+            written.push_back(viewer::writeReport(s, result, *outDir, &pics));
+        }
+        if (*reference) {
+            // The solid modeller's own cut, independent of the kernel: slow, for checking.
+            const geometry::ReferenceResult ref = geometry::referenceCut(s, result.moves);
+            const double rel = (ref.volumeMm3 - result.asCutVolumeMm3) /
+                               std::max(1e-12, ref.volumeMm3);
+            double gaugeDiff = 0;
+            if (auto rr = ref.asCut.radiusAtZ(result.gaugeZMm))
+                gaugeDiff = 2.0 * *rr - result.gaugeAsCutDiameterMm;
+            referenceNote = fmt::format(
+                "reference path (solid modeller): as-cut volume {:.3f} mm³ vs kernel {:.3f} mm³ "
+                "({:+.2e} relative); gauge diameter differs by {:+.3f} µm",
+                ref.volumeMm3, result.asCutVolumeMm3, rel, gaugeDiff * 1000.0);
+        }
 
         printSummary(s, result);
-        fmt::print("wrote {} and {}\n", json, csv);
+        if (!stepNote.empty()) fmt::print("{}\n", stepNote);
+        if (!referenceNote.empty()) fmt::print("{}\n", referenceNote);
+        fmt::print("wrote:\n");
+        for (const std::string& f : written) fmt::print("  {}\n", f);
         fmt::print(
             "CAUTION: a simulation of the tool path only; it does not model cutting forces,\n"
             "deflection or chatter. Check every reading on the machine and take a trial cut.\n");
