@@ -150,6 +150,23 @@ class Fitter {
         return true;
     }
 
+    // Distance from (zq, xq) to the straight pieces joining samples a..b near zq.
+    double distanceToSamples(double zq, double xq, std::size_t a, std::size_t b) const {
+        const auto it = std::upper_bound(z_.begin() + static_cast<std::ptrdiff_t>(a),
+                                         z_.begin() + static_cast<std::ptrdiff_t>(b) + 1, zq);
+        const std::size_t k = static_cast<std::size_t>(it - z_.begin());
+        const std::size_t lo = k > a + 2 ? k - 2 : a, hi = std::min(b, k + 1);
+        double best = 1e300;
+        for (std::size_t i = lo; i < hi; ++i) {
+            const double dz = z_[i + 1] - z_[i], dx = x_[i + 1] - x_[i];
+            const double len2 = dz * dz + dx * dx;
+            double t = len2 > 0 ? ((zq - z_[i]) * dz + (xq - x_[i]) * dx) / len2 : 0.0;
+            t = std::clamp(t, 0.0, 1.0);
+            best = std::min(best, std::hypot(zq - z_[i] - t * dz, xq - x_[i] - t * dx));
+        }
+        return best;
+    }
+
     bool trySpline(std::size_t a, std::size_t b) {
         const int n = static_cast<int>(b - a + 1);
         TColgp_Array1OfPnt pts(1, n);
@@ -174,6 +191,20 @@ class Fitter {
             double dk = std::min(p.Distance(curve->StartPoint()), p.Distance(curve->EndPoint()));
             if (proj.NbPoints() > 0) dk = std::min(dk, proj.LowerDistance());
             err = std::max(err, dk);
+            if (err > opt_.maxFitErrorMm) return false;
+        }
+        // Between the samples too: a spline forced round a sharp corner can loop away from
+        // the outline and back, passing every sample. Walk the curve: it must keep going
+        // toward the chuck and stay near the straight pieces joining the samples.
+        const int steps = 4 * (n - 1);
+        double zPrev = -1e300;
+        for (int k = 0; k <= steps; ++k) {
+            const double u = curve->FirstParameter() +
+                             (curve->LastParameter() - curve->FirstParameter()) * k / steps;
+            const gp_Pnt q = curve->Value(u);
+            if (q.Z() < zPrev - 1e-9) return false;  // folds back along the axis
+            zPrev = q.Z();
+            err = std::max(err, distanceToSamples(q.Z(), q.X(), a, b));
             if (err > opt_.maxFitErrorMm) return false;
         }
         if (!addCurve(curve, a, b)) return false;

@@ -60,13 +60,20 @@ std::vector<P2> clipToAxis(const std::vector<P2>& poly) {
     return out;
 }
 
-// Splits edges longer than stepMm and maps x to sqrt(x² + h²).
-std::vector<P2> offCentre(const std::vector<P2>& poly, double h, double stepMm) {
+// Maps x to sqrt(x² + h²), splitting each edge so the chords stay within chordErrorMm of the
+// mapped curve. Along an edge, ρ(t) = sqrt(x(t)² + h²) has |ρ''| ≤ (dx/dt)² h² / ρ³, so a
+// piece of length L departs from its chord by at most L² h² / (8 ρmin³) (derived).
+std::vector<P2> offCentre(const std::vector<P2>& poly, double h, double chordErrorMm) {
     std::vector<P2> out;
     for (std::size_t i = 0; i < poly.size(); ++i) {
         const P2& a = poly[i];
         const P2& b = poly[(i + 1) % poly.size()];
-        const int n = std::max(1, static_cast<int>(std::ceil((b - a).norm() / stepMm)));
+        const double xNear = (a.y() > 0) == (b.y() > 0) ? std::min(std::abs(a.y()), std::abs(b.y())) : 0.0;
+        const double rhoMin = std::hypot(xNear, h);
+        const double curvature = h * h / (rhoMin * rhoMin * rhoMin);
+        const double maxPiece = std::sqrt(8.0 * chordErrorMm / curvature);
+        const double len = std::abs(b.y() - a.y());  // only the x extent bends
+        const int n = std::clamp(static_cast<int>(std::ceil(len / maxPiece)), 1, 20000);
         for (int k = 0; k < n; ++k) {
             const P2 p = a + (b - a) * (static_cast<double>(k) / n);
             out.emplace_back(p.x(), std::hypot(p.y(), h));
@@ -122,7 +129,7 @@ Solid sweptToolSolid(const Tool& tool, const ToolMove& move, double stockRadiusM
         for (const P2& p : region) xMin = std::min(xMin, p.y());
         if (std::hypot(std::max(xMin, 0.0), h) >= stockRadiusMm) return Solid();  // in the air
         region = clipToAxis(region);
-        if (h != 0) region = offCentre(region, h, options.offCentreStepMm);
+        if (h != 0) region = offCentre(region, h, options.offCentreChordErrorMm);
         return wrap(revolvePolygon(region));
     });
 }

@@ -140,6 +140,26 @@ TEST_CASE("a wavy profile is refined until every sample is within 0.5 um", "[geo
     }
 }
 
+TEST_CASE("a curve running into a sharp step is fitted without loops", "[geometry][revolve]") {
+    // A curved flank (a parabola: not a line, not a circle) that steps 0.4 mm up to the bar
+    // between two samples, as a tool off centre leaves at a shoulder. A smooth spline forced
+    // round that corner loops away between the samples; the fit must not keep such a piece.
+    const auto shape = [](double z) {
+        return z < 1.0 ? 9.2 + 0.3 * z * z : 10.0;
+    };
+    const Profile p = testprofiles::sampled(shape, 0.0, 1.5, 0.002);
+    const FittedSolid f = profileSolid(p);
+    REQUIRE(f.solid.isValid());
+    CHECK(f.maxFitErrorMm <= 0.5e-3);
+    CHECK_THAT(f.solid.volumeMm3(), WithinRel(p.volumeMm3(), 1e-6));
+    for (double z = 0.0013; z < 0.998; z += 0.0037) {
+        const auto r = f.solid.radiusAtZ(z);
+        REQUIRE(r.has_value());
+        INFO("z = " << z);
+        CHECK_THAT(*r, WithinAbs(p.radiusAt(z), 0.5e-3));
+    }
+}
+
 TEST_CASE("a profile cut through the centre comes apart in two solids", "[geometry][revolve]") {
     Profile p;
     p.dzMm = 1;

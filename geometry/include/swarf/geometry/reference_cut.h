@@ -18,10 +18,9 @@ struct ReferenceOptions {
     /// the arc, so the reference cuts at most this much less deep than the true nose.
     double chordErrorMm = 2e-5;
     /// With the tip off centre (h ≠ 0) a point at horizontal distance x cuts radius
-    /// sqrt(x² + h²); the hull's edges are split into pieces no longer than this (mm) before
-    /// that map is applied, so the straight pieces follow the curved image closely (the
-    /// distance is below 0.03 µm for h = 0.5 mm, radius ≥ 5 mm, 0.5 mm pieces).
-    double offCentreStepMm = 0.5;
+    /// sqrt(x² + h²), which bends the hull's straight edges; they are split into pieces short
+    /// enough that each piece's chord stays within this distance (mm) of the bent curve.
+    double offCentreChordErrorMm = 1e-5;
 };
 
 /// The reference as-cut part and what it took.
