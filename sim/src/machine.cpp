@@ -1,5 +1,6 @@
 // The machine model: readings → imaginary-tip moves, with the compound angle as set, diameter or
-// radius dials, backlash on every slide and CNC paths.
+// radius dials, backlash on every slide (readings dialled in order or approached from below) and
+// CNC paths.
 #include "swarf/sim/machine.h"
 
 #include "swarf/sim/kernel.h"
@@ -40,15 +41,23 @@ std::vector<ToolMove> planMoves(const Scene& scene) {
     const Setup& su = scene.setup;
     std::vector<ToolMove> moves;
     Slides at; // travels; all readings zero, each slide last moved increasing
-    auto setCross = [&](double reading) {
-        at.cross =
-            followWithBacklash(at.cross, crossTravelFromReading(su, reading), su.cross.backlashMm);
+    // Bringing a slide to a reading. In order: the handwheel goes straight there and the slide
+    // follows with its backlash. Taken up (setting a slide before a pass): the handwheel is wound
+    // back past the reading and brought up to it, so the slide sits exactly at the reading.
+    // During a pass the moving slide always follows with its backlash from where it started.
+    auto follow = [&](double& travel, double handwheel, double backlash, bool setting) {
+        travel = setting && su.approach == Approach::TakeUp
+                     ? handwheel
+                     : followWithBacklash(travel, handwheel, backlash);
     };
-    auto setCompound = [&](double reading) {
-        at.compound = followWithBacklash(at.compound, reading, su.compound.backlashMm);
+    auto setCross = [&](double reading, bool setting = true) {
+        follow(at.cross, crossTravelFromReading(su, reading), su.cross.backlashMm, setting);
     };
-    auto setSaddle = [&](double reading) {
-        at.saddle = followWithBacklash(at.saddle, reading, su.saddle.backlashMm);
+    auto setCompound = [&](double reading, bool setting = true) {
+        follow(at.compound, reading, su.compound.backlashMm, setting);
+    };
+    auto setSaddle = [&](double reading, bool setting = true) {
+        follow(at.saddle, reading, su.saddle.backlashMm, setting);
     };
     auto tipNow = [&] { return tipFromTravels(su, at.cross, at.compound, at.saddle); };
 
@@ -102,13 +111,13 @@ std::vector<ToolMove> planMoves(const Scene& scene) {
         m.tipFrom = tipNow();
         switch (ps.kind) {
         case PassKind::Compound:
-            setCompound(ps.toMm);
+            setCompound(ps.toMm, false);
             break;
         case PassKind::Saddle:
-            setSaddle(ps.toMm);
+            setSaddle(ps.toMm, false);
             break;
         case PassKind::CrossSlide:
-            setCross(ps.toMm);
+            setCross(ps.toMm, false);
             break;
         case PassKind::Path:
             break;

@@ -175,6 +175,8 @@ ConePlan planCone(const Scene& scene) {
     }
 
     Setup& setup = out.scene.setup;
+    // The sheet has every reading set before a pass approached from below, taking up backlash.
+    setup.approach = Approach::TakeUp;
     setup.compoundReadingRad = compoundScaleReadingRad(th, setup.compoundScale);
     setup.compoundAdvanceToward = g > 0 ? Widens::TowardTailstock : Widens::TowardChuck;
     out.compoundReadingRad = setup.compoundReadingRad;

@@ -1,5 +1,6 @@
 // Tests of swarf::io::readScene: every key, defaults, inch/mm equivalence, cone forms.
 #include "swarf/io/scene_reader.h"
+#include "swarf/io/scene_writer.h"
 #include "swarf/sim/error.h"
 
 #include <catch2/catch.hpp>
@@ -77,6 +78,7 @@ thickness = 4.76
 
 [setup]
 spindle_rpm = 900
+approach = "take_up"
 
 [setup.compound]
 angle = 87.0
@@ -254,6 +256,7 @@ TEST_CASE("every key of the scene format is read", "[io][scene]") {
     CHECK(s.tool.thicknessMm == 4.76);
 
     CHECK(s.setup.spindleRpm.value() == 900);
+    CHECK(s.setup.approach == Approach::TakeUp);
     CHECK(s.setup.compoundReadingRad == Approx(degToRad(87)));
     CHECK(s.setup.compoundScale == CompoundScale::FromCrossSlide);
     CHECK(s.setup.compoundErrorRad == Approx(degToRad(0.01)));
@@ -336,6 +339,7 @@ TEST_CASE("defaults of an omitted key", "[io][scene]") {
     CHECK(s.setup.compound.mmPerDivision == 0.02);
     CHECK(s.setup.cross.backlashMm == 0);
     CHECK(s.setup.zeroZMm == 0);
+    CHECK(s.setup.approach == Approach::InOrder);
     CHECK(s.plan.passes.empty());
     CHECK(s.planning.maxDepthMm == 1.0);
     CHECK(s.sim.profileStepMm == 0.002);
@@ -514,6 +518,30 @@ sizes = [2.54, 2.54254, 25.4]
     const Scene c =
         io::readSceneText(replaced(inch, "per_division = 0.001\nbacklash", "backlash"), "c.toml");
     same(c.setup.compound.mmPerDivision, 0.0254);
+}
+
+TEST_CASE("setup approach: in_order or take_up, written back, anything else refused",
+          "[io][scene]") {
+    const std::string takeUp = replaced(kMinimal, "[setup.compound]",
+                                        "[setup]\napproach = \"take_up\"\n\n[setup.compound]");
+    const Scene s = io::readSceneText(takeUp, "t.toml");
+    CHECK(s.setup.approach == Approach::TakeUp);
+    // The writer keeps it, and the default comes back as the default.
+    CHECK(io::readSceneText(io::sceneToToml(s), "w.toml").setup.approach == Approach::TakeUp);
+    const Scene d = io::readSceneText(kMinimal, "d.toml");
+    CHECK(io::readSceneText(io::sceneToToml(d), "w.toml").setup.approach == Approach::InOrder);
+
+    const std::string bad = replaced(kMinimal, "[setup.compound]",
+                                     "[setup]\napproach = \"below\"\n\n[setup.compound]");
+    try {
+        io::readSceneText(bad, "bad.toml");
+        FAIL("an unknown approach was accepted");
+    } catch (const InputError& e) {
+        CHECK(e.key() == "setup.approach");
+        CHECK(e.where().line == 22); // kMinimal's [setup.compound] was on line 21
+        CHECK(e.expected().find("in_order") != std::string::npos);
+        CHECK(e.expected().find("take_up") != std::string::npos);
+    }
 }
 
 TEST_CASE("every form of a cone gives the same cone", "[io][scene][cone]") {

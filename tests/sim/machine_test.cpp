@@ -87,6 +87,57 @@ TEST_CASE("backlash: a slide that reverses lags by its backlash", "[machine]") {
     CHECK(m[1].tipTo.x() == Approx(40.0 - 20 * std::cos(a)));
 }
 
+TEST_CASE("approach: readings taken up from below sit exactly; in order they lag", "[machine]") {
+    // The gap model (derived): the same three passes with and without backlash. The second pass
+    // backs the cross-slide out (2.0 → 1.0 on diameter) and sets the saddle lower (40 → 39.5);
+    // the third winds the compound from 20 back down to 5 while it cuts.
+    Scene s = compoundScene();
+    Pass p2 = s.plan.passes[0];
+    p2.crossMm = 1.0;
+    p2.saddleMm = 39.5;
+    Pass p3 = s.plan.passes[0];
+    p3.fromMm = 20;
+    p3.toMm = 5;
+    s.plan.passes.push_back(p2);
+    s.plan.passes.push_back(p3);
+    const auto exact = planMoves(s);
+    REQUIRE(exact.size() == 3);
+
+    Scene b = s;
+    b.setup.cross.backlashMm = 0.05;
+    b.setup.compound.backlashMm = 0.04;
+    b.setup.saddle.backlashMm = 0.1;
+    const double a = degToRad(10);
+
+    SECTION("take_up: every reading set before a pass is where the zero-backlash plan is") {
+        b.setup.approach = Approach::TakeUp;
+        const auto m = planMoves(b);
+        REQUIRE(m.size() == 3);
+        for (int k = 0; k < 2; ++k) {
+            CHECK((m[k].tipFrom - exact[k].tipFrom).norm() < 1e-12);
+            CHECK((m[k].tipTo - exact[k].tipTo).norm() < 1e-12);
+        }
+        CHECK((m[2].tipFrom - exact[2].tipFrom).norm() < 1e-12);
+        // The compound then runs down from its start: the slide stays 0.04 along its travel
+        // (advancing toward the tailstock and in toward the axis) behind its handwheel.
+        CHECK(m[2].tipTo.x() == Approx(exact[2].tipTo.x() - 0.04 * std::cos(a)));
+        CHECK(m[2].tipTo.y() == Approx(exact[2].tipTo.y() - 0.04 * std::sin(a)));
+    }
+    SECTION("in_order: the reversed cross-slide and saddle lag by their backlash") {
+        b.setup.approach = Approach::InOrder;
+        const auto m = planMoves(b);
+        REQUIRE(m.size() == 3);
+        CHECK((m[0].tipFrom - exact[0].tipFrom).norm() < 1e-12); // all increasing from zero
+        // Pass 2: cross 0.05 further in, saddle 0.1 further toward the chuck, compound 0.04
+        // along its travel after winding back from 20 to 0 (derived).
+        CHECK(m[1].tipFrom.y() ==
+              Approx(exact[1].tipFrom.y() - 0.05 - 0.04 * std::sin(a)).margin(1e-12));
+        CHECK(m[1].tipFrom.x() == Approx(exact[1].tipFrom.x() + 0.1 - 0.04 * std::cos(a)));
+        CHECK(m[1].tipTo.y() == Approx(exact[1].tipTo.y() - 0.05).margin(1e-12));
+        CHECK(m[1].tipTo.x() == Approx(exact[1].tipTo.x() + 0.1));
+    }
+}
+
 TEST_CASE("a CNC path is taken as given", "[machine]") {
     Scene s = barScene(30);
     s.plan.passes.push_back(pathPass({{0, 14}, {10, 14}, {20, 12}}, 0.1));

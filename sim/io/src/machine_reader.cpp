@@ -173,7 +173,8 @@ Setup readSetup(const Fields& root) {
     const toml::table* t = root.subtable("setup");
     if (!t)
         root.missing("setup", "a [setup] table with [setup.compound] and [setup.cross]");
-    Fields f(*t, "setup", root.context(), {"compound", "cross", "saddle", "spindle_rpm"});
+    Fields f(*t, "setup", root.context(),
+             {"compound", "cross", "saddle", "spindle_rpm", "approach"});
     const bool inch = root.context().units == Units::Inch;
     Setup s;
     s.where = f.where();
@@ -181,6 +182,8 @@ Setup readSetup(const Fields& root) {
         requirePositive(f, "spindle_rpm", *rpm);
         s.spindleRpm = *rpm;
     }
+    auto approach = f.choice("approach", {"in_order", "take_up"});
+    s.approach = approach && *approach == "take_up" ? Approach::TakeUp : Approach::InOrder;
 
     const toml::table* ct = f.subtable("compound");
     if (!ct)

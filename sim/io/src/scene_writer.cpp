@@ -218,6 +218,7 @@ std::string sceneToToml(const Scene& sc, const std::vector<std::string>& headerC
     o.line("[setup]");
     if (s.spindleRpm)
         o.raw("spindle_rpm", num(*s.spindleRpm));
+    o.str("approach", s.approach == Approach::TakeUp ? "take_up" : "in_order");
     o.line("");
     o.line("[setup.compound]");
     o.deg("angle", s.compoundReadingRad);

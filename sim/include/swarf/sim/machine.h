@@ -11,6 +11,10 @@
 // behind the handwheel; when the handwheel moves, the slide is dragged along only once the gap is
 // closed, so its travel is clamp(previous travel, w, w + b) for handwheel position w (in travel
 // mm). At the zero readings each slide has last moved with its reading increasing (travel = w).
+// Setup::approach says how the readings set before each pass are reached: Approach::InOrder
+// dials them in pass order (the rule above, so a slide that reverses lags), Approach::TakeUp
+// winds back past each and comes up to it (travel = w). In both, the slide that moves during a
+// pass follows the rule above from its start reading.
 #include "swarf/sim/cut.h"
 #include "swarf/sim/scene.h"
 

@@ -98,6 +98,12 @@ enum class CompoundScale { FromAxis, FromCrossSlide };
 /// Whether a cross-slide reading is a change of diameter or of radius.
 enum class DialMode { Diameter, Radius };
 
+/// How a slide is brought to a reading it is set to before a pass (scenes/README.md, [setup]).
+enum class Approach {
+    InOrder,  ///< dialled straight to each reading in pass order: backlash shows on a reversal
+    TakeUp,   ///< wound back past each reading and brought up to it: the slide sits at it
+};
+
 /// One handwheel slide.
 struct Slide {
     double mmPerDivision = 0.02;   ///< one dial division, mm (on diameter for a diameter dial)
@@ -120,6 +126,7 @@ struct Setup {
     double zeroDiameterMm = 0;              ///< diameter at which the cross-slide reads zero
     double zeroZMm = 0;                     ///< z at which the saddle reads zero
     std::optional<double> spindleRpm;       ///< for the sheet only
+    Approach approach = Approach::InOrder;  ///< how slides are set before each pass
     SourceLoc where;
 
     /// The compound's true angle from the spindle axis, rad (reading converted, error added).
