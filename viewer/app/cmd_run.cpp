@@ -169,15 +169,20 @@ void registerRun(CLI::App& app, int& exitCode) {
         if (*reference) {
             // The solid modeller's own cut, independent of the kernel: slow, for checking.
             const geometry::ReferenceResult ref = geometry::referenceCut(s, result.moves);
-            const double rel = (ref.volumeMm3 - result.asCutVolumeMm3) /
-                               std::max(1e-12, ref.volumeMm3);
+            // The kernel's profile stops past the tool's reach; the reference solid runs to the
+            // jaws. Add the untouched bar between, so both volumes cover the same stick-out.
+            double kernelVolume = result.asCutVolumeMm3;
+            const double zEnd = result.asCut.zAt(result.asCut.radiusMm.size() - 1);
+            const double rBar = 0.5 * s.stock.diameterMm;
+            if (s.stock.jawZMm() > zEnd) kernelVolume += kPi * rBar * rBar * (s.stock.jawZMm() - zEnd);
+            const double rel = (ref.volumeMm3 - kernelVolume) / std::max(1e-12, ref.volumeMm3);
             double gaugeDiff = 0;
             if (auto rr = ref.asCut.radiusAtZ(result.gaugeZMm))
                 gaugeDiff = 2.0 * *rr - result.gaugeAsCutDiameterMm;
             referenceNote = fmt::format(
                 "reference path (solid modeller): as-cut volume {:.3f} mm³ vs kernel {:.3f} mm³ "
                 "({:+.2e} relative); gauge diameter differs by {:+.3f} µm",
-                ref.volumeMm3, result.asCutVolumeMm3, rel, gaugeDiff * 1000.0);
+                ref.volumeMm3, kernelVolume, rel, gaugeDiff * 1000.0);
         }
 
         printSummary(s, result);
