@@ -36,10 +36,13 @@ Census census(const viewer::Image& img) {
             const unsigned char* p = img.at(x, y);
             const int r = p[0], g = p[1], b = p[2];
             c.total += 1;
-            if (r - b > 40) c.red += 1;
-            else if (b - r > 40) c.blue += 1;
+            if (r - b > 40)
+                c.red += 1;
+            else if (b - r > 40)
+                c.blue += 1;
             // grey, and darker than the background (247, 247, 242)
-            else if (std::abs(r - b) <= 20 && std::abs(r - g) <= 20 && r < 236) c.neutralPart += 1;
+            else if (std::abs(r - b) <= 20 && std::abs(r - g) <= 20 && r < 236)
+                c.neutralPart += 1;
         }
     c.red /= c.total;
     c.blue /= c.total;
@@ -52,7 +55,8 @@ int distinctColours(const viewer::Image& img) {
     std::vector<bool> seen(1 << 15, false);
     int n = 0;
     for (std::size_t i = 0; i + 2 < img.rgb.size(); i += 3) {
-        const int key = (img.rgb[i] >> 3) << 10 | (img.rgb[i + 1] >> 3) << 5 | (img.rgb[i + 2] >> 3);
+        const int key =
+            (img.rgb[i] >> 3) << 10 | (img.rgb[i + 1] >> 3) << 5 | (img.rgb[i + 2] >> 3);
         if (!seen[static_cast<std::size_t>(key)]) {
             seen[static_cast<std::size_t>(key)] = true;
             ++n;
@@ -66,7 +70,8 @@ int distinctColours(const viewer::Image& img) {
 TEST_CASE("snapshots of a part with metal left on", "[viewer][snapshots]") {
     const Scene s = test::syntheticScene(3);
     // 0.1 mm left on radially after the last pass: four times the ±0.025 mm radial band.
-    const CutResult r = test::syntheticResult(s, [](int k) { return k == 2 ? 0.1 : 1.0 - 0.4 * k; });
+    const CutResult r =
+        test::syntheticResult(s, [](int k) { return k == 2 ? 0.1 : 1.0 - 0.4 * k; });
     REQUIRE_FALSE(r.withinTolerance);
     viewer::SnapshotOptions o;
     o.widthPx = 640;
@@ -78,8 +83,9 @@ TEST_CASE("snapshots of a part with metal left on", "[viewer][snapshots]") {
         CHECK_FALSE(fs::exists(f + ".tmp"));
         const auto img = viewer::readPng(f);
         CHECK(img.widthPx == 640);
-        CHECK(img.heightPx == (f == rep.partPng || f == rep.conePng ? 480 : 240));
-        CHECK(distinctColours(img) > 20);  // not blank
+        CHECK(img.heightPx ==
+              (f == rep.partPng || f == rep.conePng || f == rep.marksPng ? 480 : 240));
+        CHECK(distinctColours(img) > 20); // not blank
     }
     // The cone close-up is mostly the warm (left-on) side of the map.
     const Census c = census(viewer::readPng(rep.conePng));
@@ -88,7 +94,8 @@ TEST_CASE("snapshots of a part with metal left on", "[viewer][snapshots]") {
     CHECK(c.blue < 0.02);
 }
 
-TEST_CASE("snapshots of a part within tolerance carry the near-zero colour", "[viewer][snapshots]") {
+TEST_CASE("snapshots of a part within tolerance carry the near-zero colour",
+          "[viewer][snapshots]") {
     const Scene s = test::syntheticScene(3);
     // Finished 2 µm above the drawing with ±1 µm feed ripple: well inside ±25 µm.
     const CutResult r = test::syntheticResult(

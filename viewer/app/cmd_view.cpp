@@ -6,6 +6,7 @@
 #include "swarf/viewer/display.h"
 #include "swarf/viewer/viewer.h"
 
+#include <cstdio>
 #include <cstdlib>
 #include <memory>
 #include <string>
@@ -19,6 +20,7 @@ void registerView(CLI::App& app, int& exitCode) {
     struct Args {
         std::string scene;
         std::string screenshot;
+        std::string size;
         viewer::ViewerOptions options;
     };
     auto args = std::make_shared<Args>();
@@ -30,9 +32,25 @@ void registerView(CLI::App& app, int& exitCode) {
     cmd->add_option("--at", args->options.startPosition,
                     "Open at this point of the plan: 0 before the first pass, k after pass k, "
                     "k.5 half way through pass k+1 (default: the finished part)");
+    cmd->add_option("--size", args->size,
+                    "Window size in pixels, WIDTHxHEIGHT (default 1280x800; larger windows draw "
+                    "more slowly with software OpenGL)")
+        ->check([](const std::string& v) -> std::string {
+            int w = 0, h = 0;
+            char tail = 0;
+            if (std::sscanf(v.c_str(), "%dx%d%c", &w, &h, &tail) != 2 || w < 320 || h < 240 ||
+                w > 8192 || h > 8192)
+                return "expected WIDTHxHEIGHT in pixels, each from 320x240 to 8192x8192, e.g. "
+                       "1600x1000; got '" +
+                       v + "'";
+            return "";
+        });
     cmd->add_option("--screenshot", args->screenshot,
                     "Render the window once off screen into this PNG and exit (no window)");
     cmd->callback([args, &exitCode] {
+        if (!args->size.empty())
+            std::sscanf(args->size.c_str(), "%dx%d", &args->options.widthPx,
+                        &args->options.heightPx);
         const Scene scene = io::readScene(args->scene);
         const CutResult result = simulate(scene);
         if (!args->screenshot.empty()) {
@@ -46,9 +64,10 @@ void registerView(CLI::App& app, int& exitCode) {
         }
         const char* display = std::getenv("DISPLAY");
         if (!display || !*display)
-            throw RenderError("'swarf view' needs a screen and DISPLAY is not set; "
-                              "'swarf run' writes the pictures and report.html without one, and "
-                              "'swarf view SCENE --screenshot FILE.png' renders the window to a file");
+            throw RenderError(
+                "'swarf view' needs a screen and DISPLAY is not set; "
+                "'swarf run' writes the pictures and report.html without one, and "
+                "'swarf view SCENE --screenshot FILE.png' renders the window to a file");
         viewer::runViewer(scene, result, args->options);
         exitCode = kExitOk;
     });

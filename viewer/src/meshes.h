@@ -6,6 +6,7 @@
 // Z = height above the spindle axis.
 #include "swarf/sim/cut.h"
 #include "swarf/sim/scene.h"
+#include "swarf/viewer/trace.h"
 
 #include <vtkPolyData.h>
 #include <vtkSmartPointer.h>
@@ -14,23 +15,24 @@
 
 namespace swarf::viewer::detail {
 
-/// Rows of a profile to draw: sample indices i in [first, last] with stride, so that at most
-/// maxRows rows are drawn; the ends are always kept.
-std::vector<std::size_t> pickRows(std::size_t first, std::size_t last, std::size_t maxRows);
-
 /// Surface of revolution of `profile` over the given rows, φ from phi0 over phiSpan (rad) in
 /// nPhi steps. Point scalars "deviation" (display units, NaN off the drawing) if given.
 vtkSmartPointer<vtkPolyData> revolve(const Profile& profile, const std::vector<std::size_t>& rows,
                                      const std::vector<double>* scalars, int nPhi, double phi0,
                                      double phiSpan);
 
-/// The 3D surface with feed marks from a height map (rows subsampled to maxRows, within
-/// [zFromMm, zToMm]) and columns (to maxCols), with deviation scalars from the nominal profile
-/// (display-unit factor).
-vtkSmartPointer<vtkPolyData> heightMapSurface(const HeightMap& map, const Profile& nominal,
-                                              double zFromMm, double zToMm, std::size_t maxRows,
-                                              double phi0, double phiSpan, double toDisplay,
-                                              int maxCols);
+/// The finished surface with its feed marks over [zFromMm, zToMm], the whole way round: rows of
+/// the height map evenly spread in z (at most maxRows); every column of the map within
+/// ±fineHalfWidthRad of φ = fineCentreRad (where the close-up looks), every `coarseStride`-th
+/// elsewhere (the rest of the ring, off the picture until the view is turned).
+/// Each point stands reliefFactor times its true height above the smooth swept surface `smooth`
+/// (the exact profile), so that marks a micrometre high can be seen; its scalar is the true
+/// signed deviation normal to the drawing in display units (mm times toDisplay), NaN off it.
+vtkSmartPointer<vtkPolyData> feedMarkPatch(const HeightMap& map, const Profile& smooth,
+                                           const Part& part, double zFromMm, double zToMm,
+                                           std::size_t maxRows, double fineCentreRad,
+                                           double fineHalfWidthRad, int coarseStride,
+                                           double reliefFactor, double toDisplay);
 
 /// The two faces of a cut-away wedge at φ = a and φ = b: strips between innerMm[i] and
 /// outerMm[i] (radii on the samples of `grid`) where both are numbers and outer > inner.
@@ -41,9 +43,14 @@ vtkSmartPointer<vtkPolyData> wedgeFaces(const Profile& grid, const std::vector<d
 /// The stock outline: its silhouette in the horizontal plane and circles at both ends.
 vtkSmartPointer<vtkPolyData> stockOutline(const Stock& stock);
 
+/// Three chuck jaws gripping the bar behind the jaws' face (z ≥ Stock::jawZMm()), at 90°, 210°
+/// and 330° round the axis: plain blocks, sized from the bar for orientation only.
+vtkSmartPointer<vtkPolyData> chuckJaws(const Stock& stock);
+
 /// The insert: its outline (z, x) about the nose centre, extruded downward by its thickness
-/// from the rake face at the tip height, placed with the imaginary tip at tipZX.
-vtkSmartPointer<vtkPolyData> insertSolid(const Tool& tool, const Eigen::Vector2d& tipZX);
+/// from the rake face at the tip height, placed with the imaginary tip at the origin (move the
+/// actor to the tip's (z, x)).
+vtkSmartPointer<vtkPolyData> insertSolid(const Tool& tool);
 
 /// Tool paths: one polyline piece per move at the tip height, cell scalar 0 done, 1 current,
 /// 2 to come (relative to `pass`, `passFraction`).

@@ -6,6 +6,7 @@
 #include "swarf/sim/scene.h"
 #include "swarf/viewer/colour_map.h"
 #include "swarf/viewer/moment.h"
+#include "swarf/viewer/trace.h"
 
 #include <vtkSmartPointer.h>
 
@@ -20,11 +21,13 @@ namespace swarf::viewer::detail {
 /// Which layers of the 3D view are shown.
 struct Layers {
     bool part = true, ghost = true, leftover = true, stock = true, insert = true, paths = true,
-         scalarBar = true, cutaway = true;
+         scalarBar = true, cutaway = true, jaws = true;
 };
 
-/// Standard camera views of the 3D renderer.
-enum class View { Front, Top, End, Iso, Cone };
+/// Standard camera views of the 3D renderer: the whole part from the operator's side (chuck on
+/// the left), from above, from the tailstock, obliquely; the main cone filling the view; the
+/// close-up of the feed marks at the gauge plane (see setCloseUp).
+enum class View { Front, Top, End, Iso, Cone, CloseUp };
 
 class PartScene {
   public:
@@ -39,16 +42,20 @@ class PartScene {
     const MomentView& moment() const;
     int passCount() const;
 
-    /// Fine mode draws the part's surface at full axial resolution over the main cone only, so
-    /// feed marks show in a close-up; coarse mode draws the whole part with fewer rows.
-    void setFine(bool fine);
+    /// The close-up draws only a short stretch of the cone at the gauge plane (closeUp()), with
+    /// the feed marks of the finished part raised to be seen, and the section and chart follow
+    /// that stretch; otherwise the whole part is drawn from the exact profile, with only as many
+    /// rows as keep its corners and colours true.
+    void setCloseUp(bool on);
+    bool closeUpOn() const;
+    const CloseUp& closeUp() const;
     void setLayers(const Layers& layers);
     const Layers& layers() const;
     void setMagnification(double factor);
     double magnification() const;
 
-    void view(View v);  ///< sets the 3D camera
-    void resetSection();  ///< fits the section camera to the cone
+    void view(View v);   ///< sets the 3D camera
+    void resetSection(); ///< fits the section camera to what it shows
 
     vtkRenderer* main() const;
     vtkRenderer* section() const;
@@ -66,6 +73,10 @@ class PartScene {
     /// The part mesh as handed to VTK, read back along its first meridian: (z, radius) of every
     /// drawn row, mm. For tests: the rendered part's profile.
     std::vector<Eigen::Vector2d> drawnSection() const;
+    /// Number of polygons of the part surface as handed to VTK (benchmarks, tests).
+    std::size_t partPolygons() const;
+    /// The deviation line handed to the section now (tests).
+    const DeviationTrace& sectionTrace() const;
 
   private:
     struct Impl;

@@ -20,11 +20,20 @@ std::string esc(const std::string& s) {
     out.reserve(s.size());
     for (char c : s) {
         switch (c) {
-        case '&': out += "&amp;"; break;
-        case '<': out += "&lt;"; break;
-        case '>': out += "&gt;"; break;
-        case '"': out += "&quot;"; break;
-        default: out += c;
+        case '&':
+            out += "&amp;";
+            break;
+        case '<':
+            out += "&lt;";
+            break;
+        case '>':
+            out += "&gt;";
+            break;
+        case '"':
+            out += "&quot;";
+            break;
+        default:
+            out += c;
         }
     }
     return out;
@@ -32,24 +41,36 @@ std::string esc(const std::string& s) {
 
 const char* findingLabel(FindingKind k) {
     switch (k) {
-    case FindingKind::LeftOn: return "metal left on";
-    case FindingKind::Overcut: return "overcut";
-    case FindingKind::Rubbing: return "rubbing";
-    case FindingKind::JawCrash: return "tool reaches the jaws";
-    case FindingKind::PastStock: return "past the stock";
-    case FindingKind::CompoundTravel: return "compound travel";
-    case FindingKind::DepthOfCut: return "depth of cut";
-    case FindingKind::AirCut: return "cuts nothing";
+    case FindingKind::LeftOn:
+        return "metal left on";
+    case FindingKind::Overcut:
+        return "overcut";
+    case FindingKind::Rubbing:
+        return "rubbing";
+    case FindingKind::JawCrash:
+        return "tool reaches the jaws";
+    case FindingKind::PastStock:
+        return "past the stock";
+    case FindingKind::CompoundTravel:
+        return "compound travel";
+    case FindingKind::DepthOfCut:
+        return "depth of cut";
+    case FindingKind::AirCut:
+        return "cuts nothing";
     }
     return "?";
 }
 
 const char* featureKindName(FeatureKind k) {
     switch (k) {
-    case FeatureKind::Cylinder: return "cylinder";
-    case FeatureKind::Cone: return "cone";
-    case FeatureKind::Chamfer: return "chamfer";
-    case FeatureKind::Face: return "face";
+    case FeatureKind::Cylinder:
+        return "cylinder";
+    case FeatureKind::Cone:
+        return "cone";
+    case FeatureKind::Chamfer:
+        return "chamfer";
+    case FeatureKind::Face:
+        return "face";
     }
     return "?";
 }
@@ -65,7 +86,8 @@ std::pair<double, double> extremes(const std::vector<double>& dev) {
     return {left, over};
 }
 
-const char* kStyle = R"(body{font-family:sans-serif;max-width:1250px;margin:1em auto;padding:0 1em;color:#222}
+const char* kStyle =
+    R"(body{font-family:sans-serif;max-width:1250px;margin:1em auto;padding:0 1em;color:#222}
 h1{font-size:1.6em}h2{font-size:1.25em;border-bottom:1px solid #ccc;margin-top:1.6em}
 table{border-collapse:collapse;margin:.5em 0}td,th{border:1px solid #ccc;padding:.25em .6em;text-align:left;vertical-align:top}
 th{background:#f0f0f0}.num{text-align:right;font-variant-numeric:tabular-nums}
@@ -77,17 +99,21 @@ figcaption{font-size:.9em;color:#444;max-width:600px})";
 
 } // namespace
 
-std::string reportHtml(const Scene& scene, const CutResult& result, const SnapshotReport* pictures) {
+std::string reportHtml(const Scene& scene, const CutResult& result,
+                       const SnapshotReport* pictures) {
     const Units u = scene.units;
     auto len = [&](double mm) { return esc(formatLength(mm, u)); };
     auto small = [&](double mm) { return esc(formatSmallLength(mm, u)); };
     std::string h;
     const std::string title = scene.name.empty() ? scene.file : scene.name;
     h += "<!DOCTYPE html>\n<html lang=\"en\"><head><meta charset=\"utf-8\">\n";
-    h += "<title>swarf report: " + esc(title) + "</title>\n<style>" + std::string(kStyle) + "</style></head><body>\n";
+    h += "<title>swarf report: " + esc(title) + "</title>\n<style>" + std::string(kStyle) +
+         "</style></head><body>\n";
     h += "<h1>swarf report: " + esc(title) + "</h1>\n";
-    if (!scene.description.empty()) h += "<p>" + esc(scene.description) + "</p>\n";
-    if (!scene.file.empty()) h += "<p>Scene file: <code>" + esc(scene.file) + "</code></p>\n";
+    if (!scene.description.empty())
+        h += "<p>" + esc(scene.description) + "</p>\n";
+    if (!scene.file.empty())
+        h += "<p>Scene file: <code>" + esc(scene.file) + "</code></p>\n";
 
     // Verdict.
     h += result.withinTolerance ? "<p class=\"ok\"><b>Verdict: within tolerance.</b>"
@@ -107,32 +133,39 @@ std::string reportHtml(const Scene& scene, const CutResult& result, const Snapsh
     auto row = [&](const std::string& k, const std::string& v) {
         h += "<tr><th>" + esc(k) + "</th><td>" + v + "</td></tr>\n";
     };
-    row("Stock", fmt::format("{} diameter, {} sticking out of the jaws, {}", len(scene.stock.diameterMm),
-                             len(scene.stock.stickOutMm), esc(scene.stock.material)));
+    row("Stock",
+        fmt::format("{} diameter, {} sticking out of the jaws, {}", len(scene.stock.diameterMm),
+                    len(scene.stock.stickOutMm), esc(scene.stock.material)));
     row("Compound set to", esc(formatDms(scene.setup.compoundReadingRad)) +
                                (scene.setup.compoundScale == CompoundScale::FromAxis
                                     ? " on a scale read from the spindle axis"
                                     : " on a scale read from the cross-slide"));
-    row("Cross-slide zero", fmt::format("at {} diameter ({} dial)", len(scene.setup.zeroDiameterMm),
-                                        scene.setup.crossDial == DialMode::Diameter ? "diameter" : "radius"));
+    row("Cross-slide zero",
+        fmt::format("at {} diameter ({} dial)", len(scene.setup.zeroDiameterMm),
+                    scene.setup.crossDial == DialMode::Diameter ? "diameter" : "radius"));
     row("Saddle zero", fmt::format("at z = {} from the datum face", len(scene.setup.zeroZMm)));
     {
         std::string tool = fmt::format("nose radius {}", len(scene.tool.noseRadiusMm));
-        if (scene.tool.shape) tool = fmt::format("shape {}, ", scene.tool.shape) + tool;
-        tool += fmt::format(", tip {} centre", scene.tool.tipHeightMm == 0
-                                                  ? std::string("on")
-                                                  : len(std::fabs(scene.tool.tipHeightMm)) +
-                                                        (scene.tool.tipHeightMm > 0 ? " above" : " below"));
+        if (scene.tool.shape)
+            tool = fmt::format("shape {}, ", scene.tool.shape) + tool;
+        tool += fmt::format(", tip {} centre",
+                            scene.tool.tipHeightMm == 0
+                                ? std::string("on")
+                                : len(std::fabs(scene.tool.tipHeightMm)) +
+                                      (scene.tool.tipHeightMm > 0 ? " above" : " below"));
         row("Insert", tool);
     }
-    if (scene.setup.spindleRpm) row("Spindle", fmt::format("{:.0f} rev/min", *scene.setup.spindleRpm));
-    row("Gauge plane", fmt::format("z = {}: drawing {} diameter, as cut {} (difference {})",
-                                   len(result.gaugeZMm), len(result.gaugeNominalDiameterMm),
-                                   len(result.gaugeAsCutDiameterMm),
-                                   small(result.gaugeAsCutDiameterMm - result.gaugeNominalDiameterMm)));
-    row("Finish (theoretical)", fmt::format("Rt {:.2f} µm, Ra {:.2f} µm", result.rtUm, result.raUm));
-    row("Volumes", fmt::format("stock {:.0f} mm³, as cut {:.0f} mm³, removed {:.0f} mm³",
-                               result.stockVolumeMm3, result.asCutVolumeMm3, result.removedVolumeMm3));
+    if (scene.setup.spindleRpm)
+        row("Spindle", fmt::format("{:.0f} rev/min", *scene.setup.spindleRpm));
+    row("Gauge plane",
+        fmt::format("z = {}: drawing {} diameter, as cut {} (difference {})", len(result.gaugeZMm),
+                    len(result.gaugeNominalDiameterMm), len(result.gaugeAsCutDiameterMm),
+                    small(result.gaugeAsCutDiameterMm - result.gaugeNominalDiameterMm)));
+    row("Finish (theoretical)",
+        fmt::format("Rt {:.2f} µm, Ra {:.2f} µm", result.rtUm, result.raUm));
+    row("Volumes",
+        fmt::format("stock {:.0f} mm³, as cut {:.0f} mm³, removed {:.0f} mm³",
+                    result.stockVolumeMm3, result.asCutVolumeMm3, result.removedVolumeMm3));
     h += "</table>\n";
 
     // Features against the drawing.
@@ -140,16 +173,20 @@ std::string reportHtml(const Scene& scene, const CutResult& result, const Snapsh
         h += "<h2>Against the drawing</h2>\n<table><tr><th>Feature</th><th>Tolerance</th>"
              "<th>Most left on</th><th>Most overcut</th><th>As cut</th><th>Result</th></tr>\n";
         for (const FeatureReport& fr : result.features) {
-            if (fr.feature < 0 || static_cast<std::size_t>(fr.feature) >= scene.part.features.size()) continue;
+            if (fr.feature < 0 ||
+                static_cast<std::size_t>(fr.feature) >= scene.part.features.size())
+                continue;
             const Feature& f = scene.part.features[static_cast<std::size_t>(fr.feature)];
             std::string asCut = fmt::format("diameter {}", len(fr.asCutDiameterMm));
             if (f.kind == FeatureKind::Cone || f.kind == FeatureKind::Chamfer)
-                asCut += fmt::format(", half angle {} (drawing {})", esc(formatDms(fr.asCutHalfAngleRad)),
+                asCut += fmt::format(", half angle {} (drawing {})",
+                                     esc(formatDms(fr.asCutHalfAngleRad)),
                                      esc(formatDms(f.cone.halfAngleRad)));
             h += fmt::format("<tr><td>{} ({})</td><td>&plusmn;{}</td><td class=\"num\">{}</td><td "
                              "class=\"num\">{}</td><td>{}</td><td>{}</td></tr>\n",
-                             esc(f.name), featureKindName(f.kind), len(f.toleranceMm), small(fr.maxLeftOnMm),
-                             small(fr.maxOvercutMm), asCut, fr.withinTolerance ? "within" : "<b>outside</b>");
+                             esc(f.name), featureKindName(f.kind), len(f.toleranceMm),
+                             small(fr.maxLeftOnMm), small(fr.maxOvercutMm), asCut,
+                             fr.withinTolerance ? "within" : "<b>outside</b>");
         }
         h += "</table>\n";
     }
@@ -161,9 +198,10 @@ std::string reportHtml(const Scene& scene, const CutResult& result, const Snapsh
     } else {
         h += "<table><tr><th>What</th><th>Pass</th><th>Where</th><th>Details</th></tr>\n";
         for (const Finding& f : result.findings)
-            h += fmt::format("<tr><td>{}</td><td>{}</td><td>z = {}</td><td>{}</td></tr>\n", findingLabel(f.kind),
-                             f.pass >= 0 ? std::to_string(f.pass + 1) : std::string("-"), len(f.zMm),
-                             esc(f.message));
+            h += fmt::format("<tr><td>{}</td><td>{}</td><td>z = {}</td><td>{}</td></tr>\n",
+                             findingLabel(f.kind),
+                             f.pass >= 0 ? std::to_string(f.pass + 1) : std::string("-"),
+                             len(f.zMm), esc(f.message));
         h += "</table>\n";
     }
 
@@ -172,24 +210,34 @@ std::string reportHtml(const Scene& scene, const CutResult& result, const Snapsh
         namespace fs = std::filesystem;
         h += "<h2>Pictures</h2>\n";
         const std::pair<std::string, const char*> figs[] = {
-            {pictures->partPng, "The part as cut, coloured by deviation from the drawing (red: metal "
-                                "left on, blue: overcut, grey: within a small fraction of the tolerance). "
-                                "Amber in the cut-away: metal above the drawing."},
-            {pictures->conePng, "The cone close up: the same colours; the rings are the feed marks."},
+            {pictures->partPng,
+             "The part as cut, coloured by deviation from the drawing (red: metal "
+             "left on, blue: overcut, grey: within a small fraction of the tolerance). "
+             "Amber in the cut-away: metal above the drawing."},
+            {pictures->conePng, "The cone filling the picture: the same colours."},
             {pictures->sectionPng, "Section through the axis with the deviation magnified."},
-            {pictures->chartPng, "Deviation along the cone with the tolerance lines."}};
+            {pictures->chartPng, "Deviation along the cone with the tolerance lines."},
+            {pictures->marksPng,
+             "Close-up at the gauge plane: the feed marks of the finishing pass, "
+             "drawn higher than they are (the factor is written on the picture); "
+             "the colours are true to scale."},
+            {pictures->marksSectionPng,
+             "Section of the same stretch, deviation magnified: the feed "
+             "marks on the operator's side."}};
         for (const auto& [path, caption] : figs) {
-            if (path.empty()) continue;
+            if (path.empty())
+                continue;
             const std::string name = fs::path(path).filename().string();
-            h += "<figure><img src=\"" + esc(name) + "\" alt=\"" + esc(caption) + "\"><figcaption>" +
-                 esc(caption) + "</figcaption></figure>\n";
+            h += "<figure><img src=\"" + esc(name) + "\" alt=\"" + esc(caption) +
+                 "\"><figcaption>" + esc(caption) + "</figcaption></figure>\n";
         }
     }
 
     // Per-pass table.
-    h += "<h2>Passes</h2>\n<table><tr><th>#</th><th>Kind</th><th>What to do</th><th>Cross-slide</th>"
-         "<th>Compound</th><th>Saddle</th><th>Feed /rev</th><th>After the pass: most left on</th>"
-         "<th>most overcut</th><th>Findings</th></tr>\n";
+    h +=
+        "<h2>Passes</h2>\n<table><tr><th>#</th><th>Kind</th><th>What to do</th><th>Cross-slide</th>"
+        "<th>Compound</th><th>Saddle</th><th>Feed /rev</th><th>After the pass: most left on</th>"
+        "<th>most overcut</th><th>Findings</th></tr>\n";
     for (std::size_t k = 0; k < scene.plan.passes.size(); ++k) {
         const Pass& p = scene.plan.passes[k];
         auto reading = [&](PassKind moving, double fixed) {
@@ -203,17 +251,21 @@ std::string reportHtml(const Scene& scene, const CutResult& result, const Snapsh
         }
         std::string finds;
         for (const Finding& f : result.findings)
-            if (f.pass == static_cast<int>(k)) finds += std::string(finds.empty() ? "" : "; ") + findingLabel(f.kind);
-        h += fmt::format("<tr><td class=\"num\">{}</td><td>{}</td><td>{}</td><td>{}</td><td>{}</td><td>{}</td>"
-                         "<td class=\"num\">{}</td><td class=\"num\">{}</td><td class=\"num\">{}</td><td>{}</td></tr>\n",
-                         k + 1, passKindName(p.kind), esc(p.note), reading(PassKind::CrossSlide, p.crossMm),
-                         reading(PassKind::Compound, p.compoundMm), reading(PassKind::Saddle, p.saddleMm),
-                         len(p.feedMmPerRev), after, over, esc(finds));
+            if (f.pass == static_cast<int>(k))
+                finds += std::string(finds.empty() ? "" : "; ") + findingLabel(f.kind);
+        h += fmt::format(
+            "<tr><td class=\"num\">{}</td><td>{}</td><td>{}</td><td>{}</td><td>{}</td><td>{}</td>"
+            "<td class=\"num\">{}</td><td class=\"num\">{}</td><td "
+            "class=\"num\">{}</td><td>{}</td></tr>\n",
+            k + 1, passKindName(p.kind), esc(p.note), reading(PassKind::CrossSlide, p.crossMm),
+            reading(PassKind::Compound, p.compoundMm), reading(PassKind::Saddle, p.saddleMm),
+            len(p.feedMmPerRev), after, over, esc(finds));
     }
     h += "</table>\n<p>Dial readings are in " + std::string(unitName(u)) +
          " of dial travel (the cross-slide on " +
          (scene.setup.crossDial == DialMode::Diameter ? "diameter" : "radius") +
-         "). Deviations are measured normal to the drawn surface: + metal left on, &minus; overcut.</p>\n";
+         "). Deviations are measured normal to the drawn surface: + metal left on, &minus; "
+         "overcut.</p>\n";
     h += "<p style=\"color:#666;font-size:.9em\">Made by swarf. The simulation does not model "
          "forces, deflection or chatter.</p>\n</body></html>\n";
     return h;

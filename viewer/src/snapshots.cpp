@@ -30,7 +30,8 @@ void shoot(vtkRenderer* renderer, int w, int h, const std::string& path,
     const double saved[4] = {vp[0], vp[1], vp[2], vp[3]};
     renderer->SetViewport(0, 0, 1, 1);
     window->AddRenderer(renderer);
-    if (beforeRender) beforeRender();
+    if (beforeRender)
+        beforeRender();
     detail::writeWindowPng(window, path);
     window->RemoveRenderer(renderer);
     renderer->SetViewport(saved[0], saved[1], saved[2], saved[3]);
@@ -52,23 +53,32 @@ SnapshotReport renderSnapshots(const Scene& scene, const CutResult& result,
     rep.conePng = (fs::path(outDir) / "cone.png").string();
     rep.sectionPng = (fs::path(outDir) / "section.png").string();
     rep.chartPng = (fs::path(outDir) / "chart.png").string();
+    rep.marksPng = (fs::path(outDir) / "marks.png").string();
+    rep.marksSectionPng = (fs::path(outDir) / "marks-section.png").string();
 
     detail::PartScene part(scene, result, options.magnification);
     part.setTextScale(h);
     // The whole part, oblique, with the cut-away, stock outline, insert and paths.
     shoot(part.main(), w, h, rep.partPng, [&] { part.view(detail::View::Iso); });
 
-    // The cone close up at full resolution: the deviation colours and the feed marks, nothing
-    // in front of them.
+    // The cone filling the picture: the deviation colours, nothing in front of them.
     detail::Layers close = part.layers();
     close.cutaway = false;
     close.ghost = false;
     close.paths = false;
     close.stock = false;
     close.insert = false;
+    close.jaws = false;
     part.setLayers(close);
-    part.setFine(true);
     shoot(part.main(), w, h, rep.conePng, [&] { part.view(detail::View::Cone); });
+
+    // The feed marks at the gauge plane, raised to be seen; the section and chart of the same
+    // stretch.
+    part.setCloseUp(true);
+    shoot(part.main(), w, h, rep.marksPng, [&] { part.view(detail::View::CloseUp); });
+    shoot(part.section(), w, std::max(64, h / 2), rep.marksSectionPng,
+          [&] { part.resetSection(); });
+    part.setCloseUp(false);
 
     shoot(part.section(), w, std::max(64, h / 2), rep.sectionPng, [&] { part.resetSection(); });
     shoot(part.chart(), w, std::max(64, h / 2), rep.chartPng);

@@ -46,7 +46,8 @@ struct ViewerSession::Impl {
     int snapshotCount = 0;
 
     void syncSlider() {
-        if (sliderRep) sliderRep->SetValue(part->moment().position);
+        if (sliderRep)
+            sliderRep->SetValue(part->moment().position);
     }
     void go(double position) {
         part->setPosition(position);
@@ -62,7 +63,8 @@ class SwarfStyle : public vtkInteractorStyleTrackballCamera {
     vtkTypeMacro(SwarfStyle, vtkInteractorStyleTrackballCamera);
     std::function<void(const std::string&, bool)> onKey;
     void OnKeyPress() override {
-        if (!onKey) return;
+        if (!onKey)
+            return;
         vtkRenderWindowInteractor* rwi = this->Interactor;
         const std::string key = rwi->GetKeySym() ? rwi->GetKeySym() : "";
         onKey(key, rwi->GetShiftKey() != 0);
@@ -80,40 +82,59 @@ void ViewerSession::Impl::onKey(const std::string& key, bool shift) {
     detail::Layers layers = part->layers();
     bool layersChanged = false;
     std::string status;
-    if (key == "Right") go(std::min<double>(n, std::floor(pos + 1e-9) + 1));
-    else if (key == "Left") go(std::max(0.0, std::ceil(pos - 1e-9) - 1));
-    else if (key == "Up") go(std::min<double>(n, pos + 0.05));
-    else if (key == "Down") go(std::max(0.0, pos - 0.05));
-    else if (key == "Home") go(0);
-    else if (key == "End") go(n);
-    else if (key == "1") part->view(View::Front);
-    else if (key == "2") part->view(View::Top);
-    else if (key == "3") part->view(View::End);
-    else if (key == "4") part->view(View::Iso);
-    else if (key == "c") {
-        part->setFine(true);
-        part->view(View::Cone);
+    if (key == "Right")
+        go(std::min<double>(n, std::floor(pos + 1e-9) + 1));
+    else if (key == "Left")
+        go(std::max(0.0, std::ceil(pos - 1e-9) - 1));
+    else if (key == "Up")
+        go(std::min<double>(n, pos + 0.05));
+    else if (key == "Down")
+        go(std::max(0.0, pos - 0.05));
+    else if (key == "Home")
+        go(0);
+    else if (key == "End")
+        go(n);
+    else if (key == "1" || key == "2" || key == "3" || key == "4" || key == "5") {
+        part->setCloseUp(false);
+        static const View views[] = {View::Front, View::Top, View::End, View::Iso, View::Cone};
+        part->view(views[key[0] - '1']);
+    } else if (key == "c") {
+        part->setCloseUp(true);
+        part->view(View::CloseUp);
     } else if (key == "r") {
-        part->setFine(false);
+        part->setCloseUp(false);
         part->view(View::Iso);
         part->resetSection();
-    } else if (key == "x") layers.cutaway = !layers.cutaway, layersChanged = true;
-    else if (key == "g") layers.ghost = !layers.ghost, layersChanged = true;
-    else if (key == "l") layers.leftover = !layers.leftover, layersChanged = true;
-    else if (key == "o") layers.stock = !layers.stock, layersChanged = true;
-    else if (key == "t") layers.insert = !layers.insert, layersChanged = true;
-    else if (key == "p") layers.paths = !layers.paths, layersChanged = true;
-    else if (key == "b") layers.scalarBar = !layers.scalarBar, layersChanged = true;
+    } else if (key == "x")
+        layers.cutaway = !layers.cutaway, layersChanged = true;
+    else if (key == "g")
+        layers.ghost = !layers.ghost, layersChanged = true;
+    else if (key == "l")
+        layers.leftover = !layers.leftover, layersChanged = true;
+    else if (key == "o")
+        layers.stock = !layers.stock, layersChanged = true;
+    else if (key == "j")
+        layers.jaws = !layers.jaws, layersChanged = true;
+    else if (key == "t")
+        layers.insert = !layers.insert, layersChanged = true;
+    else if (key == "p")
+        layers.paths = !layers.paths, layersChanged = true;
+    else if (key == "b")
+        layers.scalarBar = !layers.scalarBar, layersChanged = true;
     else if (key == "m" || key == "M") {
         static const double steps[] = {10, 20, 50, 100, 200, 500, 1000, 2000, 5000};
         const double cur = part->magnification();
         double next = cur;
         if (key == "m" && !shift) {
             for (double s : steps)
-                if (s > cur + 1e-9) { next = s; break; }
+                if (s > cur + 1e-9) {
+                    next = s;
+                    break;
+                }
         } else {
             for (double s : steps)
-                if (s < cur - 1e-9) next = s;
+                if (s < cur - 1e-9)
+                    next = s;
         }
         part->setMagnification(next);
         status = fmt::format("section magnification x{:g}", next);
@@ -128,16 +149,20 @@ void ViewerSession::Impl::onKey(const std::string& key, bool shift) {
         } catch (const Error& e) {
             status = e.what();
         }
-    } else if (key == "h" || key == "question" || key == "F1") part->setHelpVisible(!part->helpVisible());
+    } else if (key == "h" || key == "question" || key == "F1")
+        part->setHelpVisible(!part->helpVisible());
     else if (key == "q" || key == "Escape") {
         interactor->TerminateApp();
         return;
-    } else return;
-    if (layersChanged) part->setLayers(layers);
+    } else
+        return;
+    if (layersChanged)
+        part->setLayers(layers);
     part->setStatus(status);
 }
 
-ViewerSession::ViewerSession(const Scene& scene, const CutResult& result, const ViewerOptions& options)
+ViewerSession::ViewerSession(const Scene& scene, const CutResult& result,
+                             const ViewerOptions& options)
     : impl_(std::make_unique<Impl>()) {
     ensureDisplay();
     Impl& d = *impl_;
@@ -146,14 +171,22 @@ ViewerSession::ViewerSession(const Scene& scene, const CutResult& result, const 
     d.window = vtkSmartPointer<vtkRenderWindow>::New();
     d.window->SetDisplayId(sharedDisplayConnection());
     d.window->SetSize(std::max(options.widthPx, 320), std::max(options.heightPx, 240));
-    d.window->SetWindowName(("swarf view: " + (scene.name.empty() ? scene.file : scene.name)).c_str());
-    if (options.offScreen) d.window->SetOffScreenRendering(1);
+    d.window->SetWindowName(
+        ("swarf view: " + (scene.name.empty() ? scene.file : scene.name)).c_str());
+    if (options.offScreen)
+        d.window->SetOffScreenRendering(1);
+    // No multisampling: with software OpenGL it triples the cost of every frame (measured in
+    // swarf_bench); the snapshots, which are not interactive, keep it.
+    d.window->SetMultiSamples(0);
+
     d.part->main()->SetViewport(0, kSplitY, 1, 1);
     d.part->section()->SetViewport(0, 0, 0.5, kSplitY);
     d.part->chart()->SetViewport(0.5, 0, 1, kSplitY);
     d.window->AddRenderer(d.part->main());
     d.window->AddRenderer(d.part->section());
     d.window->AddRenderer(d.part->chart());
+    // The views fit their pictures to the viewports' shapes, known only now.
+    d.part->view(detail::View::Iso);
 
     d.interactor = vtkSmartPointer<vtkRenderWindowInteractor>::New();
     d.interactor->SetRenderWindow(d.window);
@@ -207,7 +240,8 @@ ViewerSession::ViewerSession(const Scene& scene, const CutResult& result, const 
     d.slider->AddObserver(vtkCommand::InteractionEvent, onSlide);
     d.slider->EnabledOn();
 
-    if (options.startPosition >= 0) d.go(options.startPosition);
+    if (options.startPosition >= 0)
+        d.go(options.startPosition);
     d.window->Render();
     d.sliderRep->Modified();
     d.window->Render();
@@ -215,27 +249,40 @@ ViewerSession::ViewerSession(const Scene& scene, const CutResult& result, const 
 }
 
 ViewerSession::~ViewerSession() {
-    if (impl_ && impl_->slider) impl_->slider->EnabledOff();
+    if (impl_ && impl_->slider)
+        impl_->slider->EnabledOff();
 }
 
-void ViewerSession::setPosition(double position) { impl_->go(position); }
-const MomentView& ViewerSession::moment() const { return impl_->part->moment(); }
-int ViewerSession::passCount() const { return impl_->part->passCount(); }
+void ViewerSession::setPosition(double position) {
+    impl_->go(position);
+}
+const MomentView& ViewerSession::moment() const {
+    return impl_->part->moment();
+}
+int ViewerSession::passCount() const {
+    return impl_->part->passCount();
+}
 void ViewerSession::pressKey(const std::string& key) {
     const bool shift = key.size() == 1 && std::isupper(static_cast<unsigned char>(key[0]));
     impl_->onKey(key, shift);
 }
 
-void ViewerSession::render() { impl_->window->Render(); }
+void ViewerSession::render() {
+    impl_->window->Render();
+}
 
 void ViewerSession::orbit(double degrees) {
     impl_->part->main()->GetActiveCamera()->Azimuth(degrees);
     impl_->part->main()->ResetCameraClippingRange();
 }
 
-void ViewerSession::saveSnapshot(const std::string& path) { detail::writeWindowPng(impl_->window, path); }
+void ViewerSession::saveSnapshot(const std::string& path) {
+    detail::writeWindowPng(impl_->window, path);
+}
 
-std::vector<Eigen::Vector2d> ViewerSession::drawnSection() const { return impl_->part->drawnSection(); }
+std::vector<Eigen::Vector2d> ViewerSession::drawnSection() const {
+    return impl_->part->drawnSection();
+}
 
 void ViewerSession::run() {
     impl_->window->Render();

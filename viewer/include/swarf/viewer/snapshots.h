@@ -11,23 +11,28 @@ namespace swarf::viewer {
 
 /// What to render.
 struct SnapshotOptions {
-    int widthPx = 1200;          ///< size of each picture, pixels (≥ 64)
+    int widthPx = 1200; ///< size of each picture, pixels (≥ 64)
     int heightPx = 800;
-    double magnification = 200;  ///< deviation magnification of the section picture
+    double magnification = 200; ///< deviation magnification of the section picture
 };
 
 /// The files written (full paths) and their size.
 struct SnapshotReport {
-    std::string partPng;     ///< the whole part, oblique, with the stock outline and tool paths
-    std::string conePng;     ///< the cone close up, feed marks visible
-    std::string sectionPng;  ///< the half profile with the deviation magnified
-    std::string chartPng;    ///< deviation along the cone
-    int widthPx = 0, heightPx = 0;
-    /// All four paths, in the order above.
-    std::vector<std::string> files() const { return {partPng, conePng, sectionPng, chartPng}; }
+    std::string partPng;         ///< the whole part, oblique, with the stock outline and tool paths
+    std::string conePng;         ///< the main cone filling the picture, coloured by deviation
+    std::string sectionPng;      ///< the half profile with the deviation magnified
+    std::string chartPng;        ///< deviation along the cone
+    std::string marksPng;        ///< close-up at the gauge plane: the feed marks, raised to be seen
+    std::string marksSectionPng; ///< the section of that stretch: the feed marks magnified
+    int widthPx = 0, heightPx = 0; ///< size of part, cone and marks; section, chart half as high
+    /// All six paths, in the order above.
+    std::vector<std::string> files() const {
+        return {partPng, conePng, sectionPng, chartPng, marksPng, marksSectionPng};
+    }
 };
 
-/// Renders the finished part into outDir as part.png, cone.png, section.png and chart.png
+/// Renders the finished part into outDir as part.png, cone.png, section.png, chart.png,
+/// marks.png and marks-section.png
 /// (each written atomically: name.tmp, then rename). Creates outDir if needed. Calls
 /// ensureDisplay(). Throws RenderError if nothing can be rendered, OutputError if a file
 /// cannot be written.
