@@ -13,6 +13,7 @@
 #include <thread>
 
 #include <dlfcn.h>
+#include <sys/prctl.h>
 #include <sys/types.h>
 #include <sys/wait.h>
 #include <unistd.h>
@@ -58,10 +59,15 @@ void stopServer() {
 // Starts Xvfb on :n; returns its pid once its socket exists, or −1 if it died first.
 pid_t startOn(const std::string& xvfb, int n) {
     const std::string display = ":" + std::to_string(n);
+    const pid_t parent = ::getpid();
     const pid_t pid = ::fork();
     if (pid < 0) return -1;
     if (pid == 0) {
-        // Child: quiet, then become the server.
+        // Child: dies with swarf however swarf ends (Ctrl-C, kill, a crash: atexit does not run
+        // then), so no server is left behind; quiet; then becomes the server.
+        ::prctl(PR_SET_PDEATHSIG, SIGTERM);
+        if (::getppid() != parent) ::_exit(0);  // swarf already gone
+
         FILE* devnull = std::fopen("/dev/null", "w");
         if (devnull) {
             ::dup2(fileno(devnull), STDOUT_FILENO);
