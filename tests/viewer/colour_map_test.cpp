@@ -26,8 +26,8 @@ TEST_CASE("deviation scale: centred on zero, band from the cone's tolerance", "[
     const Scene s = test::syntheticScene(3);
     const CutResult r = test::syntheticResult(s, [](int k) { return k == 2 ? 0.1 : 1.0; });
     const auto sc = viewer::deviationScale(s, r);
-    const double cosA = 1 / std::sqrt(1 + 0.05 * 0.05);  // derived
-    CHECK(sc.bandMm == Approx(0.025 * cosA));             // ±0.05 on diameter, derived
+    const double cosA = 1 / std::sqrt(1 + 0.05 * 0.05); // derived
+    CHECK(sc.bandMm == Approx(0.025 * cosA));           // ±0.05 on diameter, derived
     CHECK(sc.limitMm >= 2 * sc.bandMm);
     CHECK(sc.limitMm >= 0.1 * cosA);
     CHECK(sc.mapPosition(0) == 0.5);
@@ -42,5 +42,5 @@ TEST_CASE("deviation scale: centred on zero, band from the cone's tolerance", "[
     inch.units = Units::Inch;
     const auto si = viewer::deviationScale(inch, r);
     CHECK(std::string(si.displayUnit()) == "thou");
-    CHECK(si.toDisplay(0.0254) == Approx(1.0));  // derived: 1 thou = 0.0254 mm
+    CHECK(si.toDisplay(0.0254) == Approx(1.0)); // derived: 1 thou = 0.0254 mm
 }

@@ -21,6 +21,6 @@ TEST_CASE("ensureDisplay leaves DISPLAY alone or starts a virtual display", "[vi
         // Its socket exists: ":N" → /tmp/.X11-unix/XN
         CHECK(std::filesystem::exists("/tmp/.X11-unix/X" + std::string(after).substr(1)));
     }
-    swarf::viewer::ensureDisplay();  // a second call changes nothing
+    swarf::viewer::ensureDisplay(); // a second call changes nothing
     CHECK(std::string(std::getenv("DISPLAY")) == std::string(after));
 }

@@ -12,7 +12,9 @@ using namespace swarf;
 namespace {
 
 // After pass k the synthetic cone is 1.0, 0.6, 0.2, ... mm (radially) above the drawing.
-double leftOn(int k) { return 1.0 - 0.4 * k; }
+double leftOn(int k) {
+    return 1.0 - 0.4 * k;
+}
 
 // Largest absolute difference between two profiles on the same grid.
 double maxDiff(const Profile& a, const Profile& b) {
@@ -34,7 +36,8 @@ TEST_CASE("whole slider positions show the profile after that pass", "[viewer][m
         CHECK(m.passFraction == 1.0);
         CHECK(maxDiff(m.profile, r.afterPass[static_cast<std::size_t>(k)]) == 0.0);
         // and not the neighbouring passes' profiles
-        if (k > 0) CHECK(maxDiff(m.profile, r.afterPass[static_cast<std::size_t>(k - 1)]) > 0.3);
+        if (k > 0)
+            CHECK(maxDiff(m.profile, r.afterPass[static_cast<std::size_t>(k - 1)]) > 0.3);
         CHECK(m.passNote == s.plan.passes[static_cast<std::size_t>(k)].note);
         CHECK(m.passKind == "compound");
         // The dials read the end of the pass's move.
@@ -45,7 +48,7 @@ TEST_CASE("whole slider positions show the profile after that pass", "[viewer][m
     CHECK(before.pass == -1);
     CHECK(maxDiff(before.profile, r.stock) == 0.0);
     CHECK(before.compoundMm == Approx(0));
-    const auto end = viewer::describeMoment(s, r, 99);  // clamped
+    const auto end = viewer::describeMoment(s, r, 99); // clamped
     CHECK(end.finished);
     CHECK(end.position == 3);
     CHECK(maxDiff(end.profile, r.asCut) == 0.0);
@@ -54,11 +57,11 @@ TEST_CASE("whole slider positions show the profile after that pass", "[viewer][m
 TEST_CASE("deviation at a moment is normal to the drawing, + left on", "[viewer][moment]") {
     const Scene s = test::syntheticScene(3);
     const CutResult r = test::syntheticResult(s, leftOn);
-    const auto m = viewer::describeMoment(s, r, 1.0);  // 1.0 mm left on radially
-    const double cosA = 1 / std::sqrt(1 + 0.05 * 0.05);  // derived: normal of a 1:10 cone
-    const std::size_t mid = 2100;                        // z = 20
+    const auto m = viewer::describeMoment(s, r, 1.0);   // 1.0 mm left on radially
+    const double cosA = 1 / std::sqrt(1 + 0.05 * 0.05); // derived: normal of a 1:10 cone
+    const std::size_t mid = 2100;                       // z = 20
     CHECK(m.deviationMm[mid] == Approx(1.0 * cosA).epsilon(1e-9));
-    CHECK(std::isnan(m.deviationMm[50]));  // z = −0.5: off the drawing
+    CHECK(std::isnan(m.deviationMm[50])); // z = −0.5: off the drawing
     CHECK(std::isnan(m.deviationMm[5000]));
     // The finished part uses the kernel's own deviation.
     const auto end = viewer::describeMoment(s, r, 3.0);

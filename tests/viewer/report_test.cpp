@@ -12,9 +12,11 @@
 using namespace swarf;
 namespace fs = std::filesystem;
 
-TEST_CASE("report.html carries verdict, cautions, findings, pictures and passes", "[viewer][report]") {
+TEST_CASE("report.html carries verdict, cautions, findings, pictures and passes",
+          "[viewer][report]") {
     const Scene s = test::syntheticScene(3);
-    const CutResult r = test::syntheticResult(s, [](int k) { return k == 2 ? 0.1 : 1.0 - 0.4 * k; });
+    const CutResult r =
+        test::syntheticResult(s, [](int k) { return k == 2 ? 0.1 : 1.0 - 0.4 * k; });
     viewer::SnapshotReport pics;
     pics.partPng = "/somewhere/part.png";
     pics.conePng = "/somewhere/cone.png";
@@ -33,9 +35,11 @@ TEST_CASE("report.html carries verdict, cautions, findings, pictures and passes"
     CHECK(html.find("does not model cutting forces, deflection of the work or the tool, chatter") !=
           std::string::npos);
     CHECK(html.find("metal left on the cone") != std::string::npos);
-    for (const char* img : {"src=\"part.png\"", "src=\"cone.png\"", "src=\"section.png\"", "src=\"chart.png\""})
+    for (const char* img :
+         {"src=\"part.png\"", "src=\"cone.png\"", "src=\"section.png\"", "src=\"chart.png\""})
         CHECK(html.find(img) != std::string::npos);
-    for (const auto& p : s.plan.passes) CHECK(html.find(p.note) != std::string::npos);
+    for (const auto& p : s.plan.passes)
+        CHECK(html.find(p.note) != std::string::npos);
     // readable offline: nothing fetched from elsewhere
     CHECK(html.find("<script") == std::string::npos);
     CHECK(html.find("http://") == std::string::npos);

@@ -136,3 +136,23 @@ TEST_CASE("demo scene: pictures and report", "[viewer][snapshots][demo]") {
         CHECK(c.neutralPart > 0.5);
     }
 }
+
+TEST_CASE("demo scene without the nose-radius offset: the cone is red, the marks picture is drawn",
+          "[viewer][snapshots][demo]") {
+    // The made-up scene leaves the cone 2·ΔX large on diameter (references R1): out of tolerance.
+    const Scene s = io::readScene(std::string(SWARF_SCENES_DIR) + "/fixture-arbor-no-offset.toml");
+    const CutResult r = simulate(s);
+    REQUIRE_FALSE(r.withinTolerance);
+    viewer::SnapshotOptions o;
+    o.widthPx = 640;
+    o.heightPx = 420;
+    const auto rep = viewer::renderSnapshots(s, r, freshDir("no-offset"), o);
+    const Census cone = census(viewer::readPng(rep.conePng));
+    INFO("cone: red " << cone.red << " blue " << cone.blue << " neutral " << cone.neutralPart);
+    CHECK(cone.red > 0.5);
+    CHECK(cone.blue < 0.02);
+    const Census marks = census(viewer::readPng(rep.marksPng));
+    INFO("marks: red " << marks.red << " blue " << marks.blue);
+    CHECK(marks.red > 0.3); // the marks stand on metal left on
+    CHECK(distinctColours(viewer::readPng(rep.marksSectionPng)) > 10);
+}

@@ -134,3 +134,46 @@ TEST_CASE("keys step through the plan and toggle the help", "[viewer][window]") 
     view.saveSnapshot(png.string());
     CHECK(std::filesystem::exists(png));
 }
+
+TEST_CASE("demo scene: what each frame draws stays small; the close-up follows the feed marks",
+          "[viewer][window][demo]") {
+    viewer::ensureDisplay();
+    const Scene s = io::readScene(std::string(SWARF_SCENES_DIR) + "/fixture-arbor.toml");
+    const CutResult r = simulate(s);
+    viewer::ViewerOptions o;
+    o.offScreen = true;
+    o.widthPx = 640;
+    o.heightPx = 400;
+    viewer::ViewerSession view(s, r, o);
+    // The whole part at every pass end and half way: a few hundred rows round 72 columns, not
+    // the profile's tens of thousands of samples (which software OpenGL could not turn smoothly).
+    for (int k = 0; k <= 2 * view.passCount(); ++k) {
+        view.setPosition(0.5 * k);
+        INFO("slider at " << 0.5 * k);
+        CHECK(view.partPolygons() > 1000);
+        CHECK(view.partPolygons() < 120000);
+        // only the finished part has feed marks...
+        CHECK(view.sectionTrace().feedMarks == (k == 2 * view.passCount()));
+    }
+    view.pressKey("End");
+    CHECK(view.sectionTrace().feedMarks); // ...whole cone, min/max decimated
+    CHECK(view.sectionTrace().zMm.size() <= 2500);
+    view.pressKey("c");
+    REQUIRE(view.closeUpShown());
+    const auto& line = view.sectionTrace();
+    REQUIRE(line.feedMarks);
+    const auto close = viewer::closeUpOf(s, r);
+    CHECK(line.zMm.front() >= close.zFromMm);
+    CHECK(line.zMm.back() <= close.zToMm);
+    double lo = HUGE_VAL, hi = -HUGE_VAL;
+    for (double d : line.deviationMm) {
+        lo = std::min(lo, d);
+        hi = std::max(hi, d);
+    }
+    // Source: references R2 (exact arc cusp r − sqrt(r² − f²/4)), f 0.05 mm, r 0.4 mm: the
+    // demo's finishing feed and nose radius.
+    CHECK(hi - lo == Approx(0.4 - std::sqrt(0.16 - 0.05 * 0.05 / 4)).epsilon(0.02));
+    CHECK(view.partPolygons() < 120000);
+    view.pressKey("4");
+    CHECK_FALSE(view.closeUpShown());
+}

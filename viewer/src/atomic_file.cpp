@@ -18,16 +18,19 @@ namespace fs = std::filesystem;
 
 void makeDirectory(const std::string& dir) {
     std::error_code ec;
-    if (dir.empty()) return;
+    if (dir.empty())
+        return;
     fs::create_directories(dir, ec);
-    if (ec) throw OutputError("cannot create folder " + dir + ": " + ec.message());
+    if (ec)
+        throw OutputError("cannot create folder " + dir + ": " + ec.message());
 }
 
 void writeTextAtomic(const std::string& path, const std::string& text) {
     const std::string tmp = path + ".tmp";
     {
         std::ofstream out(tmp, std::ios::binary | std::ios::trunc);
-        if (!out) throw OutputError("cannot write " + tmp);
+        if (!out)
+            throw OutputError("cannot write " + tmp);
         out << text;
         out.flush();
         if (!out) {

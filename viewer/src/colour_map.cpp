@@ -42,10 +42,13 @@ double DeviationScale::toDisplay(double mm) const {
     return units == Units::Inch ? mm / kMmPerInch * 1000.0 : mm * 1000.0;
 }
 
-const char* DeviationScale::displayUnit() const { return units == Units::Inch ? "thou" : "µm"; }
+const char* DeviationScale::displayUnit() const {
+    return units == Units::Inch ? "thou" : "µm";
+}
 
 double DeviationScale::mapPosition(double deviationMm) const {
-    if (std::isnan(deviationMm)) return 0.5;
+    if (std::isnan(deviationMm))
+        return 0.5;
     return std::clamp(0.5 + 0.5 * deviationMm / limitMm, 0.0, 1.0);
 }
 
@@ -64,12 +67,14 @@ DeviationScale deviationScale(const Scene& scene, const CutResult& result) {
             break;
         }
     }
-    if (!found && !scene.part.features.empty()) tolMm = scene.part.features.front().toleranceMm;
+    if (!found && !scene.part.features.empty())
+        tolMm = scene.part.features.front().toleranceMm;
     // ± on diameter is ± half of it on radius; normal to a surface at α it is cos α of that.
     s.bandMm = tolMm > 0 ? 0.5 * tolMm * std::cos(halfAngle) : 0.01;
     double worst = 0;
     for (double d : result.deviationMm)
-        if (std::isfinite(d)) worst = std::max(worst, std::fabs(d));
+        if (std::isfinite(d))
+            worst = std::max(worst, std::fabs(d));
     s.limitMm = std::clamp(1.1 * worst, 2 * s.bandMm, 20 * s.bandMm);
     return s;
 }

@@ -33,9 +33,11 @@ std::string findXvfb() {
     std::stringstream ss(path);
     std::string dir;
     while (std::getline(ss, dir, ':')) {
-        if (dir.empty()) continue;
+        if (dir.empty())
+            continue;
         const fs::path p = fs::path(dir) / "Xvfb";
-        if (::access(p.c_str(), X_OK) == 0) return p.string();
+        if (::access(p.c_str(), X_OK) == 0)
+            return p.string();
     }
     return "";
 }
@@ -61,27 +63,30 @@ pid_t startOn(const std::string& xvfb, int n) {
     const std::string display = ":" + std::to_string(n);
     const pid_t parent = ::getpid();
     const pid_t pid = ::fork();
-    if (pid < 0) return -1;
+    if (pid < 0)
+        return -1;
     if (pid == 0) {
         // Child: dies with swarf however swarf ends (Ctrl-C, kill, a crash: atexit does not run
         // then), so no server is left behind; quiet; then becomes the server.
         ::prctl(PR_SET_PDEATHSIG, SIGTERM);
-        if (::getppid() != parent) ::_exit(0);  // swarf already gone
+        if (::getppid() != parent)
+            ::_exit(0); // swarf already gone
 
         FILE* devnull = std::fopen("/dev/null", "w");
         if (devnull) {
             ::dup2(fileno(devnull), STDOUT_FILENO);
             ::dup2(fileno(devnull), STDERR_FILENO);
         }
-        ::execl(xvfb.c_str(), "Xvfb", display.c_str(), "-screen", "0", "1600x1200x24",
-                "-nolisten", "tcp", static_cast<char*>(nullptr));
+        ::execl(xvfb.c_str(), "Xvfb", display.c_str(), "-screen", "0", "1600x1200x24", "-nolisten",
+                "tcp", static_cast<char*>(nullptr));
         ::_exit(127);
     }
     const std::string socket = "/tmp/.X11-unix/X" + std::to_string(n);
     const auto deadline = std::chrono::steady_clock::now() + std::chrono::seconds(15);
     while (std::chrono::steady_clock::now() < deadline) {
         int status = 0;
-        if (::waitpid(pid, &status, WNOHANG) == pid) return -1;  // it gave up (display taken)
+        if (::waitpid(pid, &status, WNOHANG) == pid)
+            return -1; // it gave up (display taken)
         std::error_code ec;
         if (std::filesystem::exists(socket, ec)) {
             // The socket appears just before the server listens; give it a moment.
@@ -100,15 +105,18 @@ pid_t startOn(const std::string& xvfb, int n) {
 void ensureDisplay() {
     std::lock_guard<std::mutex> lock(gMutex);
     const char* current = std::getenv("DISPLAY");
-    if ((current && *current) || gServer > 0) return;
+    if ((current && *current) || gServer > 0)
+        return;
     const std::string xvfb = findXvfb();
     if (xvfb.empty())
         throw RenderError("no X display (DISPLAY is not set) and Xvfb is not installed: install "
                           "the 'xvfb' package, run under xvfb-run, or turn pictures off");
     for (int n = 99 + static_cast<int>(::getpid() % 50), tries = 0; tries < 40; ++n, ++tries) {
-        if (displayTaken(n)) continue;
+        if (displayTaken(n))
+            continue;
         const pid_t pid = startOn(xvfb, n);
-        if (pid <= 0) continue;
+        if (pid <= 0)
+            continue;
         gServer = pid;
         ::setenv("DISPLAY", (":" + std::to_string(n)).c_str(), 1);
         static bool registered = false;
@@ -126,22 +134,26 @@ void* sharedDisplayConnection() {
     ensureDisplay();
     std::lock_guard<std::mutex> lock(gMutex);
     static void* connection = nullptr;
-    if (connection) return connection;
+    if (connection)
+        return connection;
     // Xlib is loaded at run time: VTK already has it in the process, and the viewer need not
     // link it itself.
     void* xlib = ::dlopen("libX11.so.6", RTLD_NOW | RTLD_GLOBAL);
-    if (!xlib) throw RenderError("cannot load the X library (libX11.so.6) to draw pictures");
+    if (!xlib)
+        throw RenderError("cannot load the X library (libX11.so.6) to draw pictures");
     using OpenFn = void* (*)(const char*);
     auto open = reinterpret_cast<OpenFn>(::dlsym(xlib, "XOpenDisplay"));
-    if (!open) throw RenderError("the X library has no XOpenDisplay");
+    if (!open)
+        throw RenderError("the X library has no XOpenDisplay");
     const char* display = std::getenv("DISPLAY");
     for (int attempt = 0; attempt < 20 && !connection; ++attempt) {
         connection = open(nullptr);
-        if (!connection) std::this_thread::sleep_for(std::chrono::milliseconds(250));
+        if (!connection)
+            std::this_thread::sleep_for(std::chrono::milliseconds(250));
     }
     if (!connection)
-        throw RenderError(std::string("cannot connect to the X display ") + (display ? display : "(unset)") +
-                          " to draw pictures");
+        throw RenderError(std::string("cannot connect to the X display ") +
+                          (display ? display : "(unset)") + " to draw pictures");
     return connection;
 }
 

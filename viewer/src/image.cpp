@@ -33,8 +33,10 @@ Image readPng(const std::string& path) {
     for (int y = 0; y < dims[1]; ++y)
         for (int x = 0; x < dims[0]; ++x) {
             const unsigned char* p = src + (static_cast<std::size_t>(y) * dims[0] + x) * comps;
-            unsigned char* q = img.rgb.data() + 3 * (static_cast<std::size_t>(dims[1] - 1 - y) * dims[0] + x);
-            for (int c = 0; c < 3; ++c) q[c] = comps >= 3 ? p[c] : p[0];
+            unsigned char* q =
+                img.rgb.data() + 3 * (static_cast<std::size_t>(dims[1] - 1 - y) * dims[0] + x);
+            for (int c = 0; c < 3; ++c)
+                q[c] = comps >= 3 ? p[c] : p[0];
         }
     return img;
 }

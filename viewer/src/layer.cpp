@@ -3,5 +3,7 @@
 #include <vtkVersion.h>
 
 namespace swarf::viewer {
-std::string toolkitVersion() { return std::string("VTK ") + vtkVersion::GetVTKVersion(); }
+std::string toolkitVersion() {
+    return std::string("VTK ") + vtkVersion::GetVTKVersion();
+}
 } // namespace swarf::viewer

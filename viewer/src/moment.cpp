@@ -20,40 +20,58 @@ struct PassPoint {
 };
 
 PassPoint splitPosition(double position, int passCount) {
-    if (position <= 0 || passCount == 0) return {-1, 0};
-    if (position >= passCount) return {passCount - 1, 1.0};
+    if (position <= 0 || passCount == 0)
+        return {-1, 0};
+    if (position >= passCount)
+        return {passCount - 1, 1.0};
     const double whole = std::floor(position);
     const double f = position - whole;
     // A whole number k means pass k (1-based) has just ended.
-    if (f == 0) return {static_cast<int>(whole) - 1, 1.0};
+    if (f == 0)
+        return {static_cast<int>(whole) - 1, 1.0};
     return {static_cast<int>(whole), f};
 }
 
-double moveLength(const ToolMove& m) { return (m.tipTo - m.tipFrom).norm(); }
+double moveLength(const ToolMove& m) {
+    return (m.tipTo - m.tipFrom).norm();
+}
 
-double lerp(double a, double b, double t) { return a + (b - a) * t; }
+double lerp(double a, double b, double t) {
+    return a + (b - a) * t;
+}
 
 } // namespace
 
 const char* passKindName(PassKind kind) {
     switch (kind) {
-    case PassKind::Compound: return "compound";
-    case PassKind::Saddle: return "saddle";
-    case PassKind::CrossSlide: return "cross-slide";
-    case PassKind::Path: return "path";
+    case PassKind::Compound:
+        return "compound";
+    case PassKind::Saddle:
+        return "saddle";
+    case PassKind::CrossSlide:
+        return "cross-slide";
+    case PassKind::Path:
+        return "path";
     }
     return "?";
 }
 
 double profileRadiusAt(const Profile& p, double zMm) {
-    if (p.radiusMm.empty()) return kNaN;
-    if (p.radiusMm.size() == 1 || p.dzMm <= 0) return p.radiusMm.front();
+    if (p.radiusMm.empty())
+        return kNaN;
+    if (p.radiusMm.size() == 1 || p.dzMm <= 0)
+        return p.radiusMm.front();
     const double u = (zMm - p.z0Mm) / p.dzMm;
-    if (u <= 0) return p.radiusMm.front();
+    if (u <= 0)
+        return p.radiusMm.front();
     const auto last = p.radiusMm.size() - 1;
-    if (u >= static_cast<double>(last)) return p.radiusMm.back();
+    if (u >= static_cast<double>(last))
+        return p.radiusMm.back();
     const auto i = static_cast<std::size_t>(u);
     const double t = u - static_cast<double>(i);
+    // On a sample, that sample: a NaN neighbour (the edge of the drawing) must not spread.
+    if (t == 0)
+        return p.radiusMm[i];
     return lerp(p.radiusMm[i], p.radiusMm[i + 1], t);
 }
 
@@ -68,7 +86,8 @@ std::vector<double> deviationFromNominal(const Profile& profile, const Profile& 
     };
     for (std::size_t i = 0; i < n; ++i) {
         const double rn = nominalAt(i);
-        if (std::isnan(rn)) continue;
+        if (std::isnan(rn))
+            continue;
         // Slope of the drawn surface from its neighbours, so the deviation is taken normal to it
         // (a radial difference δ on a surface at half angle α is δ·cos α away from it).
         double slope = 0;
@@ -82,7 +101,8 @@ std::vector<double> deviationFromNominal(const Profile& profile, const Profile& 
             slope = (rn - rPrev) / profile.dzMm;
         // A face (vertical step in the drawing) would give a huge slope; the radial difference is
         // then meaningless, so leave it out.
-        if (!std::isfinite(slope) || std::fabs(slope) > 50) continue;
+        if (!std::isfinite(slope) || std::fabs(slope) > 50)
+            continue;
         dev[i] = (profile.radiusMm[i] - rn) / std::sqrt(1 + slope * slope);
     }
     return dev;
@@ -91,7 +111,8 @@ std::vector<double> deviationFromNominal(const Profile& profile, const Profile& 
 std::vector<std::size_t> movesOfPass(const CutResult& result, int pass) {
     std::vector<std::size_t> idx;
     for (std::size_t i = 0; i < result.moves.size(); ++i)
-        if (result.moves[i].pass == pass) idx.push_back(i);
+        if (result.moves[i].pass == pass)
+            idx.push_back(i);
     return idx;
 }
 
@@ -121,7 +142,8 @@ MomentView describeMoment(const Scene& scene, const CutResult& result, double po
 
     // The profile of whole passes comes straight from the kernel.
     auto afterPass = [&](int k) -> const Profile& {
-        if (k < 0) return result.stock;
+        if (k < 0)
+            return result.stock;
         if (static_cast<std::size_t>(k) < result.afterPass.size())
             return result.afterPass[static_cast<std::size_t>(k)];
         return result.asCut;
@@ -136,7 +158,8 @@ MomentView describeMoment(const Scene& scene, const CutResult& result, double po
     } else {
         // Which move of the pass the slider is in, by path length.
         double total = 0;
-        for (std::size_t i : mine) total += moveLength(result.moves[i]);
+        for (std::size_t i : mine)
+            total += moveLength(result.moves[i]);
         const double target = v.passFraction * total;
         std::size_t k = mine.back();
         double local = 1.0;
@@ -150,7 +173,8 @@ MomentView describeMoment(const Scene& scene, const CutResult& result, double po
             }
             walked += len;
         }
-        if (total == 0) local = v.passFraction;
+        if (total == 0)
+            local = v.passFraction;
         const ToolMove& m = result.moves[k];
         v.tipZX = m.tipFrom + (m.tipTo - m.tipFrom) * local;
         v.crossMm = lerp(m.crossFrom, m.crossTo, local);
@@ -162,7 +186,8 @@ MomentView describeMoment(const Scene& scene, const CutResult& result, double po
             v.profile = profileUpTo(scene, result.moves, k + 1, local);
     }
 
-    if (v.finished && !result.asCut.radiusMm.empty()) v.profile = result.asCut;
+    if (v.finished && !result.asCut.radiusMm.empty())
+        v.profile = result.asCut;
     if (v.finished && result.deviationMm.size() == v.profile.radiusMm.size())
         v.deviationMm = result.deviationMm;
     else

@@ -284,6 +284,16 @@ std::vector<Eigen::Vector2d> ViewerSession::drawnSection() const {
     return impl_->part->drawnSection();
 }
 
+const DeviationTrace& ViewerSession::sectionTrace() const {
+    return impl_->part->sectionTrace();
+}
+std::size_t ViewerSession::partPolygons() const {
+    return impl_->part->partPolygons();
+}
+bool ViewerSession::closeUpShown() const {
+    return impl_->part->closeUpOn();
+}
+
 void ViewerSession::run() {
     impl_->window->Render();
     impl_->interactor->Initialize();

@@ -19,9 +19,9 @@ Rgb coolWarm(double t);
 
 /// How deviations are coloured and labelled.
 struct DeviationScale {
-    double limitMm = 0.1;      ///< deviations of ±limit reach the ends of the map, mm (> 0)
-    double bandMm = 0.01;      ///< the tolerance band, ± this normal to the surface, mm (> 0)
-    Units units = Units::Mm;   ///< µm for mm scenes, thou for inch scenes
+    double limitMm = 0.1;    ///< deviations of ±limit reach the ends of the map, mm (> 0)
+    double bandMm = 0.01;    ///< the tolerance band, ± this normal to the surface, mm (> 0)
+    Units units = Units::Mm; ///< µm for mm scenes, thou for inch scenes
     /// A deviation in mm in display units (µm or thou).
     double toDisplay(double mm) const;
     /// "µm" or "thou".

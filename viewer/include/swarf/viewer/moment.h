@@ -18,19 +18,19 @@ namespace swarf::viewer {
 /// number k (1..N) is the moment pass k (1-based) has just ended; k + f (0 < f < 1) is the
 /// fraction f of the way through pass k + 1, measured along the tool's path in that pass.
 struct MomentView {
-    double position = 0;        ///< the slider position this describes, clamped to [0, N]
-    int passCount = 0;          ///< N
-    int pass = -1;              ///< 0-based pass under way or just ended; −1 before the first
-    double passFraction = 0;    ///< how far through `pass`, 0..1
-    std::string passKind;       ///< "compound", "saddle", "cross-slide" or "path"; "" before
-    std::string passNote;       ///< what the person does in this pass (Pass::note)
-    double feedMmPerRev = 0;    ///< feed of the pass, mm/rev (0 before the first pass)
-    Profile profile;            ///< the as-cut profile at this moment (exact, axisymmetric)
+    double position = 0;     ///< the slider position this describes, clamped to [0, N]
+    int passCount = 0;       ///< N
+    int pass = -1;           ///< 0-based pass under way or just ended; −1 before the first
+    double passFraction = 0; ///< how far through `pass`, 0..1
+    std::string passKind;    ///< "compound", "saddle", "cross-slide" or "path"; "" before
+    std::string passNote;    ///< what the person does in this pass (Pass::note)
+    double feedMmPerRev = 0; ///< feed of the pass, mm/rev (0 before the first pass)
+    Profile profile;         ///< the as-cut profile at this moment (exact, axisymmetric)
     /// Signed deviation from the drawing per profile sample, mm, normal to the drawn surface:
     /// + metal left on, − overcut; NaN where the drawing says nothing.
     std::vector<double> deviationMm;
-    bool finished = false;      ///< true at position N: the part as the plan leaves it
-    Eigen::Vector2d tipZX{0, 0};  ///< imaginary tip of the tool now (z, x), mm
+    bool finished = false;       ///< true at position N: the part as the plan leaves it
+    Eigen::Vector2d tipZX{0, 0}; ///< imaginary tip of the tool now (z, x), mm
     /// Dial readings now, mm of dial (interpolated along the current move).
     double crossMm = 0, compoundMm = 0, saddleMm = 0;
 };

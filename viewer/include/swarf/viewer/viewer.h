@@ -5,6 +5,7 @@
 #include "swarf/sim/cut.h"
 #include "swarf/sim/scene.h"
 #include "swarf/viewer/moment.h"
+#include "swarf/viewer/trace.h"
 
 #include <Eigen/Core>
 #include <memory>
@@ -53,6 +54,12 @@ class ViewerSession {
     /// The part mesh handed to VTK, read back along one meridian: (z, radius) per drawn row,
     /// mm. Lets tests check what is drawn without looking at pixels.
     std::vector<Eigen::Vector2d> drawnSection() const;
+    /// The deviation line handed to the section view now (its close-up stretch after key c).
+    const DeviationTrace& sectionTrace() const;
+    /// Number of polygons of the part surface handed to VTK now (what each frame must draw).
+    std::size_t partPolygons() const;
+    /// True while the close-up of the feed marks is shown (key c; 1–5 and r leave it).
+    bool closeUpShown() const;
     /// Runs the interactive loop until the window is closed.
     void run();
 
