@@ -427,7 +427,7 @@ void PartScene::Impl::updatePart() {
 void PartScene::Impl::updatePlots() {
     const double z0 = closeUp ? close.zFromMm : coneZ0, z1 = closeUp ? close.zToMm : coneZ1;
     const std::string where =
-        closeUp ? fmt::format("at the gauge plane, z {} to {}", formatLength(z0, scene.units),
+        closeUp ? fmt::format("z {} to {}", formatLength(z0, scene.units),
                               formatLength(z1, scene.units))
                 : "";
     DeviationTrace line;

@@ -59,7 +59,8 @@ SectionView::SectionView(vtkColorTransferFunction* lut, const DeviationScale& sc
     title_->GetTextProperty()->SetFontSize(15);
     title_->GetTextProperty()->SetColor(1, 1, 1);
     title_->GetPositionCoordinate()->SetCoordinateSystemToNormalizedViewport();
-    title_->GetPositionCoordinate()->SetValue(0.01, 0.9);
+    title_->GetTextProperty()->SetVerticalJustificationToTop();
+    title_->GetPositionCoordinate()->SetValue(0.01, 0.97);
     renderer_->AddViewProp(title_);
 }
 
@@ -130,14 +131,14 @@ void SectionView::show(const DeviationTrace& t, double magnification, const std:
     cut->SetLines(cutLines);
     cut->GetPointData()->SetScalars(cutDev);
     cutMapper_->SetInputData(cut);
-    title_->SetInput(
-        fmt::format("Section{}, deviation x{:g}   green: drawing   yellow: tolerance +/-{}   "
-                    "coloured: as cut{}{}",
-                    where.empty() ? "" : " " + where, magnification,
-                    formatSmallLength(scale_.bandMm, scale_.units),
-                    t.feedMarks ? " (feed marks, operator's side)" : "",
-                    offScale ? " (off the scale where flat at the edge)" : "")
-            .c_str());
+    // Two short lines: the picture is half a window wide.
+    title_->SetInput(fmt::format("Section{}, deviation x{:g}{}\ngreen: drawing   yellow: tolerance +/-{}   "
+                                 "coloured: as cut{}",
+                                 where.empty() ? "" : " " + where, magnification,
+                                 t.feedMarks ? ", feed marks on the operator's side" : "",
+                                 formatSmallLength(scale_.bandMm, scale_.units),
+                                 offScale ? " (flat at the edge: off the scale)" : "")
+                         .c_str());
 }
 
 void SectionView::fit(bool toLine) {
