@@ -41,9 +41,10 @@ constexpr double kCutFrom = 45 * kDeg, kCutTo = 135 * kDeg;
 // The whole part: at least this many rows evenly, more where corners or colours need them.
 constexpr std::size_t kBaseRows = 240, kMaxRows = 1500;
 constexpr int kColumns = 72; // round the part (5°): the silhouette is within 0.1 px of round
-// The close-up: rows across the stretch (about 16 per feed mark); every column of the 3D map
+// The close-up: rows across the stretch (ten per feed mark: fewer show as facets, more cost
+// frames in software OpenGL, measured in swarf_bench); every column of the 3D map
 // within 20° of where it looks (the picture shows about 15°), every fourth elsewhere.
-constexpr std::size_t kCloseRows = 640;
+constexpr std::size_t kCloseRows = 400;
 constexpr int kCloseColumns = 120, kCloseCoarseStride = 4;
 constexpr double kCloseFineHalfWidth = 20 * kDeg;
 // Where the close-up looks along the surface: from the operator's side, a little above, square
