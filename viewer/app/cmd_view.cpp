@@ -52,7 +52,7 @@ void registerView(CLI::App& app, int& exitCode) {
             std::sscanf(args->size.c_str(), "%dx%d", &args->options.widthPx,
                         &args->options.heightPx);
         const Scene scene = io::readScene(args->scene);
-        const CutResult result = simulate(scene);
+        const auto result = std::make_shared<const CutResult>(simulate(scene));
         if (!args->screenshot.empty()) {
             viewer::ViewerOptions o = args->options;
             o.offScreen = true;

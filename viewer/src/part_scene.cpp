@@ -152,8 +152,11 @@ const char* helpText() {
 }
 
 struct PartScene::Impl {
+    explicit Impl(std::shared_ptr<const CutResult> r) : held(std::move(r)), result(*held) {}
     Scene scene;
-    CutResult result;
+    // Shared, not copied: the finished part's 3D surface alone is a few hundred MB.
+    std::shared_ptr<const CutResult> held;
+    const CutResult& result;
     DeviationScale scale;
     MomentView moment;
     Layers layers;
@@ -427,10 +430,9 @@ void PartScene::Impl::updatePart() {
 
 void PartScene::Impl::updatePlots() {
     const double z0 = closeUp ? close.zFromMm : coneZ0, z1 = closeUp ? close.zToMm : coneZ1;
-    const std::string where =
-        closeUp ? fmt::format("z {} to {}", formatLength(z0, scene.units),
-                              formatLength(z1, scene.units))
-                : "";
+    const std::string where = closeUp ? fmt::format("z {} to {}", formatLength(z0, scene.units),
+                                                    formatLength(z1, scene.units))
+                                      : "";
     DeviationTrace line;
     if (moment.finished) {
         const int k = closeUp ? 1 : 0;
@@ -518,11 +520,12 @@ void PartScene::Impl::update() {
     applyLayers();
 }
 
-PartScene::PartScene(const Scene& scene, const CutResult& result, double magnification)
-    : impl_(std::make_unique<Impl>()) {
+PartScene::PartScene(const Scene& scene, std::shared_ptr<const CutResult> shared,
+                     double magnification)
+    : impl_(std::make_unique<Impl>(std::move(shared))) {
     Impl& d = *impl_;
     d.scene = scene;
-    d.result = result;
+    const CutResult& result = d.result;
     d.magnification = magnification;
     d.scale = deviationScale(scene, result);
     mainConeExtent(scene, result, d.coneZ0, d.coneZ1);

@@ -31,8 +31,9 @@ enum class View { Front, Top, End, Iso, Cone, CloseUp };
 
 class PartScene {
   public:
-    /// Builds every actor; the moment starts at the end of the plan.
-    PartScene(const Scene& scene, const CutResult& result, double magnification);
+    /// Builds every actor; the moment starts at the end of the plan. The result is shared, not
+    /// copied (precondition: not null).
+    PartScene(const Scene& scene, std::shared_ptr<const CutResult> result, double magnification);
     ~PartScene();
     PartScene(const PartScene&) = delete;
     PartScene& operator=(const PartScene&) = delete;

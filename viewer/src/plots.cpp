@@ -132,13 +132,14 @@ void SectionView::show(const DeviationTrace& t, double magnification, const std:
     cut->GetPointData()->SetScalars(cutDev);
     cutMapper_->SetInputData(cut);
     // Two short lines: the picture is half a window wide.
-    title_->SetInput(fmt::format("Section{}, deviation x{:g}{}\ngreen: drawing   yellow: tolerance +/-{}   "
-                                 "coloured: as cut{}",
-                                 where.empty() ? "" : " " + where, magnification,
-                                 t.feedMarks ? ", feed marks on the operator's side" : "",
-                                 formatSmallLength(scale_.bandMm, scale_.units),
-                                 offScale ? " (flat at the edge: off the scale)" : "")
-                         .c_str());
+    title_->SetInput(
+        fmt::format("Section{}, deviation x{:g}{}\ngreen: drawing   yellow: tolerance +/-{}   "
+                    "coloured: as cut{}",
+                    where.empty() ? "" : " " + where, magnification,
+                    t.feedMarks ? ", feed marks on the operator's side" : "",
+                    formatSmallLength(scale_.bandMm, scale_.units),
+                    offScale ? " (flat at the edge: off the scale)" : "")
+            .c_str());
 }
 
 void SectionView::fit(bool toLine) {

@@ -56,7 +56,10 @@ SnapshotReport renderSnapshots(const Scene& scene, const CutResult& result,
     rep.marksPng = (fs::path(outDir) / "marks.png").string();
     rep.marksSectionPng = (fs::path(outDir) / "marks-section.png").string();
 
-    detail::PartScene part(scene, result, options.magnification);
+    // The result outlives this call: share it without a copy or an owner.
+    detail::PartScene part(scene,
+                           std::shared_ptr<const CutResult>(&result, [](const CutResult*) {}),
+                           options.magnification);
     part.setTextScale(h);
     // The whole part, oblique, with the cut-away, stock outline, insert and paths.
     shoot(part.main(), w, h, rep.partPng, [&] { part.view(detail::View::Iso); });

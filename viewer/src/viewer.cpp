@@ -163,10 +163,14 @@ void ViewerSession::Impl::onKey(const std::string& key, bool shift) {
 
 ViewerSession::ViewerSession(const Scene& scene, const CutResult& result,
                              const ViewerOptions& options)
+    : ViewerSession(scene, std::make_shared<const CutResult>(result), options) {}
+
+ViewerSession::ViewerSession(const Scene& scene, std::shared_ptr<const CutResult> result,
+                             const ViewerOptions& options)
     : impl_(std::make_unique<Impl>()) {
     ensureDisplay();
     Impl& d = *impl_;
-    d.part = std::make_unique<detail::PartScene>(scene, result, options.magnification);
+    d.part = std::make_unique<detail::PartScene>(scene, std::move(result), options.magnification);
     d.part->setTextScale(static_cast<int>(std::max(options.heightPx, 240) * (1 - kSplitY)));
     d.window = vtkSmartPointer<vtkRenderWindow>::New();
     d.window->SetDisplayId(sharedDisplayConnection());
@@ -300,8 +304,9 @@ void ViewerSession::run() {
     impl_->interactor->Start();
 }
 
-void runViewer(const Scene& scene, const CutResult& result, const ViewerOptions& options) {
-    ViewerSession session(scene, result, options);
+void runViewer(const Scene& scene, std::shared_ptr<const CutResult> result,
+               const ViewerOptions& options) {
+    ViewerSession session(scene, std::move(result), options);
     session.run();
 }
 

@@ -31,6 +31,10 @@ class ViewerSession {
   public:
     /// Builds the window for a scene and its result (the result is copied).
     ViewerSession(const Scene& scene, const CutResult& result, const ViewerOptions& options = {});
+    /// The same, sharing the result instead of copying it (its 3D surface can be hundreds of
+    /// MB). Precondition: result is not null.
+    ViewerSession(const Scene& scene, std::shared_ptr<const CutResult> result,
+                  const ViewerOptions& options = {});
     ~ViewerSession();
     ViewerSession(const ViewerSession&) = delete;
     ViewerSession& operator=(const ViewerSession&) = delete;
@@ -71,6 +75,7 @@ class ViewerSession {
 /// Opens the window for a scene and its result and returns when it is closed. Starts a virtual
 /// display if none exists (then nothing is visible: use renderSnapshots instead).
 /// Throws RenderError if no display can be had.
-void runViewer(const Scene& scene, const CutResult& result, const ViewerOptions& options = {});
+void runViewer(const Scene& scene, std::shared_ptr<const CutResult> result,
+               const ViewerOptions& options = {});
 
 } // namespace swarf::viewer
