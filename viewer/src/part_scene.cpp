@@ -445,7 +445,7 @@ void PartScene::Impl::updatePlots() {
         line = deviationTrace(scene, result, moment, z0, z1, 0);
     }
     sectionTrace = decimateTrace(line, closeUp ? 0 : kSectionPoints);
-    sectionView->show(sectionTrace, magnification, where);
+    sectionView->show(sectionTrace, magnification, where, closeUp);
     chartView->show(decimateTrace(line, kChartPoints), where, closeUp);
 }
 
@@ -493,6 +493,8 @@ std::string PartScene::Impl::closeUpText() const {
                          "colours are true to scale",
                          formatLength(close.feedMmPerRev, u),
                          formatSmallLength(result.rtUm / 1000, u), close.reliefFactor);
+    else if (moment.passCount == 0)
+        s += "\nThe plan has no passes: nothing is cut ('swarf plan' makes them)";
     else if (!moment.finished)
         s += "\nThe feed marks are worked out for the finished part only (End shows it)";
     return s;

@@ -66,7 +66,9 @@ SectionView::SectionView(vtkColorTransferFunction* lut, const DeviationScale& sc
 
 SectionView::~SectionView() = default;
 
-void SectionView::show(const DeviationTrace& t, double magnification, const std::string& where) {
+void SectionView::show(const DeviationTrace& t, double magnification, const std::string& where,
+                       bool unrolled) {
+    auto base = [&](std::size_t i) { return unrolled ? 0.0 : t.nominalMm[i]; };
     auto refPoints = vtkSmartPointer<vtkPoints>::New();
     auto refLines = vtkSmartPointer<vtkCellArray>::New();
     auto refColours = vtkSmartPointer<vtkUnsignedCharArray>::New();
@@ -92,7 +94,7 @@ void SectionView::show(const DeviationTrace& t, double magnification, const std:
                 continue;
             }
             ids.push_back(
-                refPoints->InsertNextPoint(t.zMm[i], t.nominalMm[i] + magnification * offset, 0));
+                refPoints->InsertNextPoint(t.zMm[i], base(i) + magnification * offset, 0));
         }
         flush();
     }
@@ -116,8 +118,7 @@ void SectionView::show(const DeviationTrace& t, double magnification, const std:
         }
         const double shown = std::clamp(d, -clampMm, clampMm);
         offScale = offScale || shown != d;
-        ids.push_back(
-            cutPoints->InsertNextPoint(t.zMm[i], t.nominalMm[i] + magnification * shown, 0.01));
+        ids.push_back(cutPoints->InsertNextPoint(t.zMm[i], base(i) + magnification * shown, 0.01));
         cutDev->InsertNextValue(static_cast<float>(scale_.toDisplay(d)));
     }
     flush();
@@ -133,9 +134,9 @@ void SectionView::show(const DeviationTrace& t, double magnification, const std:
     cutMapper_->SetInputData(cut);
     // Two short lines: the picture is half a window wide.
     title_->SetInput(
-        fmt::format("Section{}, deviation x{:g}{}\ngreen: drawing   yellow: tolerance +/-{}   "
+        fmt::format("Section{}{}, deviation x{:g}{}\ngreen: drawing   yellow: tolerance +/-{}   "
                     "coloured: as cut{}",
-                    where.empty() ? "" : " " + where, magnification,
+                    where.empty() ? "" : " " + where, unrolled ? " laid flat" : "", magnification,
                     t.feedMarks ? ", feed marks on the operator's side" : "",
                     formatSmallLength(scale_.bandMm, scale_.units),
                     offScale ? " (flat at the edge: off the scale)" : "")

@@ -30,8 +30,10 @@ class SectionView {
     SectionView& operator=(const SectionView&) = delete;
 
     /// Draws `trace` with deviations magnified `magnification` times (> 0). `where` names the
-    /// stretch in the title ("" for the whole cone).
-    void show(const DeviationTrace& trace, double magnification, const std::string& where);
+    /// stretch in the title ("" for the whole cone). With `unrolled` the drawing is laid flat
+    /// along z (a short stretch of a steep cone would otherwise be mostly its slope).
+    void show(const DeviationTrace& trace, double magnification, const std::string& where,
+              bool unrolled = false);
     /// Fits the camera to what is drawn, with a margin: to the drawing and its band, or with
     /// `toLine` to the as-cut line alone (a close-up of its feed marks).
     void fit(bool toLine = false);
