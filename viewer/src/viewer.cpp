@@ -54,7 +54,34 @@ struct ViewerSession::Impl {
         syncSlider();
     }
     void onKey(const std::string& key, bool shift);
+    void afterCameraMove();
+    bool zoomHintShown = false;
 };
+
+// After the mouse has turned or zoomed the 3D view: once one feed mark of the finished part
+// would span several pixels, say how to see the marks (the whole part is drawn from the swept
+// profile, which has none).
+void ViewerSession::Impl::afterCameraMove() {
+    const double f = part->closeUp().feedMmPerRev;
+    bool hint = false;
+    if (f > 0 && part->moment().finished && !part->closeUpOn()) {
+        vtkRenderer* ren = part->main();
+        double fp[3];
+        ren->GetActiveCamera()->GetFocalPoint(fp);
+        double a[3], b[3];
+        ren->SetWorldPoint(fp[0], fp[1], fp[2], 1);
+        ren->WorldToDisplay();
+        ren->GetDisplayPoint(a);
+        ren->SetWorldPoint(fp[0] + f, fp[1], fp[2], 1);
+        ren->WorldToDisplay();
+        ren->GetDisplayPoint(b);
+        hint = std::hypot(b[0] - a[0], b[1] - a[1]) > 6;
+    }
+    if (hint == zoomHintShown)
+        return;
+    zoomHintShown = hint;
+    part->setStatus(hint ? "Zoomed in: press c for the feed marks at the gauge plane" : "");
+}
 
 // The interaction style: trackball camera for the mouse, our keys instead of VTK's defaults.
 class SwarfStyle : public vtkInteractorStyleTrackballCamera {
@@ -200,6 +227,14 @@ ViewerSession::ViewerSession(const Scene& scene, std::shared_ptr<const CutResult
         d.window->Render();
     };
     d.interactor->SetInteractorStyle(style);
+    vtkNew<vtkCallbackCommand> onCamera;
+    onCamera->SetClientData(&d);
+    onCamera->SetCallback([](vtkObject*, unsigned long, void* client, void*) {
+        auto* self = static_cast<Impl*>(client);
+        self->afterCameraMove();
+        self->window->Render();
+    });
+    style->AddObserver(vtkCommand::EndInteractionEvent, onCamera);
 
     // The pass slider along the bottom of the 3D view.
     d.sliderRep = vtkSmartPointer<vtkSliderRepresentation2D>::New();
