@@ -7,6 +7,20 @@
 
 namespace swarf {
 
+const char* featureKindName(FeatureKind kind) {
+    switch (kind) {
+    case FeatureKind::Cylinder:
+        return "cylinder";
+    case FeatureKind::Cone:
+        return "cone";
+    case FeatureKind::Chamfer:
+        return "chamfer";
+    case FeatureKind::Face:
+        return "face";
+    }
+    return "?";
+}
+
 double Feature::radiusAt(double zMm) const {
     switch (kind) {
     case FeatureKind::Cone:

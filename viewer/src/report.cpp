@@ -61,20 +61,6 @@ const char* findingLabel(FindingKind k) {
     return "?";
 }
 
-const char* featureKindName(FeatureKind k) {
-    switch (k) {
-    case FeatureKind::Cylinder:
-        return "cylinder";
-    case FeatureKind::Cone:
-        return "cone";
-    case FeatureKind::Chamfer:
-        return "chamfer";
-    case FeatureKind::Face:
-        return "face";
-    }
-    return "?";
-}
-
 // Largest left-on and overcut (mm, both ≥ 0) of a deviation list.
 std::pair<double, double> extremes(const std::vector<double>& dev) {
     double left = 0, over = 0;

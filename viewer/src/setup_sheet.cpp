@@ -1,6 +1,8 @@
 // The set-up sheet: one document model, rendered as plain text or as HTML.
 #include "swarf/viewer/setup_sheet.h"
 
+#include "swarf/viewer/moment.h"
+
 #include <algorithm>
 #include <cmath>
 #include <cstdio>
@@ -70,20 +72,6 @@ std::string cell(const Slide& slide, double readingMm, Units u) {
                   u == Units::Inch ? 4 : 3, fromMm(readingMm, u), d.turns,
                   frac < 1e-6 || frac > 1 - 1e-6 ? 0 : 1, d.division);
     return buf;
-}
-
-std::string slideName(PassKind k) {
-    switch (k) {
-    case PassKind::Compound:
-        return "compound";
-    case PassKind::Saddle:
-        return "saddle";
-    case PassKind::CrossSlide:
-        return "cross-slide";
-    case PassKind::Path:
-        return "path";
-    }
-    return "";
 }
 
 Sheet buildSheet(const ConePlan& plan, const CutResult* proof) {
@@ -244,14 +232,14 @@ Sheet buildSheet(const ConePlan& plan, const CutResult* proof) {
                       cell(su.saddle, p.saddleMm + sOff, u);
         numbered.push_back(std::to_string(stepNo) + ". Pass " + std::to_string(st.pass + 1) +
                            " (stage " + (d.stage == 0 ? "A" : "B") + "): " + p.note + ". Set " +
-                           locked + "; wind the " + slideName(p.kind) + " from " +
+                           locked + "; wind the " + passKindName(p.kind) + " from " +
                            cell(moving, p.fromMm + off, u) + " to " +
                            cell(moving, p.toMm + off, u) + " at " +
                            printf1(u == Units::Inch ? "%.4f" : "%.3f", fromMm(p.feedMmPerRev, u)) +
                            " " + unitName(u) + "/rev.");
         passes.rows.push_back(
             {std::to_string(stepNo), std::to_string(st.pass + 1), d.stage == 0 ? "A" : "B",
-             slideName(p.kind), mC ? "moves" : cell(su.cross, p.crossMm + cOff, u),
+             passKindName(p.kind), mC ? "moves" : cell(su.cross, p.crossMm + cOff, u),
              mP ? "moves" : cell(su.compound, p.compoundMm, u),
              mS ? "moves" : cell(su.saddle, p.saddleMm + sOff, u), cell(moving, p.fromMm + off, u),
              cell(moving, p.toMm + off, u),

@@ -20,20 +20,6 @@ ordered_json num(double v) {
     return std::isfinite(v) ? ordered_json(v) : ordered_json(nullptr);
 }
 
-const char* featureKindName(FeatureKind k) {
-    switch (k) {
-    case FeatureKind::Cylinder:
-        return "cylinder";
-    case FeatureKind::Cone:
-        return "cone";
-    case FeatureKind::Chamfer:
-        return "chamfer";
-    case FeatureKind::Face:
-        return "face";
-    }
-    return "?";
-}
-
 const char* passKindName(PassKind k) {
     switch (k) {
     case PassKind::Compound:

@@ -41,6 +41,10 @@ enum class Iso2768 { f, m, c, v };
 /// Kinds of drawing feature along the axis.
 enum class FeatureKind { Cylinder, Cone, Chamfer, Face };
 
+/// "cylinder", "cone", "chamfer" or "face": the feature's kind as scene files and result.json
+/// spell it.
+const char* featureKindName(FeatureKind kind);
+
 /// One feature of the drawing, between zStartMm and zEndMm (zStart < zEnd; equal for a face).
 /// A chamfer is stored as a cone (its half angle and diameter at its small end).
 struct Feature {
