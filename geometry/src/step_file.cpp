@@ -1,6 +1,6 @@
 #include "swarf/geometry/step_file.h"
 
-#include "atomic_file.h"
+#include "swarf/io/output_file.h"
 #include "occt_support.h"
 
 #include <BRep_Builder.hxx>
@@ -42,7 +42,8 @@ void nameNewProducts(STEPControl_Writer& writer, const std::string& name) {
 
 void writeStep(const std::string& path, const std::vector<NamedSolid>& solids) {
     const std::string what = "writing STEP file " + path;
-    const std::string tmp = temporaryPathFor(path);
+    io::PendingFile file(path);
+    const std::string& tmp = file.tmpPath();
     {
         std::lock_guard lock(translatorMutex());
         guarded(what, [&] {
@@ -62,13 +63,11 @@ void writeStep(const std::string& path, const std::vector<NamedSolid>& solids) {
                 nameNewProducts(writer, s.name);
             }
             require(written > 0, what, "there is no solid to write");
-            if (writer.Write(tmp.c_str()) != IFSelect_RetDone) {
-                discardFile(tmp);
+            if (writer.Write(tmp.c_str()) != IFSelect_RetDone)
                 throw OutputError("cannot write " + path + " (as " + tmp + ")");
-            }
         });
     }
-    commitFile(tmp, path);
+    file.commit();
 }
 
 Solid readStep(const std::string& path) {

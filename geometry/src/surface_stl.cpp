@@ -2,7 +2,7 @@
 // normal and three vertices (12 float32) and a uint16 attribute word, 50 bytes in all.
 #include "swarf/geometry/surface_stl.h"
 
-#include "atomic_file.h"
+#include "swarf/io/output_file.h"
 
 #include <array>
 #include <cmath>
@@ -64,7 +64,8 @@ std::size_t writeSurfaceStl(const HeightMap& s, const std::string& path,
     if (s.nz < 2 || s.nPhi < 3 ||
         s.radiusMm.size() != static_cast<std::size_t>(s.nz) * static_cast<std::size_t>(s.nPhi))
         throw OutputError("cannot write " + path + ": the surface has no grid to mesh");
-    const std::string tmp = temporaryPathFor(path);
+    io::PendingFile file(path);
+    const std::string& tmp = file.tmpPath();
     std::ofstream out(tmp, std::ios::binary | std::ios::trunc);
     if (!out) throw OutputError("cannot write " + path + ": cannot create " + tmp);
 
@@ -125,11 +126,9 @@ std::size_t writeSurfaceStl(const HeightMap& s, const std::string& path,
     }
     sink.flush();
     out.close();
-    if (!out || sink.count() != total) {
-        discardFile(tmp);
+    if (!out || sink.count() != total)
         throw OutputError("cannot write " + path + ": writing " + tmp + " failed");
-    }
-    commitFile(tmp, path);
+    file.commit();
     return sink.count();
 }
 

@@ -76,6 +76,16 @@ double normalDeviationAt(const Part& part, double zMm, double radiusMm) {
     return (radiusMm - rn) * std::cos(f.surfaceHalfAngleRad());
 }
 
+DeviationExtremes deviationExtremes(const std::vector<double>& deviationMm) {
+    DeviationExtremes e;
+    for (double d : deviationMm)
+        if (!std::isnan(d)) {
+            e.leftOnMm = std::max(e.leftOnMm, d);
+            e.overcutMm = std::max(e.overcutMm, -d);
+        }
+    return e;
+}
+
 double normalBandMm(const Feature& f) {
     if (f.kind == FeatureKind::Face)
         return f.toleranceMm;

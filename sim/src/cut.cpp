@@ -3,6 +3,7 @@
 
 #include <algorithm>
 #include <cmath>
+#include <limits>
 
 namespace swarf {
 
@@ -28,9 +29,33 @@ const char* findingKindName(FindingKind kind) {
     return "unknown";
 }
 
+const char* findingLabel(FindingKind kind) {
+    switch (kind) {
+    case FindingKind::LeftOn:
+        return "metal left on";
+    case FindingKind::Overcut:
+        return "overcut";
+    case FindingKind::Rubbing:
+        return "rubbing";
+    case FindingKind::JawCrash:
+        return "tool reaches the jaws";
+    case FindingKind::PastStock:
+        return "past the stock";
+    case FindingKind::CompoundTravel:
+        return "compound travel";
+    case FindingKind::DepthOfCut:
+        return "depth of cut";
+    case FindingKind::AirCut:
+        return "cuts nothing";
+    }
+    return "?";
+}
+
 double Profile::radiusAt(double zMm) const {
     if (radiusMm.empty())
-        return 0;
+        return std::numeric_limits<double>::quiet_NaN();
+    if (radiusMm.size() == 1 || !(dzMm > 0))
+        return radiusMm.front();
     const double t = (zMm - z0Mm) / dzMm;
     if (t <= 0)
         return radiusMm.front();
@@ -39,6 +64,9 @@ double Profile::radiusAt(double zMm) const {
         return radiusMm.back();
     const auto i = static_cast<std::size_t>(std::floor(t));
     const double f = t - static_cast<double>(i);
+    // On a sample, that sample: a NaN neighbour (the edge of the drawing) must not spread.
+    if (f == 0)
+        return radiusMm[i];
     return radiusMm[i] + f * (radiusMm[i + 1] - radiusMm[i]);
 }
 

@@ -7,6 +7,24 @@
 
 namespace swarf {
 
+const char* passKindName(PassKind kind) {
+    switch (kind) {
+    case PassKind::Compound:
+        return "compound";
+    case PassKind::Saddle:
+        return "saddle";
+    case PassKind::CrossSlide:
+        return "cross-slide";
+    case PassKind::Path:
+        return "path";
+    }
+    return "?";
+}
+
+const char* passKindKey(PassKind kind) {
+    return kind == PassKind::CrossSlide ? "cross" : passKindName(kind);
+}
+
 const char* featureKindName(FeatureKind kind) {
     switch (kind) {
     case FeatureKind::Cylinder:

@@ -6,10 +6,36 @@
 
 namespace swarf {
 
+int lengthDecimals(Units u, Precision p) {
+    const bool inch = u == Units::Inch;
+    switch (p) {
+    case Precision::Normal:
+        return inch ? 4 : 3;
+    case Precision::Fine:
+        return inch ? 5 : 4;
+    case Precision::Finer:
+        return inch ? 6 : 5;
+    case Precision::Insert:
+        return inch ? 5 : 2;
+    }
+    return 3;
+}
+
 std::string formatLength(double mm, Units u, int digits) {
-    if (digits < 0) digits = u == Units::Inch ? 4 : 3;
+    if (digits < 0)
+        digits = lengthDecimals(u);
     char buf[64];
     std::snprintf(buf, sizeof buf, "%.*f %s", digits, fromMm(mm, u), unitName(u));
+    return buf;
+}
+
+std::string formatLength(double mm, Units u, Precision p) {
+    return formatLength(mm, u, lengthDecimals(u, p));
+}
+
+std::string formatLengthNumber(double mm, Units u, Precision p) {
+    char buf[64];
+    std::snprintf(buf, sizeof buf, "%.*f", lengthDecimals(u, p), fromMm(mm, u));
     return buf;
 }
 

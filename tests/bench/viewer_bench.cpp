@@ -6,7 +6,7 @@
 // Run it with no DISPLAY (it starts its own Xvfb with a 24-bit screen) or under a 24-bit one.
 #include "swarf/io/scene_reader.h"
 #include "swarf/sim/kernel.h"
-#include "swarf/viewer/display.h"
+#include "swarf/app/display.h"
 #include "swarf/viewer/viewer.h"
 
 #include <benchmark/benchmark.h>
@@ -29,7 +29,7 @@ Demo& demo() {
         Demo x;
         x.scene = swarf::io::readScene(std::string(SWARF_SCENES_DIR) + "/fixture-arbor.toml");
         x.result = swarf::simulate(x.scene);
-        swarf::viewer::ensureDisplay();
+        swarf::app::ensureDisplay();
         swarf::viewer::ViewerOptions o; // the default window size
         o.offScreen = std::getenv("SWARF_BENCH_OFFSCREEN") != nullptr;
         // SWARF_BENCH_SIZE=WxH: another window size (the default is the viewer's).

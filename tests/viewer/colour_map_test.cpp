@@ -1,7 +1,7 @@
 // Tests of swarf/viewer/colour_map.h.
 #include "swarf/viewer/colour_map.h"
 
-#include "synthetic.h"
+#include "support/synthetic.h"
 
 #include <catch2/catch.hpp>
 

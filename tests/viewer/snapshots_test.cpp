@@ -5,8 +5,8 @@
 #include "swarf/io/scene_reader.h"
 #include "swarf/sim/kernel.h"
 #include "swarf/viewer/image.h"
-#include "swarf/viewer/report.h"
-#include "synthetic.h"
+#include "swarf/io/report.h"
+#include "support/synthetic.h"
 
 #include <catch2/catch.hpp>
 
@@ -84,11 +84,11 @@ TEST_CASE("snapshots of a part with metal left on", "[viewer][snapshots]") {
         const auto img = viewer::readPng(f);
         CHECK(img.widthPx == 640);
         CHECK(img.heightPx ==
-              (f == rep.partPng || f == rep.conePng || f == rep.marksPng ? 480 : 240));
+              (f == rep.part || f == rep.cone || f == rep.marks ? 480 : 240));
         CHECK(distinctColours(img) > 20); // not blank
     }
     // The cone close-up is mostly the warm (left-on) side of the map.
-    const Census c = census(viewer::readPng(rep.conePng));
+    const Census c = census(viewer::readPng(rep.cone));
     INFO("red " << c.red << " blue " << c.blue << " neutral " << c.neutralPart);
     CHECK(c.red > 0.5);
     CHECK(c.blue < 0.02);
@@ -106,14 +106,14 @@ TEST_CASE("snapshots of a part within tolerance carry the near-zero colour",
     o.widthPx = 640;
     o.heightPx = 480;
     const auto rep = viewer::renderSnapshots(s, r, freshDir("intol"), o);
-    const Census c = census(viewer::readPng(rep.conePng));
+    const Census c = census(viewer::readPng(rep.cone));
     INFO("red " << c.red << " blue " << c.blue << " neutral " << c.neutralPart);
     CHECK(c.neutralPart > 0.5);
     CHECK(c.red < 0.02);
     CHECK(c.blue < 0.02);
     // The section and the chart are drawn (more than a background and a few lines of text).
-    CHECK(distinctColours(viewer::readPng(rep.sectionPng)) > 10);
-    CHECK(distinctColours(viewer::readPng(rep.chartPng)) > 10);
+    CHECK(distinctColours(viewer::readPng(rep.section)) > 10);
+    CHECK(distinctColours(viewer::readPng(rep.chart)) > 10);
 }
 
 TEST_CASE("demo scene: pictures and report", "[viewer][snapshots][demo]") {
@@ -127,11 +127,11 @@ TEST_CASE("demo scene: pictures and report", "[viewer][snapshots][demo]") {
         CHECK(img.widthPx == 1200);
         CHECK(distinctColours(img) > 20);
     }
-    const std::string html = viewer::writeReport(s, r, dir, &rep);
+    const std::string html = io::writeReport(s, r, dir, &rep);
     CHECK(fs::exists(html));
     // The demo is made to come out within tolerance: its close-up is on the near-zero colour.
     if (r.withinTolerance) {
-        const Census c = census(viewer::readPng(rep.conePng));
+        const Census c = census(viewer::readPng(rep.cone));
         INFO("red " << c.red << " blue " << c.blue << " neutral " << c.neutralPart);
         CHECK(c.neutralPart > 0.5);
     }
@@ -147,12 +147,12 @@ TEST_CASE("demo scene without the nose-radius offset: the cone is red, the marks
     o.widthPx = 640;
     o.heightPx = 420;
     const auto rep = viewer::renderSnapshots(s, r, freshDir("no-offset"), o);
-    const Census cone = census(viewer::readPng(rep.conePng));
+    const Census cone = census(viewer::readPng(rep.cone));
     INFO("cone: red " << cone.red << " blue " << cone.blue << " neutral " << cone.neutralPart);
     CHECK(cone.red > 0.5);
     CHECK(cone.blue < 0.02);
-    const Census marks = census(viewer::readPng(rep.marksPng));
+    const Census marks = census(viewer::readPng(rep.marks));
     INFO("marks: red " << marks.red << " blue " << marks.blue);
     CHECK(marks.red > 0.3); // the marks stand on metal left on
-    CHECK(distinctColours(viewer::readPng(rep.marksSectionPng)) > 10);
+    CHECK(distinctColours(viewer::readPng(rep.marksSection)) > 10);
 }

@@ -4,7 +4,7 @@
 
 #include "swarf/io/scene_reader.h"
 #include "swarf/sim/kernel.h"
-#include "synthetic.h"
+#include "support/synthetic.h"
 
 #include <catch2/catch.hpp>
 
@@ -157,7 +157,7 @@ TEST_CASE("deviationTrace of a moment follows its profile; decimation keeps its 
     const CutResult r = test::syntheticResult(
         s, [](int k) { return 1.0 - 0.4 * k; },
         [](double z) { return 0.001 * std::cos(2 * kPi * z / 0.1); });
-    const auto m = viewer::describeMoment(s, r, 3);
+    const auto m = describeMoment(s, r, 3);
     const auto full = viewer::deviationTrace(s, r, m, 0, 40, 0);
     CHECK_FALSE(full.feedMarks);      // no 3D surface in this result
     REQUIRE(full.zMm.size() >= 4000); // z = 0 to 40 on the 0.01 mm grid
@@ -185,7 +185,7 @@ TEST_CASE("demo scene: the finished section follows the feed marks of the finish
     CHECK(close.feedMmPerRev == Approx(0.05));
     // Marks about 0.78 µm high at 0.05 mm apart: raised to about a quarter of the pitch.
     CHECK(close.reliefFactor == 20);
-    const auto m = viewer::describeMoment(s, r, static_cast<double>(s.plan.passes.size()));
+    const auto m = describeMoment(s, r, static_cast<double>(s.plan.passes.size()));
     const auto line = viewer::deviationTrace(s, r, m, close.zFromMm, close.zToMm, 0);
     REQUIRE(line.feedMarks);
     CHECK(line.zMm.size() > 40 * 20); // many samples in every mark
@@ -199,5 +199,5 @@ TEST_CASE("demo scene: the finished section follows the feed marks of the finish
     CHECK(chart.zMm.size() <= 1210);
     CHECK(peakToValley(chart, close.zFromMm, close.zToMm) == Approx(cusp).epsilon(0.02));
     // Before the finish there are no marks to follow: the line is the swept profile.
-    CHECK_FALSE(viewer::deviationTrace(s, r, viewer::describeMoment(s, r, 2), 0, 50, 0).feedMarks);
+    CHECK_FALSE(viewer::deviationTrace(s, r, describeMoment(s, r, 2), 0, 50, 0).feedMarks);
 }

@@ -1,12 +1,12 @@
 // Tests of swarf/viewer/viewer.h: the window's data at a slider position, read back from what
 // was handed to VTK (no pixels).
+#include "swarf/app/display.h"
 #include "swarf/viewer/viewer.h"
 
 #include "swarf/io/scene_reader.h"
 #include "swarf/sim/kernel.h"
-#include "swarf/viewer/display.h"
-#include "swarf/viewer/moment.h"
-#include "synthetic.h"
+#include "swarf/sim/moment.h"
+#include "support/synthetic.h"
 
 #include <catch2/catch.hpp>
 
@@ -35,7 +35,7 @@ double drawnVersus(const std::vector<Eigen::Vector2d>& drawn, const Profile& p) 
 } // namespace
 
 TEST_CASE("stepping to pass k draws the cut after pass k", "[viewer][window]") {
-    viewer::ensureDisplay();
+    app::ensureDisplay();
     const Scene s = test::syntheticScene(4);
     const CutResult r = test::syntheticResult(s, [](int k) { return 1.2 - 0.4 * k; });
     viewer::ViewerOptions o;
@@ -64,7 +64,7 @@ TEST_CASE("stepping to pass k draws the cut after pass k", "[viewer][window]") {
 
 TEST_CASE("demo scene: each pass's drawn part matches the kernel's profile after it",
           "[viewer][window][demo]") {
-    viewer::ensureDisplay();
+    app::ensureDisplay();
     const Scene s = io::readScene(std::string(SWARF_SCENES_DIR) + "/fixture-arbor.toml");
     const CutResult r = simulate(s);
     REQUIRE(r.afterPass.size() == s.plan.passes.size());
@@ -84,7 +84,7 @@ TEST_CASE("demo scene: each pass's drawn part matches the kernel's profile after
     // Half way through a pass, the part lies between the profiles before and after that pass:
     // cutting only removes metal.
     for (int k = 1; k < n; ++k) {
-        const auto m = viewer::describeMoment(s, r, k + 0.5);
+        const auto m = describeMoment(s, r, k + 0.5);
         const Profile& before = r.afterPass[static_cast<std::size_t>(k - 1)];
         const Profile& after = r.afterPass[static_cast<std::size_t>(k)];
         REQUIRE(m.profile.radiusMm.size() == before.radiusMm.size());
@@ -100,7 +100,7 @@ TEST_CASE("demo scene: each pass's drawn part matches the kernel's profile after
 }
 
 TEST_CASE("keys step through the plan and toggle the help", "[viewer][window]") {
-    viewer::ensureDisplay();
+    app::ensureDisplay();
     const Scene s = test::syntheticScene(3);
     const CutResult r = test::syntheticResult(s, [](int k) { return 1.0 - 0.4 * k; });
     viewer::ViewerOptions o;
@@ -137,7 +137,7 @@ TEST_CASE("keys step through the plan and toggle the help", "[viewer][window]") 
 
 TEST_CASE("demo scene: what each frame draws stays small; the close-up follows the feed marks",
           "[viewer][window][demo]") {
-    viewer::ensureDisplay();
+    app::ensureDisplay();
     const Scene s = io::readScene(std::string(SWARF_SCENES_DIR) + "/fixture-arbor.toml");
     const CutResult r = simulate(s);
     viewer::ViewerOptions o;

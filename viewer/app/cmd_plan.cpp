@@ -2,12 +2,14 @@
 // scene and the set-up sheet, then run the planned scene (as written) through the kernel and
 // print its verdict, so the plan proves itself.
 #include "commands.h"
+#include "swarf/io/output_file.h"
 #include "swarf/io/scene_reader.h"
 #include "swarf/io/scene_writer.h"
+#include "swarf/sim/caution.h"
 #include "swarf/sim/error.h"
 #include "swarf/sim/kernel.h"
 #include "swarf/sim/planner.h"
-#include "swarf/viewer/setup_sheet.h"
+#include "swarf/io/setup_sheet.h"
 
 #include <fmt/core.h>
 
@@ -23,26 +25,15 @@ struct PlanArgs {
     std::string outDir;
 };
 
-void makeDir(const std::string& dir) {
-    std::error_code ec;
-    std::filesystem::create_directories(dir, ec);
-    if (ec || !std::filesystem::is_directory(dir))
-        throw OutputError("cannot create the output folder " + dir +
-                          (ec ? ": " + ec.message() : ""));
-}
-
 std::vector<std::string> headerFor(const ConePlan& plan, const std::string& from) {
     std::vector<std::string> h = {
         "Planned by `swarf plan` from " + from + ". Run it with `swarf run`.",
         "The passes follow the set-up sheet written beside this file; readings are approached",
         "from below (wind back past each, then forward to it).",
         "",
-        "CAUTION: this is a simulation of the tool path only. It does not model cutting forces,",
-        "deflection, chatter or tool wear. Keep guards closed, take the chuck key out, no gloves "
-        "or",
-        "loose clothing near rotating work, wear eye protection, take speeds and feeds from the",
-        "tooling supplier, and defer to your shop's rules, local codes and licensed practice.",
     };
+    for (const std::string& line : wrapWords(safetyCautionShort(), 94))
+        h.push_back(line);
     for (const std::string& c : plan.cautions)
         h.push_back("Note: " + c);
     return h;
@@ -51,13 +42,13 @@ std::vector<std::string> headerFor(const ConePlan& plan, const std::string& from
 int runPlan(const PlanArgs& a) {
     const Scene scene = io::readScene(a.scene); // bad input throws before anything is written
     const ConePlan plan = planCone(scene);
-    makeDir(a.outDir);
+    io::makeOutputFolder(a.outDir);
     const std::filesystem::path dir(a.outDir);
     const Units u = scene.units;
 
     if (!plan.planned) {
-        io::writeTextAtomically((dir / "setup-sheet.txt").string(), viewer::setupSheetText(plan));
-        io::writeTextAtomically((dir / "setup-sheet.html").string(), viewer::setupSheetHtml(plan));
+        io::writeTextFile((dir / "setup-sheet.txt").string(), io::setupSheetText(plan));
+        io::writeTextFile((dir / "setup-sheet.html").string(), io::setupSheetHtml(plan));
         fmt::print("{}: NOT PLANNED\n", scene.name);
         for (const std::string& p : plan.problems)
             fmt::print("  {}\n", p);
@@ -76,10 +67,10 @@ int runPlan(const PlanArgs& a) {
     // Prove the plan as written: read the file back and simulate it.
     const Scene written = io::readScene(plannedPath);
     const CutResult result = simulate(written);
-    io::writeTextAtomically((dir / "setup-sheet.txt").string(),
-                            viewer::setupSheetText(plan, &result));
-    io::writeTextAtomically((dir / "setup-sheet.html").string(),
-                            viewer::setupSheetHtml(plan, &result));
+    io::writeTextFile((dir / "setup-sheet.txt").string(),
+                            io::setupSheetText(plan, &result));
+    io::writeTextFile((dir / "setup-sheet.html").string(),
+                            io::setupSheetHtml(plan, &result));
 
     fmt::print("{}: {} passes ({} cone roughing, {} stepped saddle, compound in {} setting{})\n",
                scene.name, plan.scene.plan.passes.size(), plan.roughingPasses,

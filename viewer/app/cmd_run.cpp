@@ -3,63 +3,30 @@
 // terminal and the run takes more than a moment. Exit 0 whatever the verdict (the verdict is
 // in the output); a bad scene exits 2 with nothing written.
 #include "commands.h"
+#include "swarf/app/display.h"
+#include "swarf/app/progress.h"
+#include "swarf/io/output_file.h"
+#include "swarf/io/report.h"
 #include "swarf/io/result_writer.h"
 #include "swarf/io/scene_reader.h"
+#include "swarf/sim/caution.h"
 #include "swarf/sim/error.h"
 #include "swarf/sim/kernel.h"
 #include "swarf/geometry/reference_cut.h"
 #include "swarf/geometry/run_solids.h"
-#include "swarf/viewer/report.h"
+#include "swarf/io/report.h"
 #include "swarf/viewer/snapshots.h"
 
 #include <fmt/core.h>
 
 #include <algorithm>
-#include <chrono>
 #include <cstdio>
 #include <filesystem>
 #include <string>
-#include <unistd.h>
 
 namespace swarf::app {
 
 namespace {
-
-// A progress bar on stderr, drawn only once the run has taken more than a moment.
-class ProgressBar {
-  public:
-    ProgressBar()
-        : enabled_(isatty(fileno(stderr)) != 0), start_(std::chrono::steady_clock::now()) {}
-    ~ProgressBar() { finish(); }
-    void update(double fraction) {
-        if (!enabled_)
-            return;
-        const double secs =
-            std::chrono::duration<double>(std::chrono::steady_clock::now() - start_).count();
-        if (secs < 0.4)
-            return;
-        const int width = 30, filled = static_cast<int>(fraction * width + 0.5);
-        const int pct = static_cast<int>(fraction * 100 + 0.5);
-        if (pct == lastPct_)
-            return;
-        lastPct_ = pct;
-        std::fprintf(stderr, "\r  simulating [%s%s] %3d%%", std::string(filled, '#').c_str(),
-                     std::string(width - filled, ' ').c_str(), pct);
-        std::fflush(stderr);
-        drawn_ = true;
-    }
-    void finish() {
-        if (drawn_)
-            std::fprintf(stderr, "\r%60s\r", "");
-        drawn_ = false;
-    }
-
-  private:
-    bool enabled_;
-    bool drawn_ = false;
-    int lastPct_ = -1;
-    std::chrono::steady_clock::time_point start_;
-};
 
 std::string passName(const Scene& s, int pass) {
     if (pass < 0 || pass >= static_cast<int>(s.plan.passes.size()))
@@ -78,8 +45,8 @@ void printSummary(const Scene& s, const CutResult& r) {
     fmt::print("verdict: {}\n", r.withinTolerance ? "IN TOLERANCE" : "OUT OF TOLERANCE");
     fmt::print("gauge plane z = {}: diameter as cut {}, drawing {} ({})\n",
                formatLength(r.gaugeZMm, u),
-               formatLength(r.gaugeAsCutDiameterMm, u, u == Units::Inch ? 5 : 4),
-               formatLength(r.gaugeNominalDiameterMm, u, u == Units::Inch ? 5 : 4),
+               formatLength(r.gaugeAsCutDiameterMm, u, Precision::Fine),
+               formatLength(r.gaugeNominalDiameterMm, u, Precision::Fine),
                signedSmall(r.gaugeAsCutDiameterMm - r.gaugeNominalDiameterMm, u));
     fmt::print("largest metal left on: {}   largest overcut: {}   (normal to the surface)\n",
                formatSmallLength(r.maxLeftOnMm, u), formatSmallLength(r.maxOvercutMm, u));
@@ -141,10 +108,7 @@ void registerRun(CLI::App& app, int& exitCode) {
         }
         std::string stepNote, referenceNote;
         namespace fs = std::filesystem;
-        std::error_code ec;
-        fs::create_directories(*outDir, ec);
-        if (ec)
-            throw OutputError("cannot create " + *outDir + ": " + ec.message());
+        io::makeOutputFolder(*outDir);
         const std::string json = (fs::path(*outDir) / "result.json").string();
         const std::string csv = (fs::path(*outDir) / "profile.csv").string();
         io::writeResultJson(json, s, result);
@@ -162,9 +126,10 @@ void registerRun(CLI::App& app, int& exitCode) {
                                    rep.fitErrorMm * 1000.0);
         }
         if (!*noPictures) {
+            ensureDisplay();
             const viewer::SnapshotReport pics = viewer::renderSnapshots(s, result, *outDir);
             for (const std::string& f : pics.files()) written.push_back(f);
-            written.push_back(viewer::writeReport(s, result, *outDir, &pics));
+            written.push_back(io::writeReport(s, result, *outDir, &pics));
         }
         if (*reference) {
             // The solid modeller's own cut, independent of the kernel: slow, for checking.
@@ -190,9 +155,8 @@ void registerRun(CLI::App& app, int& exitCode) {
         if (!referenceNote.empty()) fmt::print("{}\n", referenceNote);
         fmt::print("wrote:\n");
         for (const std::string& f : written) fmt::print("  {}\n", f);
-        fmt::print(
-            "CAUTION: a simulation of the tool path only; it does not model cutting forces,\n"
-            "deflection or chatter. Check every reading on the machine and take a trial cut.\n");
+        for (const std::string& line : wrapWords(safetyCautionShort(), 96))
+            fmt::print("{}\n", line);
         exitCode = kExitOk;
     });
 }

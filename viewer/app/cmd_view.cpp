@@ -1,9 +1,9 @@
 // swarf view SCENE: reads the scene, runs the simulation and opens the 3D window.
 #include "commands.h"
+#include "swarf/app/display.h"
 #include "swarf/io/scene_reader.h"
 #include "swarf/sim/error.h"
 #include "swarf/sim/kernel.h"
-#include "swarf/viewer/display.h"
 #include "swarf/viewer/viewer.h"
 
 #include <cstdio>
@@ -56,7 +56,7 @@ void registerView(CLI::App& app, int& exitCode) {
         if (!args->screenshot.empty()) {
             viewer::ViewerOptions o = args->options;
             o.offScreen = true;
-            viewer::ensureDisplay();
+            ensureDisplay();
             viewer::ViewerSession session(scene, result, o);
             session.saveSnapshot(args->screenshot);
             exitCode = kExitOk;

@@ -412,7 +412,7 @@ void PartScene::Impl::updatePart() {
         std::vector<double> nominal(n), zero(n, 0.0), coreTop(n), leftTop(n, std::nan(""));
         for (std::size_t i = 0; i < n; ++i) {
             nominal[i] =
-                nn == n ? result.nominal.radiusMm[i] : profileRadiusAt(result.nominal, p.zAt(i));
+                nn == n ? result.nominal.radiusMm[i] : result.nominal.radiusAt(p.zAt(i));
             const double r = p.radiusMm[i];
             coreTop[i] = std::isnan(nominal[i]) ? r : std::min(r, nominal[i]);
             if (!std::isnan(nominal[i]) && r > nominal[i])
@@ -619,7 +619,7 @@ void PartScene::view(View v) {
         const double limb = kCloseLimb; // where the view grazes the surface
         const double z0 = d.close.zFromMm, z1 = d.close.zToMm, length = z1 - z0;
         for (double z : {z0, z1}) {
-            const double rc = std::max(profileRadiusAt(d.result.asCut, z), 1e-3);
+            const double rc = std::max(d.result.asCut.radiusAt(z), 1e-3);
             const double band = std::acos(std::clamp(1 - 0.25 * length / rc, -1.0, 1.0));
             for (double a : {limb, limb - band})
                 pts.emplace_back(z, rc * std::cos(a), rc * std::sin(a));
@@ -627,8 +627,8 @@ void PartScene::view(View v) {
             pts.emplace_back(z, sky * std::cos(limb), sky * std::sin(limb));
         }
     } else if (v == View::Cone) {
-        addCircle(pts, d.coneZ0, profileRadiusAt(d.result.nominal, d.coneZ0 + 1e-6));
-        addCircle(pts, d.coneZ1, profileRadiusAt(d.result.nominal, d.coneZ1 - 1e-6));
+        addCircle(pts, d.coneZ0, d.result.nominal.radiusAt(d.coneZ0 + 1e-6));
+        addCircle(pts, d.coneZ1, d.result.nominal.radiusAt(d.coneZ1 - 1e-6));
         for (auto& p : pts)
             if (!p.allFinite())
                 p = Eigen::Vector3d(p.x(), 0, 0);

@@ -5,7 +5,7 @@
 #include "swarf/sim/cut.h"
 #include "swarf/sim/scene.h"
 #include "swarf/viewer/colour_map.h"
-#include "swarf/viewer/moment.h"
+#include "swarf/sim/moment.h"
 #include "swarf/viewer/trace.h"
 
 #include <vtkSmartPointer.h>

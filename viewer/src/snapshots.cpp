@@ -1,10 +1,11 @@
 // Headless PNG pictures of a result (see snapshots.h).
 #include "swarf/viewer/snapshots.h"
 
-#include "atomic_file.h"
+#include "png_file.h"
+#include "swarf/io/output_file.h"
 #include "part_scene.h"
 #include "swarf/sim/error.h"
-#include "swarf/viewer/display.h"
+#include "x_connection.h"
 
 #include <vtkNew.h>
 #include <vtkRenderWindow.h>
@@ -22,7 +23,7 @@ namespace {
 void shoot(vtkRenderer* renderer, int w, int h, const std::string& path,
            const std::function<void()>& beforeRender = {}) {
     vtkNew<vtkRenderWindow> window;
-    window->SetDisplayId(sharedDisplayConnection());
+    window->SetDisplayId(detail::sharedDisplayConnection());
     window->SetOffScreenRendering(1);
     window->SetSize(w, h);
     window->SetMultiSamples(4);
@@ -42,19 +43,18 @@ void shoot(vtkRenderer* renderer, int w, int h, const std::string& path,
 
 SnapshotReport renderSnapshots(const Scene& scene, const CutResult& result,
                                const std::string& outDir, const SnapshotOptions& options) {
-    ensureDisplay();
-    detail::makeDirectory(outDir);
+    io::makeOutputFolder(outDir);
     namespace fs = std::filesystem;
     const int w = std::max(64, options.widthPx), h = std::max(64, options.heightPx);
     SnapshotReport rep;
     rep.widthPx = w;
     rep.heightPx = h;
-    rep.partPng = (fs::path(outDir) / "part.png").string();
-    rep.conePng = (fs::path(outDir) / "cone.png").string();
-    rep.sectionPng = (fs::path(outDir) / "section.png").string();
-    rep.chartPng = (fs::path(outDir) / "chart.png").string();
-    rep.marksPng = (fs::path(outDir) / "marks.png").string();
-    rep.marksSectionPng = (fs::path(outDir) / "marks-section.png").string();
+    rep.part = (fs::path(outDir) / "part.png").string();
+    rep.cone = (fs::path(outDir) / "cone.png").string();
+    rep.section = (fs::path(outDir) / "section.png").string();
+    rep.chart = (fs::path(outDir) / "chart.png").string();
+    rep.marks = (fs::path(outDir) / "marks.png").string();
+    rep.marksSection = (fs::path(outDir) / "marks-section.png").string();
 
     // The result outlives this call: share it without a copy or an owner.
     detail::PartScene part(scene,
@@ -62,7 +62,7 @@ SnapshotReport renderSnapshots(const Scene& scene, const CutResult& result,
                            options.magnification);
     part.setTextScale(h);
     // The whole part, oblique, with the cut-away, stock outline, insert and paths.
-    shoot(part.main(), w, h, rep.partPng, [&] { part.view(detail::View::Iso); });
+    shoot(part.main(), w, h, rep.part, [&] { part.view(detail::View::Iso); });
 
     // The cone filling the picture: the deviation colours, nothing in front of them.
     detail::Layers close = part.layers();
@@ -73,18 +73,18 @@ SnapshotReport renderSnapshots(const Scene& scene, const CutResult& result,
     close.insert = false;
     close.jaws = false;
     part.setLayers(close);
-    shoot(part.main(), w, h, rep.conePng, [&] { part.view(detail::View::Cone); });
+    shoot(part.main(), w, h, rep.cone, [&] { part.view(detail::View::Cone); });
 
     // The feed marks at the gauge plane, raised to be seen; the section and chart of the same
     // stretch.
     part.setCloseUp(true);
-    shoot(part.main(), w, h, rep.marksPng, [&] { part.view(detail::View::CloseUp); });
-    shoot(part.section(), w, std::max(64, h / 2), rep.marksSectionPng,
+    shoot(part.main(), w, h, rep.marks, [&] { part.view(detail::View::CloseUp); });
+    shoot(part.section(), w, std::max(64, h / 2), rep.marksSection,
           [&] { part.resetSection(); });
     part.setCloseUp(false);
 
-    shoot(part.section(), w, std::max(64, h / 2), rep.sectionPng, [&] { part.resetSection(); });
-    shoot(part.chart(), w, std::max(64, h / 2), rep.chartPng);
+    shoot(part.section(), w, std::max(64, h / 2), rep.section, [&] { part.resetSection(); });
+    shoot(part.chart(), w, std::max(64, h / 2), rep.chart);
     rep.heightPx = h;
     return rep;
 }

@@ -220,7 +220,7 @@ DeviationTrace deviationTrace(const Scene& scene, const CutResult& result, const
             if (z < zFromMm || z > zToMm)
                 continue;
             all.zMm.push_back(z);
-            all.nominalMm.push_back(profileRadiusAt(result.nominal, z));
+            all.nominalMm.push_back(result.nominal.radiusAt(z));
             all.deviationMm.push_back(i < moment.deviationMm.size() ? moment.deviationMm[i] : kNaN);
         }
     }

@@ -1,10 +1,10 @@
 // The interactive window (see viewer.h): layout, slider, keys.
 #include "swarf/viewer/viewer.h"
 
-#include "atomic_file.h"
+#include "png_file.h"
 #include "part_scene.h"
 #include "swarf/sim/error.h"
-#include "swarf/viewer/display.h"
+#include "x_connection.h"
 
 #include <vtkCallbackCommand.h>
 #include <vtkCamera.h>
@@ -195,12 +195,11 @@ ViewerSession::ViewerSession(const Scene& scene, const CutResult& result,
 ViewerSession::ViewerSession(const Scene& scene, std::shared_ptr<const CutResult> result,
                              const ViewerOptions& options)
     : impl_(std::make_unique<Impl>()) {
-    ensureDisplay();
     Impl& d = *impl_;
     d.part = std::make_unique<detail::PartScene>(scene, std::move(result), options.magnification);
     d.part->setTextScale(static_cast<int>(std::max(options.heightPx, 240) * (1 - kSplitY)));
     d.window = vtkSmartPointer<vtkRenderWindow>::New();
-    d.window->SetDisplayId(sharedDisplayConnection());
+    d.window->SetDisplayId(detail::sharedDisplayConnection());
     d.window->SetSize(std::max(options.widthPx, 320), std::max(options.heightPx, 240));
     d.window->SetWindowName(
         ("swarf view: " + (scene.name.empty() ? scene.file : scene.name)).c_str());

@@ -1,7 +1,7 @@
 // result.json and profile.csv (format documented in sim/io/RESULTS.md).
 #include "swarf/io/result_writer.h"
 
-#include "swarf/io/scene_writer.h"
+#include "swarf/io/output_file.h"
 #include "swarf/sim/iso2768.h"
 
 #include <nlohmann/json.hpp>
@@ -18,20 +18,6 @@ using nlohmann::ordered_json;
 // NaN and infinities become null.
 ordered_json num(double v) {
     return std::isfinite(v) ? ordered_json(v) : ordered_json(nullptr);
-}
-
-const char* passKindName(PassKind k) {
-    switch (k) {
-    case PassKind::Compound:
-        return "compound";
-    case PassKind::Saddle:
-        return "saddle";
-    case PassKind::CrossSlide:
-        return "cross";
-    case PassKind::Path:
-        return "path";
-    }
-    return "?";
 }
 
 ordered_json point(const Eigen::Vector2d& p) {
@@ -119,7 +105,7 @@ std::string resultJson(const Scene& scene, const CutResult& r) {
     for (std::size_t p = 0; p < scene.plan.passes.size(); ++p) {
         const Pass& ps = scene.plan.passes[p];
         ordered_json o = {{"index", p},
-                          {"kind", passKindName(ps.kind)},
+                          {"kind", passKindKey(ps.kind)},
                           {"note", ps.note},
                           {"feed_mm_per_rev", ps.feedMmPerRev}};
         ordered_json mv = ordered_json::array();
@@ -183,11 +169,11 @@ std::string profileCsv(const CutResult& r) {
 }
 
 void writeResultJson(const std::string& path, const Scene& scene, const CutResult& result) {
-    writeTextAtomically(path, resultJson(scene, result));
+    writeTextFile(path, resultJson(scene, result));
 }
 
 void writeProfileCsv(const std::string& path, const CutResult& result) {
-    writeTextAtomically(path, profileCsv(result));
+    writeTextFile(path, profileCsv(result));
 }
 
 } // namespace swarf::io

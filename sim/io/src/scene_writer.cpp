@@ -1,6 +1,8 @@
 // Writing a scene as TOML in its own units (the inverse of the scene reader).
 #include "swarf/io/scene_writer.h"
 
+#include "swarf/io/output_file.h"
+
 #include "swarf/sim/error.h"
 #include "swarf/sim/iso2768.h"
 
@@ -136,21 +138,21 @@ void writePass(Out& o, const Pass& p) {
     o.line("[[plan.pass]]");
     switch (p.kind) {
     case PassKind::Compound:
-        o.str("kind", "compound");
+        o.str("kind", passKindKey(p.kind));
         if (!p.note.empty())
             o.str("note", p.note);
         o.len("cross", p.crossMm);
         o.len("saddle", p.saddleMm);
         break;
     case PassKind::Saddle:
-        o.str("kind", "saddle");
+        o.str("kind", passKindKey(p.kind));
         if (!p.note.empty())
             o.str("note", p.note);
         o.len("cross", p.crossMm);
         o.len("compound", p.compoundMm);
         break;
     case PassKind::CrossSlide:
-        o.str("kind", "cross");
+        o.str("kind", passKindKey(p.kind));
         if (!p.note.empty())
             o.str("note", p.note);
         o.len("compound", p.compoundMm);
@@ -158,7 +160,7 @@ void writePass(Out& o, const Pass& p) {
         break;
     case PassKind::Path:
         // Its points follow the feed (written by the caller, in the scene's units).
-        o.str("kind", "path");
+        o.str("kind", passKindKey(p.kind));
         if (!p.note.empty())
             o.str("note", p.note);
         break;
@@ -291,31 +293,9 @@ std::string sceneToToml(const Scene& sc, const std::vector<std::string>& headerC
     return o.text();
 }
 
-void writeTextAtomically(const std::string& path, const std::string& text) {
-    const std::string tmp = path + ".tmp";
-    {
-        std::ofstream f(tmp, std::ios::binary | std::ios::trunc);
-        if (!f)
-            throw OutputError("cannot write " + tmp);
-        f << text;
-        f.flush();
-        if (!f) {
-            std::error_code ec;
-            std::filesystem::remove(tmp, ec);
-            throw OutputError("cannot write " + tmp);
-        }
-    }
-    std::error_code ec;
-    std::filesystem::rename(tmp, path, ec);
-    if (ec) {
-        std::filesystem::remove(tmp, ec);
-        throw OutputError("cannot write " + path + ": " + ec.message());
-    }
-}
-
 void writeScene(const Scene& scene, const std::string& path,
                 const std::vector<std::string>& headerComments) {
-    writeTextAtomically(path, sceneToToml(scene, headerComments));
+    writeTextFile(path, sceneToToml(scene, headerComments));
 }
 
 } // namespace swarf::io

@@ -43,6 +43,13 @@ std::vector<FeatureReport> compareFeatures(const Scene& scene, const Profile& as
                                            const std::vector<double>& deviationMm,
                                            const std::vector<bool>& mask);
 
+/// The largest metal left on and the largest overcut among signed deviations (NaN skipped).
+struct DeviationExtremes {
+    double leftOnMm = 0;  ///< largest + deviation, ≥ 0
+    double overcutMm = 0; ///< largest − deviation as a positive number, ≥ 0
+};
+DeviationExtremes deviationExtremes(const std::vector<double>& deviationMm);
+
 /// Volume of metal left on outside the drawing, mm³: ∫ π (R² − Rn²) where R > Rn.
 double leftoverVolumeMm3(const Profile& nominal, const Profile& asCut);
 

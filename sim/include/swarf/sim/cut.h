@@ -27,7 +27,8 @@ struct Profile {
     std::vector<double> radiusMm;
 
     double zAt(std::size_t i) const { return z0Mm + static_cast<double>(i) * dzMm; }
-    /// Linear interpolation; clamps outside.
+    /// Radius at z, mm: linear between samples, the sample itself on one (so a NaN neighbour,
+    /// the edge of the drawing, does not spread), clamped outside; NaN if there are no samples.
     double radiusAt(double zMm) const;
     /// Volume of the solid of revolution, mm³ (each interval taken as a frustum).
     double volumeMm3() const;
@@ -63,6 +64,9 @@ enum class FindingKind {
 
 /// "left_on", "overcut", ... as written in result.json.
 const char* findingKindName(FindingKind kind);
+
+/// The finding's kind for people: "metal left on", "tool reaches the jaws", ...
+const char* findingLabel(FindingKind kind);
 
 /// One finding, tied to the pass that caused it (−1 if none).
 struct Finding {

@@ -145,6 +145,13 @@ enum class PassKind {
     Path,        ///< CNC: straight moves through imaginary-tip points
 };
 
+/// "compound", "saddle", "cross-slide" or "path": a pass's kind for people (screens, sheets).
+const char* passKindName(PassKind kind);
+
+/// "compound", "saddle", "cross" or "path": a pass's kind as scene files and result.json spell
+/// it (the `kind` key of [[plan.pass]]).
+const char* passKindKey(PassKind kind);
+
 /// One pass of the plan. Readings are in mm of dial (diameter mm for a diameter dial).
 struct Pass {
     PassKind kind = PassKind::Compound;

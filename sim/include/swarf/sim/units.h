@@ -25,9 +25,26 @@ constexpr double fromMm(double mm, Units u) { return u == Units::Inch ? mm / kMm
 /// "mm" or "in".
 inline const char* unitName(Units u) { return u == Units::Inch ? "in" : "mm"; }
 
-/// A length for people: "12.345 mm" or "0.4861 in"; `digits` after the point (default: 3 for mm,
-/// 4 for inch).
-std::string formatLength(double mm, Units u, int digits = -1);
+/// How finely a length is shown for people. The inch shows one decimal more than the mm at each
+/// step but the last, as the trades read them.
+enum class Precision {
+    Normal, ///< a reading, a diameter, a length: 0.001 mm, 0.0001 in
+    Fine,   ///< a diameter checked to the micron, a gauge stack: 0.0001 mm, 0.00001 in
+    Finer,  ///< a change per unit of travel: 0.00001 mm, 0.000001 in
+    Insert, ///< a nose radius: 0.01 mm, 0.00001 in (so 1/64 in shows as 0.01563 in)
+};
+
+/// Decimals after the point for a length in `u` at precision `p`.
+int lengthDecimals(Units u, Precision p = Precision::Normal);
+
+/// A length for people: "12.345 mm" or "0.4861 in" (Precision::Normal).
+std::string formatLength(double mm, Units u, Precision p = Precision::Normal);
+
+/// A length for people with `digits` after the point.
+std::string formatLength(double mm, Units u, int digits);
+
+/// The number alone, in `u`, without the unit: "12.345" or "0.4861".
+std::string formatLengthNumber(double mm, Units u, Precision p = Precision::Normal);
 
 /// A small length (deviation, roughness) for people: "4.2 µm" or "0.17 thou".
 std::string formatSmallLength(double mm, Units u);

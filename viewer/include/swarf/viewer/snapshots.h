@@ -1,6 +1,7 @@
 #pragma once
 // Headless pictures of a result, for `swarf run` and the report: rendered off screen (under a
 // virtual display where none exists) and written as PNG files.
+#include "swarf/io/report.h"
 #include "swarf/sim/cut.h"
 #include "swarf/sim/scene.h"
 
@@ -16,26 +17,21 @@ struct SnapshotOptions {
     double magnification = 200; ///< deviation magnification of the section picture
 };
 
-/// The files written (full paths) and their size.
-struct SnapshotReport {
-    std::string partPng;         ///< the whole part, oblique, with the stock outline and tool paths
-    std::string conePng;         ///< the main cone filling the picture, coloured by deviation
-    std::string sectionPng;      ///< the half profile with the deviation magnified
-    std::string chartPng;        ///< deviation along the cone
-    std::string marksPng;        ///< close-up at the gauge plane: the feed marks, raised to be seen
-    std::string marksSectionPng; ///< the section of that stretch: the feed marks magnified
+/// The files written (full paths, in the order part, cone, section, chart, marks, marks
+/// section: see io::ReportPictures, which the report shows) and their size.
+struct SnapshotReport : io::ReportPictures {
     int widthPx = 0, heightPx = 0; ///< size of part, cone and marks; section, chart half as high
     /// All six paths, in the order above.
     std::vector<std::string> files() const {
-        return {partPng, conePng, sectionPng, chartPng, marksPng, marksSectionPng};
+        return {part, cone, section, chart, marks, marksSection};
     }
 };
 
 /// Renders the finished part into outDir as part.png, cone.png, section.png, chart.png,
 /// marks.png and marks-section.png
-/// (each written atomically: name.tmp, then rename). Creates outDir if needed. Calls
-/// ensureDisplay(). Throws RenderError if nothing can be rendered, OutputError if a file
-/// cannot be written.
+/// (each written atomically: name.tmp, then rename). Creates outDir if needed. Precondition: an
+/// X display exists (DISPLAY is set; the executable starts one, see swarf/app/display.h).
+/// Throws RenderError if nothing can be rendered, OutputError if a file cannot be written.
 SnapshotReport renderSnapshots(const Scene& scene, const CutResult& result,
                                const std::string& outDir, const SnapshotOptions& options = {});
 

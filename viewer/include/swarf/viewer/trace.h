@@ -5,7 +5,7 @@
 // snapshots and the tests all go through these, so tests can check the drawn data directly.
 #include "swarf/sim/cut.h"
 #include "swarf/sim/scene.h"
-#include "swarf/viewer/moment.h"
+#include "swarf/sim/moment.h"
 
 #include <cstddef>
 #include <vector>

@@ -4,7 +4,7 @@
 // and by the help key in the window.
 #include "swarf/sim/cut.h"
 #include "swarf/sim/scene.h"
-#include "swarf/viewer/moment.h"
+#include "swarf/sim/moment.h"
 #include "swarf/viewer/trace.h"
 
 #include <Eigen/Core>
@@ -26,7 +26,8 @@ struct ViewerOptions {
 };
 
 /// One open viewer: the window, its renderers and the current moment. Not copyable. All calls
-/// from the thread that made it. A display must exist (see ensureDisplay()).
+/// from the thread that made it. An X display must exist (DISPLAY set; the
+/// executable starts one, see swarf/app/display.h).
 class ViewerSession {
   public:
     /// Builds the window for a scene and its result (the result is copied).
@@ -72,9 +73,8 @@ class ViewerSession {
     std::unique_ptr<Impl> impl_;
 };
 
-/// Opens the window for a scene and its result and returns when it is closed. Starts a virtual
-/// display if none exists (then nothing is visible: use renderSnapshots instead).
-/// Throws RenderError if no display can be had.
+/// Opens the window for a scene and its result and returns when it is closed. Precondition: an
+/// X display exists. Throws RenderError if it cannot be opened.
 void runViewer(const Scene& scene, std::shared_ptr<const CutResult> result,
                const ViewerOptions& options = {});
 

@@ -18,7 +18,4 @@ std::string sceneToToml(const Scene& scene, const std::vector<std::string>& head
 void writeScene(const Scene& scene, const std::string& path,
                 const std::vector<std::string>& headerComments = {});
 
-/// Writes `text` to `path` atomically (path.tmp, then rename). Throws OutputError on failure.
-void writeTextAtomically(const std::string& path, const std::string& text);
-
 } // namespace swarf::io

@@ -1,5 +1,5 @@
 // Starting a virtual X display (Xvfb) when there is none.
-#include "swarf/viewer/display.h"
+#include "swarf/app/display.h"
 
 #include "swarf/sim/error.h"
 
@@ -12,13 +12,12 @@
 #include <string>
 #include <thread>
 
-#include <dlfcn.h>
 #include <sys/prctl.h>
 #include <sys/types.h>
 #include <sys/wait.h>
 #include <unistd.h>
 
-namespace swarf::viewer {
+namespace swarf::app {
 
 namespace {
 
@@ -130,36 +129,9 @@ void ensureDisplay() {
                       ") did not start on any display number tried");
 }
 
-void* sharedDisplayConnection() {
-    ensureDisplay();
-    std::lock_guard<std::mutex> lock(gMutex);
-    static void* connection = nullptr;
-    if (connection)
-        return connection;
-    // Xlib is loaded at run time: VTK already has it in the process, and the viewer need not
-    // link it itself.
-    void* xlib = ::dlopen("libX11.so.6", RTLD_NOW | RTLD_GLOBAL);
-    if (!xlib)
-        throw RenderError("cannot load the X library (libX11.so.6) to draw pictures");
-    using OpenFn = void* (*)(const char*);
-    auto open = reinterpret_cast<OpenFn>(::dlsym(xlib, "XOpenDisplay"));
-    if (!open)
-        throw RenderError("the X library has no XOpenDisplay");
-    const char* display = std::getenv("DISPLAY");
-    for (int attempt = 0; attempt < 20 && !connection; ++attempt) {
-        connection = open(nullptr);
-        if (!connection)
-            std::this_thread::sleep_for(std::chrono::milliseconds(250));
-    }
-    if (!connection)
-        throw RenderError(std::string("cannot connect to the X display ") +
-                          (display ? display : "(unset)") + " to draw pictures");
-    return connection;
-}
-
 bool startedVirtualDisplay() {
     std::lock_guard<std::mutex> lock(gMutex);
     return gServer > 0;
 }
 
-} // namespace swarf::viewer
+} // namespace swarf::app

@@ -1,8 +1,7 @@
 #pragma once
-// One moment of the plan as the viewer shows it, without any VTK type: the profile the part is
-// drawn from, its deviation from the drawing, where the tool is and what the dials read. The
-// window, the snapshots and the tests all go through describeMoment(), so the tests can check
-// the data handed to VTK without looking at pixels.
+// One moment of the plan: the part as it stands at a point of the pass plan, its deviation from
+// the drawing, where the tool is and what the dials read. The window, the snapshots and the
+// tests all go through describeMoment(), so what is drawn can be checked without pixels.
 #include "swarf/sim/cut.h"
 #include "swarf/sim/scene.h"
 
@@ -10,9 +9,9 @@
 #include <string>
 #include <vector>
 
-namespace swarf::viewer {
+namespace swarf {
 
-/// What the viewer shows at one position of the pass slider.
+/// The cut at one position of the pass slider.
 ///
 /// The slider runs from 0 (the bar before the first pass) to N = number of passes. The whole
 /// number k (1..N) is the moment pass k (1-based) has just ended; k + f (0 < f < 1) is the
@@ -37,24 +36,12 @@ struct MomentView {
 
 /// Describes the moment at slider `position` (clamped to [0, N]). Whole positions use the
 /// kernel's afterPass profiles; positions inside a pass use profileUpTo(); position N uses
-/// the final asCut profile and the kernel's deviation. `result` must come from simulate() on
+/// the final asCut profile. The deviation is the kernel's (compare.h: normalDeviation). `result` must come from simulate() on
 /// the same scene (or be built with the same sampling: stock, nominal and afterPass on one
 /// grid).
 MomentView describeMoment(const Scene& scene, const CutResult& result, double position);
 
-/// Signed deviation of `profile` from `nominal` (same sampling expected; otherwise the
-/// nominal is interpolated), mm, measured normal to the nominal surface; NaN where the nominal
-/// is NaN.
-std::vector<double> deviationFromNominal(const Profile& profile, const Profile& nominal);
-
-/// Linear interpolation of a profile at z, mm; clamps outside; NaN if empty. (Kept here so the
-/// viewer does not depend on kernel code beyond its entry points.)
-double profileRadiusAt(const Profile& profile, double zMm);
-
 /// Indices into result.moves of the moves that make pass `pass` (0-based), in order.
 std::vector<std::size_t> movesOfPass(const CutResult& result, int pass);
 
-/// "compound", "saddle", "cross-slide" or "path".
-const char* passKindName(PassKind kind);
-
-} // namespace swarf::viewer
+} // namespace swarf

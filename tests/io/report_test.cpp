@@ -1,7 +1,7 @@
-// Tests of swarf/viewer/report.h: report.html.
-#include "swarf/viewer/report.h"
+// Tests of swarf/io/report.h: report.html.
+#include "swarf/io/report.h"
 
-#include "synthetic.h"
+#include "support/synthetic.h"
 
 #include <catch2/catch.hpp>
 
@@ -13,18 +13,18 @@ using namespace swarf;
 namespace fs = std::filesystem;
 
 TEST_CASE("report.html carries verdict, cautions, findings, pictures and passes",
-          "[viewer][report]") {
+          "[io][report]") {
     const Scene s = test::syntheticScene(3);
     const CutResult r =
         test::syntheticResult(s, [](int k) { return k == 2 ? 0.1 : 1.0 - 0.4 * k; });
-    viewer::SnapshotReport pics;
-    pics.partPng = "/somewhere/part.png";
-    pics.conePng = "/somewhere/cone.png";
-    pics.sectionPng = "/somewhere/section.png";
-    pics.chartPng = "/somewhere/chart.png";
+    io::ReportPictures pics;
+    pics.part = "/somewhere/part.png";
+    pics.cone = "/somewhere/cone.png";
+    pics.section = "/somewhere/section.png";
+    pics.chart = "/somewhere/chart.png";
     const fs::path dir = fs::temp_directory_path() / "swarf-viewer-test-report";
     fs::remove_all(dir);
-    const std::string path = viewer::writeReport(s, r, dir.string(), &pics);
+    const std::string path = io::writeReport(s, r, dir.string(), &pics);
     REQUIRE(fs::exists(path));
     CHECK_FALSE(fs::exists(path + ".tmp"));
     std::ifstream in(path);
@@ -47,11 +47,11 @@ TEST_CASE("report.html carries verdict, cautions, findings, pictures and passes"
     CHECK(html.find("<link") == std::string::npos);
 }
 
-TEST_CASE("report of a part within tolerance says so and escapes text", "[viewer][report]") {
+TEST_CASE("report of a part within tolerance says so and escapes text", "[io][report]") {
     Scene s = test::syntheticScene(2);
     s.plan.passes[0].note = "Lock the saddle <then> wind & watch";
     const CutResult r = test::syntheticResult(s, [](int k) { return k == 1 ? 0.001 : 0.5; });
-    const std::string html = viewer::reportHtml(s, r, nullptr);
+    const std::string html = io::reportHtml(s, r, nullptr);
     CHECK(html.find("within tolerance") != std::string::npos);
     CHECK(html.find("Lock the saddle &lt;then&gt; wind &amp; watch") != std::string::npos);
     CHECK(html.find("<img") == std::string::npos);

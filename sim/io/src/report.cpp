@@ -1,9 +1,11 @@
 // report.html (see report.h): one self-contained page, no scripts, fonts or anything from the
 // network; inline CSS only.
-#include "swarf/viewer/report.h"
+#include "swarf/io/report.h"
 
-#include "atomic_file.h"
-#include "swarf/viewer/moment.h"
+#include "swarf/io/html.h"
+#include "swarf/io/output_file.h"
+#include "swarf/sim/caution.h"
+#include "swarf/sim/compare.h"
 
 #include <fmt/format.h>
 
@@ -11,65 +13,12 @@
 #include <cmath>
 #include <filesystem>
 
-namespace swarf::viewer {
+namespace swarf::io {
 
 namespace {
 
 std::string esc(const std::string& s) {
-    std::string out;
-    out.reserve(s.size());
-    for (char c : s) {
-        switch (c) {
-        case '&':
-            out += "&amp;";
-            break;
-        case '<':
-            out += "&lt;";
-            break;
-        case '>':
-            out += "&gt;";
-            break;
-        case '"':
-            out += "&quot;";
-            break;
-        default:
-            out += c;
-        }
-    }
-    return out;
-}
-
-const char* findingLabel(FindingKind k) {
-    switch (k) {
-    case FindingKind::LeftOn:
-        return "metal left on";
-    case FindingKind::Overcut:
-        return "overcut";
-    case FindingKind::Rubbing:
-        return "rubbing";
-    case FindingKind::JawCrash:
-        return "tool reaches the jaws";
-    case FindingKind::PastStock:
-        return "past the stock";
-    case FindingKind::CompoundTravel:
-        return "compound travel";
-    case FindingKind::DepthOfCut:
-        return "depth of cut";
-    case FindingKind::AirCut:
-        return "cuts nothing";
-    }
-    return "?";
-}
-
-// Largest left-on and overcut (mm, both ≥ 0) of a deviation list.
-std::pair<double, double> extremes(const std::vector<double>& dev) {
-    double left = 0, over = 0;
-    for (double d : dev)
-        if (!std::isnan(d)) {
-            left = std::max(left, d);
-            over = std::max(over, -d);
-        }
-    return {left, over};
+    return escapeHtml(s);
 }
 
 const char* kStyle =
@@ -86,7 +35,7 @@ figcaption{font-size:.9em;color:#444;max-width:600px})";
 } // namespace
 
 std::string reportHtml(const Scene& scene, const CutResult& result,
-                       const SnapshotReport* pictures) {
+                       const ReportPictures* pictures) {
     const Units u = scene.units;
     auto len = [&](double mm) { return esc(formatLength(mm, u)); };
     auto small = [&](double mm) { return esc(formatSmallLength(mm, u)); };
@@ -107,12 +56,10 @@ std::string reportHtml(const Scene& scene, const CutResult& result,
     h += fmt::format(" Most metal left on: {}; most overcut: {}.</p>\n", small(result.maxLeftOnMm),
                      small(result.maxOvercutMm));
 
-    h += "<div class=\"caution\"><b>Cautions.</b> This is a simulation of the geometry only: it "
-         "does not model cutting forces, deflection of the work or the tool, chatter, tool wear, "
-         "heat or the machine's own errors. Check the first part by measuring it before trusting "
-         "the numbers. Lock the slides that do not move, keep hands and loose clothing away from "
-         "the chuck and the work while the spindle turns, remove the chuck key, wear eye "
-         "protection, and stop the spindle before measuring.</div>\n";
+    h += "<div class=\"caution\"><b>Cautions.</b><ul>\n";
+    for (const std::string& c : safetyCautions())
+        h += "<li>" + esc(c) + "</li>\n";
+    h += "</ul></div>\n";
 
     // Set-up figures.
     h += "<h2>Set-up</h2>\n<table>\n";
@@ -196,18 +143,18 @@ std::string reportHtml(const Scene& scene, const CutResult& result,
         namespace fs = std::filesystem;
         h += "<h2>Pictures</h2>\n";
         const std::pair<std::string, const char*> figs[] = {
-            {pictures->partPng,
+            {pictures->part,
              "The part as cut, coloured by deviation from the drawing (red: metal "
              "left on, blue: overcut, grey: within a small fraction of the tolerance). "
              "Amber in the cut-away: metal above the drawing."},
-            {pictures->conePng, "The cone filling the picture: the same colours."},
-            {pictures->sectionPng, "Section through the axis with the deviation magnified."},
-            {pictures->chartPng, "Deviation along the cone with the tolerance lines."},
-            {pictures->marksPng,
+            {pictures->cone, "The cone filling the picture: the same colours."},
+            {pictures->section, "Section through the axis with the deviation magnified."},
+            {pictures->chart, "Deviation along the cone with the tolerance lines."},
+            {pictures->marks,
              "Close-up at the gauge plane: the feed marks of the finishing pass, "
              "drawn higher than they are (the factor is written on the picture); "
              "the colours are true to scale."},
-            {pictures->marksSectionPng,
+            {pictures->marksSection,
              "Section of the same stretch, deviation magnified: the feed "
              "marks on the operator's side."}};
         for (const auto& [path, caption] : figs) {
@@ -231,9 +178,10 @@ std::string reportHtml(const Scene& scene, const CutResult& result,
         };
         std::string after = "-", over = "-";
         if (k < result.afterPass.size()) {
-            const auto [l, o] = extremes(deviationFromNominal(result.afterPass[k], result.nominal));
-            after = small(l);
-            over = small(o);
+            const DeviationExtremes e = deviationExtremes(
+                normalDeviation(scene.part, result.nominal, result.afterPass[k]));
+            after = small(e.leftOnMm);
+            over = small(e.overcutMm);
         }
         std::string finds;
         for (const Finding& f : result.findings)
@@ -252,17 +200,17 @@ std::string reportHtml(const Scene& scene, const CutResult& result,
          (scene.setup.crossDial == DialMode::Diameter ? "diameter" : "radius") +
          "). Deviations are measured normal to the drawn surface: + metal left on, &minus; "
          "overcut.</p>\n";
-    h += "<p style=\"color:#666;font-size:.9em\">Made by swarf. The simulation does not model "
-         "forces, deflection or chatter.</p>\n</body></html>\n";
+    h += "<p style=\"color:#666;font-size:.9em\">Made by swarf; the cautions at the top of this "
+         "page apply.</p>\n</body></html>\n";
     return h;
 }
 
 std::string writeReport(const Scene& scene, const CutResult& result, const std::string& outDir,
-                        const SnapshotReport* pictures) {
-    detail::makeDirectory(outDir);
+                        const ReportPictures* pictures) {
+    makeOutputFolder(outDir);
     const std::string path = (std::filesystem::path(outDir) / "report.html").string();
-    detail::writeTextAtomic(path, reportHtml(scene, result, pictures));
+    writeTextFile(path, reportHtml(scene, result, pictures));
     return path;
 }
 
-} // namespace swarf::viewer
+} // namespace swarf::io

@@ -2,7 +2,7 @@
 // divisions, the checks and roughness, and a self-contained HTML page.
 #include "swarf/io/scene_reader.h"
 #include "swarf/sim/planner.h"
-#include "swarf/viewer/setup_sheet.h"
+#include "swarf/io/setup_sheet.h"
 
 #include <catch2/catch.hpp>
 
@@ -22,10 +22,10 @@ bool has(const std::string& text, const std::string& part) {
 
 } // namespace
 
-TEST_CASE("the sheet carries the safety cautions", "[viewer][sheet]") {
+TEST_CASE("the sheet carries the safety cautions", "[io][sheet]") {
     const ConePlan plan = planOf("plan-lathe-centre.toml");
     REQUIRE(plan.planned);
-    for (const std::string& text : {viewer::setupSheetText(plan), viewer::setupSheetHtml(plan)}) {
+    for (const std::string& text : {io::setupSheetText(plan), io::setupSheetHtml(plan)}) {
         CHECK(has(text, "chuck key"));
         CHECK(has(text, "gloves"));
         CHECK(has(text, "eye"));
@@ -38,10 +38,10 @@ TEST_CASE("the sheet carries the safety cautions", "[viewer][sheet]") {
     }
 }
 
-TEST_CASE("each pass's readings appear as turns and divisions", "[viewer][sheet]") {
+TEST_CASE("each pass's readings appear as turns and divisions", "[io][sheet]") {
     const ConePlan plan = planOf("plan-lathe-centre.toml");
     REQUIRE(plan.planned);
-    const std::string text = viewer::setupSheetText(plan);
+    const std::string text = io::setupSheetText(plan);
     const Setup& su = plan.scene.setup;
     for (const Pass& p : plan.scene.plan.passes) {
         if (p.kind != PassKind::Compound)
@@ -56,20 +56,20 @@ TEST_CASE("each pass's readings appear as turns and divisions", "[viewer][sheet]
     CHECK(has(text, "rolls"));
     CHECK(has(text, "Sine bar"));
     CHECK(has(text, "increasing direction"));
-    CHECK(viewer::dialReadingText(su.cross, -0.5, Units::Mm) == "-0.500 mm (-1 turns + 75 div)");
+    CHECK(io::dialReadingText(su.cross, -0.5, Units::Mm) == "-0.500 mm (-1 turns + 75 div)");
 }
 
-TEST_CASE("an inch scene's sheet is in inch", "[viewer][sheet][units]") {
+TEST_CASE("an inch scene's sheet is in inch", "[io][sheet][units]") {
     const ConePlan plan = planOf("plan-morse-3-inch.toml");
     REQUIRE(plan.planned);
-    const std::string text = viewer::setupSheetText(plan);
+    const std::string text = io::setupSheetText(plan);
     CHECK(has(text, "0.9380 in"));
     CHECK(has(text, "thou"));
     CHECK_FALSE(has(text, " mm"));
 }
 
-TEST_CASE("the HTML page is self-contained", "[viewer][sheet]") {
-    const std::string html = viewer::setupSheetHtml(planOf("plan-7-24-taper.toml"));
+TEST_CASE("the HTML page is self-contained", "[io][sheet]") {
+    const std::string html = io::setupSheetHtml(planOf("plan-7-24-taper.toml"));
     CHECK(html.rfind("<!DOCTYPE html>", 0) == 0);
     CHECK_FALSE(has(html, "http"));
     CHECK_FALSE(has(html, "<script"));
@@ -78,10 +78,10 @@ TEST_CASE("the HTML page is self-contained", "[viewer][sheet]") {
     CHECK(has(html, "</html>"));
 }
 
-TEST_CASE("a refused cone's sheet gives the reasons and the suggestions", "[viewer][sheet]") {
+TEST_CASE("a refused cone's sheet gives the reasons and the suggestions", "[io][sheet]") {
     const ConePlan plan = planOf("plan-valve-seat-rub.toml");
     REQUIRE_FALSE(plan.planned);
-    const std::string text = viewer::setupSheetText(plan);
+    const std::string text = io::setupSheetText(plan);
     CHECK(has(text, "cannot follow"));
     CHECK(has(text, "shape V"));
     CHECK(has(text, "chuck key"));

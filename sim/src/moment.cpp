@@ -1,17 +1,15 @@
-// The viewer's description of one moment of the plan (see moment.h).
-#include "swarf/viewer/moment.h"
+// One moment of the plan (see moment.h).
+#include "swarf/sim/moment.h"
 
+#include "swarf/sim/compare.h"
 #include "swarf/sim/kernel.h"
 
 #include <algorithm>
 #include <cmath>
-#include <limits>
 
-namespace swarf::viewer {
+namespace swarf {
 
 namespace {
-
-constexpr double kNaN = std::numeric_limits<double>::quiet_NaN();
 
 // Where the slider is: pass index and how far through it, by tool-path length.
 struct PassPoint {
@@ -41,72 +39,6 @@ double lerp(double a, double b, double t) {
 }
 
 } // namespace
-
-const char* passKindName(PassKind kind) {
-    switch (kind) {
-    case PassKind::Compound:
-        return "compound";
-    case PassKind::Saddle:
-        return "saddle";
-    case PassKind::CrossSlide:
-        return "cross-slide";
-    case PassKind::Path:
-        return "path";
-    }
-    return "?";
-}
-
-double profileRadiusAt(const Profile& p, double zMm) {
-    if (p.radiusMm.empty())
-        return kNaN;
-    if (p.radiusMm.size() == 1 || p.dzMm <= 0)
-        return p.radiusMm.front();
-    const double u = (zMm - p.z0Mm) / p.dzMm;
-    if (u <= 0)
-        return p.radiusMm.front();
-    const auto last = p.radiusMm.size() - 1;
-    if (u >= static_cast<double>(last))
-        return p.radiusMm.back();
-    const auto i = static_cast<std::size_t>(u);
-    const double t = u - static_cast<double>(i);
-    // On a sample, that sample: a NaN neighbour (the edge of the drawing) must not spread.
-    if (t == 0)
-        return p.radiusMm[i];
-    return lerp(p.radiusMm[i], p.radiusMm[i + 1], t);
-}
-
-std::vector<double> deviationFromNominal(const Profile& profile, const Profile& nominal) {
-    const std::size_t n = profile.radiusMm.size();
-    std::vector<double> dev(n, kNaN);
-    const bool sameGrid = nominal.radiusMm.size() == n &&
-                          std::fabs(nominal.z0Mm - profile.z0Mm) < 1e-9 &&
-                          std::fabs(nominal.dzMm - profile.dzMm) < 1e-12;
-    auto nominalAt = [&](std::size_t i) {
-        return sameGrid ? nominal.radiusMm[i] : profileRadiusAt(nominal, profile.zAt(i));
-    };
-    for (std::size_t i = 0; i < n; ++i) {
-        const double rn = nominalAt(i);
-        if (std::isnan(rn))
-            continue;
-        // Slope of the drawn surface from its neighbours, so the deviation is taken normal to it
-        // (a radial difference δ on a surface at half angle α is δ·cos α away from it).
-        double slope = 0;
-        const double rPrev = i > 0 ? nominalAt(i - 1) : kNaN;
-        const double rNext = i + 1 < n ? nominalAt(i + 1) : kNaN;
-        if (!std::isnan(rPrev) && !std::isnan(rNext))
-            slope = (rNext - rPrev) / (2 * profile.dzMm);
-        else if (!std::isnan(rNext))
-            slope = (rNext - rn) / profile.dzMm;
-        else if (!std::isnan(rPrev))
-            slope = (rn - rPrev) / profile.dzMm;
-        // A face (vertical step in the drawing) would give a huge slope; the radial difference is
-        // then meaningless, so leave it out.
-        if (!std::isfinite(slope) || std::fabs(slope) > 50)
-            continue;
-        dev[i] = (profile.radiusMm[i] - rn) / std::sqrt(1 + slope * slope);
-    }
-    return dev;
-}
 
 std::vector<std::size_t> movesOfPass(const CutResult& result, int pass) {
     std::vector<std::size_t> idx;
@@ -190,9 +122,11 @@ MomentView describeMoment(const Scene& scene, const CutResult& result, double po
         v.profile = result.asCut;
     if (v.finished && result.deviationMm.size() == v.profile.radiusMm.size())
         v.deviationMm = result.deviationMm;
+    else if (result.nominal.radiusMm.size() == v.profile.radiusMm.size())
+        v.deviationMm = normalDeviation(scene.part, result.nominal, v.profile);
     else
-        v.deviationMm = deviationFromNominal(v.profile, result.nominal);
+        v.deviationMm = normalDeviation(scene.part, nominalOnGrid(scene.part, v.profile), v.profile);
     return v;
 }
 
-} // namespace swarf::viewer
+} // namespace swarf

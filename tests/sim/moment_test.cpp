@@ -1,7 +1,7 @@
-// Tests of swarf/viewer/moment.h: what the viewer shows at a slider position.
-#include "swarf/viewer/moment.h"
+// Tests of swarf/sim/moment.h: the cut at a slider position.
+#include "swarf/sim/moment.h"
 
-#include "synthetic.h"
+#include "support/synthetic.h"
 
 #include <catch2/catch.hpp>
 
@@ -27,11 +27,11 @@ double maxDiff(const Profile& a, const Profile& b) {
 
 } // namespace
 
-TEST_CASE("whole slider positions show the profile after that pass", "[viewer][moment]") {
+TEST_CASE("whole slider positions show the profile after that pass", "[sim][moment]") {
     const Scene s = test::syntheticScene(3);
     const CutResult r = test::syntheticResult(s, leftOn);
     for (int k = 0; k < 3; ++k) {
-        const auto m = viewer::describeMoment(s, r, k + 1.0);
+        const auto m = describeMoment(s, r, k + 1.0);
         CHECK(m.pass == k);
         CHECK(m.passFraction == 1.0);
         CHECK(maxDiff(m.profile, r.afterPass[static_cast<std::size_t>(k)]) == 0.0);
@@ -44,38 +44,38 @@ TEST_CASE("whole slider positions show the profile after that pass", "[viewer][m
         CHECK(m.crossMm == Approx(2.0 * k));
         CHECK(m.compoundMm == Approx(40));
     }
-    const auto before = viewer::describeMoment(s, r, 0);
+    const auto before = describeMoment(s, r, 0);
     CHECK(before.pass == -1);
     CHECK(maxDiff(before.profile, r.stock) == 0.0);
     CHECK(before.compoundMm == Approx(0));
-    const auto end = viewer::describeMoment(s, r, 99); // clamped
+    const auto end = describeMoment(s, r, 99); // clamped
     CHECK(end.finished);
     CHECK(end.position == 3);
     CHECK(maxDiff(end.profile, r.asCut) == 0.0);
 }
 
-TEST_CASE("deviation at a moment is normal to the drawing, + left on", "[viewer][moment]") {
+TEST_CASE("deviation at a moment is normal to the drawing, + left on", "[sim][moment]") {
     const Scene s = test::syntheticScene(3);
     const CutResult r = test::syntheticResult(s, leftOn);
-    const auto m = viewer::describeMoment(s, r, 1.0);   // 1.0 mm left on radially
+    const auto m = describeMoment(s, r, 1.0);   // 1.0 mm left on radially
     const double cosA = 1 / std::sqrt(1 + 0.05 * 0.05); // derived: normal of a 1:10 cone
     const std::size_t mid = 2100;                       // z = 20
     CHECK(m.deviationMm[mid] == Approx(1.0 * cosA).epsilon(1e-9));
     CHECK(std::isnan(m.deviationMm[50])); // z = −0.5: off the drawing
     CHECK(std::isnan(m.deviationMm[5000]));
     // The finished part uses the kernel's own deviation.
-    const auto end = viewer::describeMoment(s, r, 3.0);
+    const auto end = describeMoment(s, r, 3.0);
     CHECK(end.deviationMm[mid] == r.deviationMm[mid]);
 }
 
-TEST_CASE("readings and tip are interpolated along the move within a pass", "[viewer][moment]") {
+TEST_CASE("readings and tip are interpolated along the move within a pass", "[sim][moment]") {
     const Scene s = test::syntheticScene(3);
     const CutResult r = test::syntheticResult(s, leftOn);
-    const auto idx = viewer::movesOfPass(r, 1);
+    const auto idx = movesOfPass(r, 1);
     REQUIRE(idx.size() == 1);
     CHECK(idx[0] == 1);
     // Position 1.25: a quarter of the way through pass 2 (its move runs (0, 10.6) → (40, 12.6)).
-    const auto m = viewer::describeMoment(s, r, 1.25);
+    const auto m = describeMoment(s, r, 1.25);
     CHECK(m.pass == 1);
     CHECK(m.passFraction == Approx(0.25));
     CHECK(m.compoundMm == Approx(10));
@@ -83,16 +83,5 @@ TEST_CASE("readings and tip are interpolated along the move within a pass", "[vi
     CHECK(m.tipZX.x() == Approx(10));
     CHECK(m.tipZX.y() == Approx(11.1));
     CHECK_FALSE(m.finished);
-    CHECK(std::string(viewer::passKindName(PassKind::Saddle)) == "saddle");
-}
-
-TEST_CASE("profileRadiusAt interpolates and clamps", "[viewer][moment]") {
-    Profile p;
-    p.z0Mm = 1;
-    p.dzMm = 0.5;
-    p.radiusMm = {2, 4, 8};
-    CHECK(viewer::profileRadiusAt(p, 1.25) == Approx(3));
-    CHECK(viewer::profileRadiusAt(p, 0) == 2);
-    CHECK(viewer::profileRadiusAt(p, 9) == 8);
-    CHECK(std::isnan(viewer::profileRadiusAt(Profile{}, 1)));
+    CHECK(std::string(passKindName(PassKind::Saddle)) == "saddle");
 }

@@ -1,0 +1,21 @@
+#pragma once
+// The safety cautions every output of swarf carries, written once: the console, the set-up
+// sheets, the report, the planned scene's header and the window all take them from here.
+#include <string>
+#include <vector>
+
+namespace swarf {
+
+/// The cautions in full, one per entry, for sheets, the report and the README: guards and the
+/// chuck key, clothing and eyes, stick-out and support, speeds and feeds from the tooling
+/// supplier, the shop's rules, and what the simulation does not model.
+const std::vector<std::string>& safetyCautions();
+
+/// The cautions in two sentences, for the console, the window's help and a page's footer.
+const std::string& safetyCautionShort();
+
+/// `text` broken into lines of at most `width` characters (counting UTF-8 code points) at
+/// spaces, for the console and file headers. A word longer than `width` stands on its own line.
+std::vector<std::string> wrapWords(const std::string& text, std::size_t width);
+
+} // namespace swarf

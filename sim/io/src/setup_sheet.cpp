@@ -1,0 +1,311 @@
+// The set-up sheet (see setup_sheet.h): built section by section as a document, then rendered
+// as plain text or as HTML (sheet_document.h).
+#include "swarf/io/setup_sheet.h"
+
+#include "sheet_document.h"
+#include "swarf/sim/caution.h"
+
+#include <cmath>
+#include <cstdio>
+#include <string>
+#include <vector>
+
+namespace swarf::io {
+namespace {
+
+using detail::Block;
+using detail::Document;
+using detail::listBlock;
+using detail::paragraph;
+using detail::Section;
+using detail::Table;
+
+// What every section builder needs: the plan, its scene, and lengths in the scene's units.
+struct Ctx {
+    const ConePlan& plan;
+    const Scene& sc;
+    Units u;
+    const Setup& su;
+    std::string L(double mm, Precision p = Precision::Normal) const {
+        return formatLength(mm, u, p);
+    }
+    std::string feed(double mmPerRev) const { return formatLengthNumber(mmPerRev, u); }
+};
+
+const char* towardName(Widens w) {
+    return w == Widens::TowardChuck ? "chuck" : "tailstock";
+}
+
+// A compact table cell: "-13.950 [-7 t + 2.5]" (value in the scene's units, turns, division).
+std::string cell(const Slide& slide, double readingMm, Units u) {
+    const DialSetting d = dialSetting(slide, readingMm);
+    const double frac = d.division - std::floor(d.division);
+    char buf[96];
+    std::snprintf(buf, sizeof buf, "%s\u00a0[%ld\u00a0t\u00a0+\u00a0%.*f]",
+                  formatLengthNumber(readingMm, u).c_str(), d.turns,
+                  frac < 1e-6 || frac > 1 - 1e-6 ? 0 : 1, d.division);
+    return buf;
+}
+
+Section safetySection() {
+    return {"Safety first", {listBlock(safetyCautions(), Block::Kind::Warn)}};
+}
+
+Section noPlanSection(const ConePlan& plan) {
+    Section no{"No plan", {listBlock(plan.problems)}};
+    if (!plan.suggestions.empty()) {
+        no.blocks.push_back(paragraph("Inserts and holders that can follow this cone:"));
+        no.blocks.push_back(listBlock(plan.suggestions));
+    }
+    return no;
+}
+
+Section jobSection(const Ctx& c) {
+    const Feature& f = c.sc.part.features[c.plan.featureIndex];
+    const Cone& cone = f.cone;
+    const Tool& t = c.sc.tool;
+    const Setup& su = c.su;
+    std::vector<std::string> jl;
+    jl.push_back("Cone '" + f.name + "': Ø" + c.L(cone.gaugeDiameterMm) + " ± " +
+                 c.L(f.toleranceMm) + " at the gauge plane " + c.L(cone.gaugeZMm) +
+                 " from the datum face; from " + c.L(f.zStartMm) + " to " + c.L(f.zEndMm) +
+                 ", widening toward the " + towardName(cone.widens) + ".");
+    char ratio[32];
+    std::snprintf(ratio, sizeof ratio, "%.3f", cone.ratioK());
+    jl.push_back("Half angle θ = " + formatDms(c.plan.halfAngleRad, 1) + " (included " +
+                 formatDms(2 * c.plan.halfAngleRad, 1) + "; taper 1:" + ratio +
+                 " on diameter), ± " + formatDms(f.angleToleranceRad, 0) + ".");
+    jl.push_back("Bar Ø" + c.L(c.sc.stock.diameterMm) + ", " + c.L(c.sc.stock.stickOutMm) +
+                 " out of the jaws" +
+                 (c.sc.stock.material.empty() ? "" : ", " + c.sc.stock.material) + ".");
+    const char* hand = t.hand == Hand::L ? "L" : t.hand == Hand::N ? "N" : "R";
+    jl.push_back(std::string("Insert shape ") + (t.shape ? std::string(1, t.shape) : "?") +
+                 ", nose radius " + c.L(t.noseRadiusMm) + ", entering angle " +
+                 formatDms(t.enteringAngleRad, 0) +
+                 (t.holderCode.empty() ? "" : " (holder style " + t.holderCode + ")") + ", hand " +
+                 hand + ", tip " +
+                 (t.tipHeightMm == 0 ? "on centre" : c.L(t.tipHeightMm) + " off centre") + ".");
+    jl.push_back(std::string("Cross-slide dial reads on ") +
+                 (su.crossDial == DialMode::Diameter ? "diameter" : "radius") + ", " +
+                 c.L(su.cross.mmPerDivision) + " per division, " +
+                 std::to_string(su.cross.divisionsPerTurn) + " divisions a turn; compound " +
+                 c.L(su.compound.mmPerDivision) + " per division, " +
+                 std::to_string(su.compound.divisionsPerTurn) + " a turn; saddle " +
+                 c.L(su.saddle.mmPerDivision) + " per division, " +
+                 std::to_string(su.saddle.divisionsPerTurn) + " a turn.");
+    if (su.spindleRpm) {
+        char rpm[32];
+        std::snprintf(rpm, sizeof rpm, "%.0f", *su.spindleRpm);
+        jl.push_back(std::string("Spindle ") + rpm +
+                     " rev/min (check it against the supplier's data).");
+    }
+    return {"The job", {listBlock(jl)}};
+}
+
+std::string sineBarLine(const Ctx& c) {
+    const auto& sb = c.plan.sineBar;
+    std::string s = "Sine bar " + c.L(sb.barLengthMm) + " at " + formatDms(sb.angleRad, 1) +
+                    ": gauge stack " + c.L(sb.stackMm, Precision::Fine);
+    auto blocks = [&](const std::vector<double>& b) {
+        std::string t;
+        for (std::size_t i = 0; i < b.size(); ++i)
+            t += (i ? " + " : "") + c.L(b[i]);
+        return t;
+    };
+    if (!sb.blocksMm.empty() && sb.baseBlocksMm.empty())
+        s += " = " + blocks(sb.blocksMm);
+    else if (!sb.blocksMm.empty())
+        s += ", too short to build alone: stand the raised roll on " + blocks(sb.blocksMm) +
+             " and the other roll on " + blocks(sb.baseBlocksMm);
+    else
+        s += " (the gauge block set cannot build it: use the nearest stack and note the angle it "
+             "gives)";
+    return s + ". Lay the bar at that angle to a reference trued parallel to the spindle axis, run "
+               "an indicator on the compound along it, and swivel the compound until the reading "
+               "stays put.";
+}
+
+Section compoundSection(const Ctx& c) {
+    const ConePlan& plan = c.plan;
+    std::vector<std::string> cl;
+    cl.push_back("Compound on its scale: " + formatDms(plan.compoundReadingRad, 0) +
+                 (c.su.compoundScale == CompoundScale::FromAxis
+                      ? " (scale read from the spindle axis)"
+                      : " (scale read from the cross-slide: 90° − θ)") +
+                 "; winding it in moves the tool toward the " +
+                 towardName(c.su.compoundAdvanceToward) + ".");
+    cl.push_back(sineBarLine(c));
+    cl.push_back(
+        "Nose-radius offset (plane geometry): a tip placed on the drawn cone line would leave " +
+        formatSmallLength(plan.noseNormalErrorMm, c.u) +
+        " normal to the cone; the finishing readings already include the offset (tip line " +
+        c.L(std::fabs(plan.noseOffsetRadialMm), Precision::Fine) + " on radius " +
+        (plan.noseOffsetRadialMm < 0 ? "inside" : "outside") + " the drawn line, the same as " +
+        c.L(std::fabs(plan.noseOffsetAxialMm), Precision::Fine) + " along the axis).");
+    return {"Compound and nose-radius offset", {listBlock(cl)}};
+}
+
+Section readingsSection(const Ctx& c) {
+    Section refs{"References and readings", {}};
+    refs.blocks.push_back(paragraph(
+        "Readings are dial readings in " + std::string(unitName(c.u)) +
+        "; in the table, [n t + d] means n whole turns from zero (negative: back from zero), then "
+        "division d on the dial, which wraps every turn. Approach every reading "
+        "in its increasing direction (cross-slide: in toward the centre; compound: in; saddle: "
+        "toward the chuck): wind back past it, then forward to it. The readings then need no "
+        "backlash correction. Lock the slides that do not move during a pass."));
+    refs.blocks.push_back(paragraph(
+        "Stage A readings count from the first touch-off on the bar (Ø" +
+        c.L(c.sc.stock.diameterMm) +
+        ") and its end face. Stage B readings count from the references: the cross-slide reads 0 "
+        "at Ø" +
+        c.L(c.su.zeroDiameterMm) + ", the saddle reads 0 with the tip at " + c.L(c.su.zeroZMm) +
+        " from the datum face."));
+    return refs;
+}
+
+Section operationsSection(const Ctx& c) {
+    const ConePlan& plan = c.plan;
+    const Setup& su = c.su;
+    const Units u = c.u;
+    std::vector<std::string> numbered;
+    Table passes;
+    const std::string un = unitName(u);
+    passes.head = {"step",           "pass",         "stage", "moves", "cross-slide " + un,
+                   "compound " + un, "saddle " + un, "from",  "to",    "feed " + un + "/rev"};
+    int stepNo = 0;
+    for (const PlanStep& st : plan.steps) {
+        ++stepNo;
+        if (st.kind != PlanStep::Kind::Pass) {
+            numbered.push_back(std::to_string(stepNo) + ". " + st.text);
+            continue;
+        }
+        const Pass& p = c.sc.plan.passes[st.pass];
+        const PassDisplay& d = plan.display[st.pass];
+        const double cOff = d.stage == 0 ? plan.stage0CrossOffsetMm : 0.0;
+        const double sOff = d.stage == 0 ? plan.stage0SaddleOffsetMm : 0.0;
+        const bool mC = p.kind == PassKind::CrossSlide, mP = p.kind == PassKind::Compound,
+                   mS = p.kind == PassKind::Saddle;
+        const Slide& moving = mC ? su.cross : mP ? su.compound : su.saddle;
+        const double off = mC ? cOff : mS ? sOff : 0.0;
+        // The readings in words too, so the line can be followed without the table.
+        std::string locked;
+        if (!mC)
+            locked += "cross-slide " + cell(su.cross, p.crossMm + cOff, u);
+        if (!mP)
+            locked += std::string(locked.empty() ? "" : ", ") + "compound " +
+                      cell(su.compound, p.compoundMm, u);
+        if (!mS)
+            locked += std::string(locked.empty() ? "" : ", ") + "saddle " +
+                      cell(su.saddle, p.saddleMm + sOff, u);
+        numbered.push_back(std::to_string(stepNo) + ". Pass " + std::to_string(st.pass + 1) +
+                           " (stage " + (d.stage == 0 ? "A" : "B") + "): " + p.note + ". Set " +
+                           locked + "; wind the " + passKindName(p.kind) + " from " +
+                           cell(moving, p.fromMm + off, u) + " to " +
+                           cell(moving, p.toMm + off, u) + " at " + c.feed(p.feedMmPerRev) + " " +
+                           unitName(u) + "/rev.");
+        passes.rows.push_back(
+            {std::to_string(stepNo), std::to_string(st.pass + 1), d.stage == 0 ? "A" : "B",
+             passKindName(p.kind), mC ? "moves" : cell(su.cross, p.crossMm + cOff, u),
+             mP ? "moves" : cell(su.compound, p.compoundMm, u),
+             mS ? "moves" : cell(su.saddle, p.saddleMm + sOff, u), cell(moving, p.fromMm + off, u),
+             cell(moving, p.toMm + off, u), c.feed(p.feedMmPerRev)});
+    }
+    return {"Order of operations",
+            {listBlock(numbered, Block::Kind::Numbered), detail::tableBlock(passes)}};
+}
+
+Section checksSection(const Ctx& c) {
+    const ConePlan& plan = c.plan;
+    const auto& rolls = plan.rolls;
+    return {"Checks before the finishing pass",
+            {listBlock({
+                "Diameter at " + c.L(plan.checkZMm) + " from the datum face: Ø" +
+                    c.L(plan.checkDiameterRoughMm) + " before finishing, Ø" +
+                    c.L(plan.checkDiameterFinishedMm) + " finished.",
+                "Over two Ø" + c.L(rolls.rollDiameterMm) + " rolls, roll centres at " +
+                    c.L(rolls.z1Mm) + " and " + c.L(rolls.z2Mm) + " from the datum face (" +
+                    c.L(rolls.height1Mm) + " and " + c.L(rolls.height2Mm) +
+                    " from the cone's small end): before finishing " +
+                    c.L(rolls.reading1Mm + rolls.roughExtraMm) + " and " +
+                    c.L(rolls.reading2Mm + rolls.roughExtraMm) + "; finished " +
+                    c.L(rolls.reading1Mm) + " and " + c.L(rolls.reading2Mm) +
+                    ". The difference, " + c.L(rolls.reading2Mm - rolls.reading1Mm) +
+                    ", checks the angle at any size.",
+                "Compound angle with the sine bar stack above, before the first cone pass.",
+            })}};
+}
+
+Section finishSection(const Ctx& c) {
+    return {"Expected finish",
+            {paragraph("Finishing pass at " +
+                       formatLength(c.sc.planning.finishFeedMmPerRev, c.u) + "/rev with a " +
+                       c.L(c.sc.tool.noseRadiusMm) + " nose: theoretical Rt " +
+                       formatSmallLength(c.plan.rtMm, c.u) + ", Ra " +
+                       formatSmallLength(c.plan.raMm, c.u) +
+                       " (from feed and nose radius only; the real finish also depends on the "
+                       "material, the edge, speed and rigidity).")}};
+}
+
+Section proofSection(const Ctx& c, const CutResult& proof) {
+    std::vector<std::string> l;
+    l.push_back(std::string("Verdict: ") +
+                (proof.withinTolerance ? "within tolerance" : "OUT OF TOLERANCE") + ".");
+    l.push_back("Gauge diameter as cut Ø" + c.L(proof.gaugeAsCutDiameterMm) + " (drawing Ø" +
+                c.L(proof.gaugeNominalDiameterMm) + "); most metal left on " +
+                formatSmallLength(proof.maxLeftOnMm, c.u) + ", deepest overcut " +
+                formatSmallLength(proof.maxOvercutMm, c.u) + ".");
+    for (const Finding& fd : proof.findings)
+        l.push_back(std::string(findingKindName(fd.kind)) + " (pass " +
+                    std::to_string(fd.pass + 1) + "): " + fd.message);
+    if (proof.findings.empty())
+        l.push_back("No findings.");
+    return {"The plan, simulated", {listBlock(l)}};
+}
+
+Document buildSheet(const ConePlan& plan, const CutResult* proof) {
+    const Ctx c{plan, plan.scene, plan.scene.units, plan.scene.setup};
+    Document sh;
+    sh.title = "Set-up sheet: " + c.sc.name;
+    sh.subtitle = c.sc.description;
+    sh.sections.push_back(safetySection());
+    if (!plan.planned) {
+        sh.sections.push_back(noPlanSection(plan));
+        return sh;
+    }
+    sh.sections.push_back(jobSection(c));
+    sh.sections.push_back(compoundSection(c));
+    sh.sections.push_back(readingsSection(c));
+    sh.sections.push_back(operationsSection(c));
+    sh.sections.push_back(checksSection(c));
+    sh.sections.push_back(finishSection(c));
+    if (!plan.cautions.empty())
+        sh.sections.push_back({"Notes for this job", {listBlock(plan.cautions, Block::Kind::Warn)}});
+    if (proof)
+        sh.sections.push_back(proofSection(c, *proof));
+    return sh;
+}
+
+} // namespace
+
+std::string dialReadingText(const Slide& slide, double readingMm, Units units) {
+    const DialSetting d = dialSetting(slide, readingMm);
+    // Whole divisions print without decimals; half divisions with one.
+    const double frac = d.division - std::floor(d.division);
+    char div[32];
+    std::snprintf(div, sizeof div,
+                  std::fabs(frac) < 1e-6 || std::fabs(frac - 1) < 1e-6 ? "%.0f" : "%.1f",
+                  d.division);
+    return formatLength(readingMm, units) + " (" + std::to_string(d.turns) + " turns + " + div +
+           " div)";
+}
+
+std::string setupSheetText(const ConePlan& plan, const CutResult* proof) {
+    return detail::renderText(buildSheet(plan, proof));
+}
+
+std::string setupSheetHtml(const ConePlan& plan, const CutResult* proof) {
+    return detail::renderHtml(buildSheet(plan, proof));
+}
+
+} // namespace swarf::io

@@ -1,0 +1,61 @@
+// The safety cautions (see caution.h).
+#include "swarf/sim/caution.h"
+
+#include <sstream>
+
+namespace swarf {
+
+const std::vector<std::string>& safetyCautions() {
+    static const std::vector<std::string> kCautions = {
+        "Keep every guard in place and closed. Take the chuck key out of the chuck every time, "
+        "before the spindle is started.",
+        "No gloves, loose sleeves, ties, jewellery or long loose hair near rotating work. Wear eye "
+        "protection. Clear swarf with a brush or hook, never by hand, and only with the spindle "
+        "stopped.",
+        "Keep the work's stick-out short (about three diameters or less in a chuck alone) or "
+        "support it with the tailstock; check the work is held tight before starting.",
+        "Take cutting speeds, feeds and depths of cut from the tooling supplier's data for this "
+        "insert and material; the feeds here are the plan's inputs, not a recommendation.",
+        "Defer to your shop's rules, local codes and licensed practice; swarf's figures do not "
+        "replace training or supervision.",
+        "The simulation behind these figures models the tool path and the insert's shape only. It "
+        "does not model cutting forces, deflection of the work or the tool, chatter or tool wear. "
+        "Check every reading on the machine and take a light trial cut before trusting any number "
+        "here.",
+    };
+    return kCautions;
+}
+
+const std::string& safetyCautionShort() {
+    static const std::string kShort =
+        "CAUTION: a simulation of the tool path and the insert's shape only; it does not model "
+        "cutting forces, deflection, chatter or tool wear. Check every reading on the machine and "
+        "take a trial cut; keep guards closed, take the chuck key out, no gloves or loose clothing "
+        "near rotating work, wear eye protection, take speeds and feeds from the tooling "
+        "supplier, and follow your shop's rules.";
+    return kShort;
+}
+
+std::vector<std::string> wrapWords(const std::string& text, std::size_t width) {
+    auto cols = [](const std::string& s) {
+        std::size_t n = 0;
+        for (unsigned char c : s)
+            n += (c & 0xC0) != 0x80;
+        return n;
+    };
+    std::vector<std::string> lines;
+    std::istringstream words(text);
+    std::string w, line;
+    while (words >> w) {
+        if (!line.empty() && cols(line) + 1 + cols(w) > width) {
+            lines.push_back(line);
+            line.clear();
+        }
+        line += (line.empty() ? "" : " ") + w;
+    }
+    if (!line.empty())
+        lines.push_back(line);
+    return lines;
+}
+
+} // namespace swarf
