@@ -8,7 +8,7 @@ namespace swarf {
 const std::vector<std::string>& safetyCautions() {
     static const std::vector<std::string> kCautions = {
         "Keep every guard in place and closed. Take the chuck key out of the chuck every time, "
-        "before the spindle is started.",
+        "before the spindle is started. Stop the spindle before you measure or reach in.",
         "No gloves, loose sleeves, ties, jewellery or long loose hair near rotating work. Wear eye "
         "protection. Clear swarf with a brush or hook, never by hand, and only with the spindle "
         "stopped.",
@@ -31,7 +31,7 @@ const std::string& safetyCautionShort() {
         "CAUTION: a simulation of the tool path and the insert's shape only; it does not model "
         "cutting forces, deflection, chatter or tool wear. Check every reading on the machine and "
         "take a trial cut; keep guards closed, take the chuck key out, no gloves or loose clothing "
-        "near rotating work, wear eye protection, take speeds and feeds from the tooling "
+        "near rotating work, wear eye protection, stop the spindle before measuring, take speeds and feeds from the tooling "
         "supplier, and follow your shop's rules.";
     return kShort;
 }

@@ -41,6 +41,12 @@ double halfAngleFromTwoDiameters(double z1Mm, double d1Mm, double z2Mm, double d
     return std::atan(std::fabs(d2Mm - d1Mm) / (2.0 * std::fabs(z2Mm - z1Mm)));
 }
 
+double otherEndDiameterMm(double gaugeDiameterMm, double halfAngleRad, double lengthMm,
+                          bool gaugeAtLargeEnd) {
+    const double c = 2 * std::tan(halfAngleRad);
+    return gaugeDiameterMm + (gaugeAtLargeEnd ? -1 : 1) * c * lengthMm;
+}
+
 double lengthBetweenDiameters(const Cone& cone, double d1Mm, double d2Mm) {
     return std::fabs(d2Mm - d1Mm) / cone.taperRate();
 }

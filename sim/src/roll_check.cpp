@@ -40,4 +40,8 @@ RollReadings rollReadingsForCone(double smallEndDiameterMm, double halfAngleRad,
     return r;
 }
 
+double highestRollStackMm(double coneLengthMm, double rollDiameterMm, double stepMm) {
+    return std::floor((coneLengthMm - rollDiameterMm) / stepMm) * stepMm;
+}
+
 } // namespace swarf

@@ -41,12 +41,9 @@ std::string formatLengthNumber(double mm, Units u, Precision p) {
 
 std::string formatSmallLength(double mm, Units u) {
     char buf[64];
-    if (u == Units::Inch) {
-        // The trade reads small inch lengths in thousandths ("thou").
-        std::snprintf(buf, sizeof buf, "%.2f thou", mm / kMmPerInch * 1000.0);
-    } else {
-        std::snprintf(buf, sizeof buf, "%.1f µm", mm * 1000.0);
-    }
+    // The trade reads small inch lengths in thousandths ("thou").
+    std::snprintf(buf, sizeof buf, u == Units::Inch ? "%.2f %s" : "%.1f %s", toSmallUnits(mm, u),
+                  smallUnitName(u));
     return buf;
 }
 

@@ -31,7 +31,7 @@ std::string deg(double rad) {
 
 std::string slideText(const Slide& s, Units u) {
     std::string t = fmt::format("{} per division, {} divisions a turn, backlash {}",
-                                formatLength(s.mmPerDivision, u, u == Units::Inch ? 4 : 3),
+                                formatLength(s.mmPerDivision, u, Precision::Normal),
                                 s.divisionsPerTurn, len(s.backlashMm, u));
     if (s.travelMm < 1e8)
         t += ", travel " + len(s.travelMm, u);
@@ -94,7 +94,7 @@ void printScene(const Scene& s) {
     fmt::print("scene: {} ({})\n", s.name, s.file);
     if (!s.description.empty())
         fmt::print("  {}\n", s.description);
-    fmt::print("units: {}\n", u == Units::Inch ? "inch" : "mm");
+    fmt::print("units: {}\n", unitWord(u));
     const Stock& st = s.stock;
     fmt::print(
         "stock: bar {} diameter, {} long, sticks out {} from the jaws ({:.1f} diameters){}\n",

@@ -39,11 +39,11 @@ Rgb coolWarm(double t) {
 }
 
 double DeviationScale::toDisplay(double mm) const {
-    return units == Units::Inch ? mm / kMmPerInch * 1000.0 : mm * 1000.0;
+    return toSmallUnits(mm, units);
 }
 
 const char* DeviationScale::displayUnit() const {
-    return units == Units::Inch ? "thou" : "µm";
+    return smallUnitName(units);
 }
 
 double DeviationScale::mapPosition(double deviationMm) const {

@@ -84,7 +84,4 @@ class PartScene {
     std::unique_ptr<Impl> impl_;
 };
 
-/// The keys of the window, one per line ("key  what it does"), for the help overlay.
-const char* helpText();
-
 } // namespace swarf::viewer::detail

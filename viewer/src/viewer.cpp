@@ -53,7 +53,8 @@ struct ViewerSession::Impl {
         part->setPosition(position);
         syncSlider();
     }
-    void onKey(const std::string& key, bool shift);
+    /// Acts on a key; false if the window has no use for it.
+    bool onKey(const std::string& key, bool shift);
     void afterCameraMove();
     bool zoomHintShown = false;
 };
@@ -101,7 +102,7 @@ class SwarfStyle : public vtkInteractorStyleTrackballCamera {
 };
 vtkStandardNewMacro(SwarfStyle);
 
-void ViewerSession::Impl::onKey(const std::string& key, bool shift) {
+bool ViewerSession::Impl::onKey(const std::string& key, bool shift) {
     using detail::View;
     const MomentView& m = part->moment();
     const double pos = m.position;
@@ -180,12 +181,13 @@ void ViewerSession::Impl::onKey(const std::string& key, bool shift) {
         part->setHelpVisible(!part->helpVisible());
     else if (key == "q" || key == "Escape") {
         interactor->TerminateApp();
-        return;
+        return true;
     } else
-        return;
+        return false;
     if (layersChanged)
         part->setLayers(layers);
     part->setStatus(status);
+    return true;
 }
 
 ViewerSession::ViewerSession(const Scene& scene, const CutResult& result,
@@ -300,9 +302,9 @@ const MomentView& ViewerSession::moment() const {
 int ViewerSession::passCount() const {
     return impl_->part->passCount();
 }
-void ViewerSession::pressKey(const std::string& key) {
+bool ViewerSession::pressKey(const std::string& key) {
     const bool shift = key.size() == 1 && std::isupper(static_cast<unsigned char>(key[0]));
-    impl_->onKey(key, shift);
+    return impl_->onKey(key, shift);
 }
 
 void ViewerSession::render() {

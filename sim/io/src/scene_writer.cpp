@@ -181,7 +181,7 @@ std::string sceneToToml(const Scene& sc, const std::vector<std::string>& headerC
         o.line(c.empty() ? "#" : "# " + c);
     o.str("name", sc.name);
     o.str("description", sc.description);
-    o.str("units", u == Units::Inch ? "inch" : "mm");
+    o.str("units", unitWord(u));
 
     o.line("");
     o.line("[stock]");

@@ -48,6 +48,12 @@ double halfAngleFromTwoDiameters(double z1Mm, double d1Mm, double z2Mm, double d
 /// Axial length (mm) over which the cone goes from diameter d1 to d2 (absolute).
 double lengthBetweenDiameters(const Cone& cone, double d1Mm, double d2Mm);
 
+/// Diameter (mm) at the far end of a cone `lengthMm` long, measured from its gauge plane where
+/// the diameter is gaugeDiameterMm: smaller by 2 L tan θ when the gauge plane is at the large
+/// end, larger when it is at the small end. May be ≤ 0 past the cone's point.
+double otherEndDiameterMm(double gaugeDiameterMm, double halfAngleRad, double lengthMm,
+                          bool gaugeAtLargeEnd);
+
 /// A standard taper from a published table (see ../references: R3).
 struct StandardTaper {
     std::string name;                      ///< canonical name, e.g. "Morse 3", "7:24", "NPT"

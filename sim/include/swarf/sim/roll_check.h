@@ -40,4 +40,9 @@ struct RollReadings {
 RollReadings rollReadingsForCone(double smallEndDiameterMm, double halfAngleRad,
                                  double rollDiameterMm, double stack1Mm, double stack2Mm);
 
+/// The highest stack (mm), a whole number of `stepMm`, that keeps rolls of diameter
+/// rollDiameterMm on a cone coneLengthMm long standing on its small end: the upper rolls' tops
+/// stay below its large end. 0 or less when the cone is too short for two heights.
+double highestRollStackMm(double coneLengthMm, double rollDiameterMm, double stepMm);
+
 } // namespace swarf

@@ -22,8 +22,19 @@ constexpr double toMm(double value, Units u) { return u == Units::Inch ? value *
 /// Millimetres to a length in the given units.
 constexpr double fromMm(double mm, Units u) { return u == Units::Inch ? mm / kMmPerInch : mm; }
 
-/// "mm" or "in".
+/// "mm" or "in": the unit after a number.
 inline const char* unitName(Units u) { return u == Units::Inch ? "in" : "mm"; }
+
+/// "mm" or "inch": the unit as a word, as scene files spell it (`units = "inch"`).
+inline const char* unitWord(Units u) { return u == Units::Inch ? "inch" : "mm"; }
+
+/// "µm" or "thou": the unit small lengths (deviations, bands) are shown in.
+inline const char* smallUnitName(Units u) { return u == Units::Inch ? "thou" : "µm"; }
+
+/// A small length in mm as a number in µm (mm scenes) or thou (inch scenes).
+constexpr double toSmallUnits(double mm, Units u) {
+    return u == Units::Inch ? mm / kMmPerInch * 1000.0 : mm * 1000.0;
+}
 
 /// How finely a length is shown for people. The inch shows one decimal more than the mm at each
 /// step but the last, as the trades read them.

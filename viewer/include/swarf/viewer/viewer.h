@@ -48,8 +48,9 @@ class ViewerSession {
     /// Number of passes (the slider's upper end).
     int passCount() const;
     /// Acts as if `key` had been pressed in the window (X key names: "Right", "Home", "h", "M",
-    /// ...; see viewer/KEYS.md), without drawing. Unknown keys do nothing. For tests and demos.
-    void pressKey(const std::string& key);
+    /// ...; see keys.h), without drawing. Returns false, doing nothing, for a key the window has
+    /// no use for. For tests and demos.
+    bool pressKey(const std::string& key);
     /// Draws one frame.
     void render();
     /// Turns the 3D camera about the vertical by `degrees` (benchmarks, demos).

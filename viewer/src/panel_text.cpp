@@ -1,0 +1,59 @@
+// The text of the window's panels (see panel_text.h).
+#include "panel_text.h"
+
+#include "swarf/sim/compare.h"
+
+#include <fmt/format.h>
+
+#include <cmath>
+
+namespace swarf::viewer::detail {
+
+std::string momentPanelText(const Scene& scene, const CutResult& result, const MomentView& m,
+                            const DeviationScale& scale) {
+    const Units u = scene.units;
+    std::string s = scene.name.empty() ? std::string("swarf") : scene.name;
+    s += "\n";
+    if (m.pass < 0) {
+        s += fmt::format("Before pass 1 of {}: the bar as it stands\n", m.passCount);
+    } else {
+        const int pct = static_cast<int>(std::lround(m.passFraction * 100));
+        s += fmt::format("Pass {} of {} ({}) {}\n", m.pass + 1, m.passCount, m.passKind,
+                         m.passFraction >= 1 ? "done" : fmt::format("{}% through", pct));
+        if (!m.passNote.empty())
+            s += m.passNote + "\n";
+        s += fmt::format("Feed {}/rev\n", formatLength(m.feedMmPerRev, u));
+    }
+    const bool diamDial = scene.setup.crossDial == DialMode::Diameter;
+    s += fmt::format("Cross-slide {} ({} dial)   Compound {}   Saddle {}\n",
+                     formatLength(m.crossMm, u), diamDial ? "diameter" : "radius",
+                     formatLength(m.compoundMm, u), formatLength(m.saddleMm, u));
+    const DeviationExtremes now = deviationExtremes(m.deviationMm);
+    s += fmt::format("Now: most left on {}, most overcut {} (tolerance +/-{})",
+                     formatSmallLength(now.leftOnMm, u), formatSmallLength(now.overcutMm, u),
+                     formatSmallLength(scale.bandMm, u));
+    if (m.finished)
+        s += fmt::format("\nVerdict: {}",
+                         result.withinTolerance ? "within tolerance" : "OUT OF TOLERANCE");
+    return s;
+}
+
+std::string closeUpPanelText(const Scene& scene, const CutResult& result, const MomentView& moment,
+                             const CloseUp& close) {
+    const Units u = scene.units;
+    std::string s = fmt::format("Close-up at the gauge plane: z {} to {}",
+                                formatLength(close.zFromMm, u), formatLength(close.zToMm, u));
+    const bool marks = moment.finished && result.surface.nz > 1 && result.rtUm > 0;
+    if (marks)
+        s += fmt::format("\nFeed marks {} apart, {} high (Rt), drawn {:g} times as high; "
+                         "colours are true to scale",
+                         formatLength(close.feedMmPerRev, u),
+                         formatSmallLength(result.rtUm / 1000, u), close.reliefFactor);
+    else if (moment.passCount == 0)
+        s += "\nThe plan has no passes: nothing is cut ('swarf plan' makes them)";
+    else if (!moment.finished)
+        s += "\nThe feed marks are worked out for the finished part only (End shows it)";
+    return s;
+}
+
+} // namespace swarf::viewer::detail

@@ -1,0 +1,95 @@
+#pragma once
+// Internal to the part_scene*.cpp files: the state of a PartScene, shared by the file that builds
+// its scene graph (part_scene_build.cpp), the one that fits its camera (part_scene_camera.cpp)
+// and the one that updates it to a moment (part_scene.cpp).
+//
+// Speed: llvmpipe (software OpenGL) shades every pixel on the CPU, so what is drawn is kept to
+// what the screen can show: the part from the rows that keep its corners and colours (a few
+// hundred, not the profile's tens of thousands), 72 columns round; what does not change with
+// the moment (the drawing's ghost, the stock outline, the jaws, the insert's shape) is built
+// once; the section and chart get min/max-decimated lines.
+#include "part_scene.h"
+#include "plots.h"
+
+#include <vtkActor.h>
+#include <vtkColorTransferFunction.h>
+#include <vtkLight.h>
+#include <vtkPolyDataMapper.h>
+#include <vtkRenderer.h>
+#include <vtkScalarBarActor.h>
+#include <vtkSmartPointer.h>
+#include <vtkTextActor.h>
+
+#include <Eigen/Core>
+#include <cmath>
+#include <memory>
+
+namespace swarf::viewer::detail {
+
+inline constexpr double kDeg = kPi / 180.0;
+// The cut-away: the quarter of the part facing up (φ from 45° to 135°, φ measured from the
+// operator's side toward the top) is left out so the section shows.
+inline constexpr double kCutFrom = 45 * kDeg, kCutTo = 135 * kDeg;
+// The whole part: at least this many rows evenly, more where corners or colours need them.
+inline constexpr std::size_t kBaseRows = 240, kMaxRows = 1500;
+inline constexpr int kColumns = 72; // round the part (5°): the silhouette is within 0.1 px of round
+// The close-up: rows across the stretch (ten per feed mark: fewer show as facets, more cost
+// frames in software OpenGL, measured in swarf_bench); every column of the 3D map
+// within 20° of where it looks (the picture shows about 15°), every fourth elsewhere.
+inline constexpr std::size_t kCloseRows = 400;
+inline constexpr int kCloseColumns = 120, kCloseCoarseStride = 4;
+inline constexpr double kCloseFineHalfWidth = 20 * kDeg;
+// Where the close-up looks along the surface: from the operator's side, a little above, square
+// to the axis, so that the marks stand as teeth along the top edge.
+inline const Eigen::Vector3d kCloseDir = Eigen::Vector3d(0, 1.0, 0.35).normalized();
+inline const double kCloseLimb = kPi - std::atan2(1.0, 0.35);
+// Points of the section's and chart's lines (min/max pairs): about two per pixel column.
+inline constexpr std::size_t kSectionPoints = 2400, kChartPoints = 1200;
+
+/// A new actor drawing through a new mapper (returned in `mapper`).
+vtkSmartPointer<vtkActor> makeActor(vtkSmartPointer<vtkPolyDataMapper>& mapper);
+
+struct PartScene::Impl {
+    explicit Impl(std::shared_ptr<const CutResult> r) : held(std::move(r)), result(*held) {}
+    Scene scene;
+    // Shared, not copied: the finished part's 3D surface alone is a few hundred MB.
+    std::shared_ptr<const CutResult> held;
+    const CutResult& result;
+    DeviationScale scale;
+    MomentView moment;
+    Layers layers;
+    CloseUp close;
+    bool closeUp = false;
+    double magnification = 200;
+    double coneZ0 = 0, coneZ1 = 0; // the main cone's extent (or the part's)
+    DeviationTrace sectionTrace;
+    // The finished part's line along the 3D surface, whole cone and close-up, every row: worked
+    // out once (a few hundred thousand rows), then decimated for each view.
+    DeviationTrace finishedLine[2];
+    bool finishedLineReady[2] = {false, false};
+    std::size_t partPolygons = 0;
+
+    vtkSmartPointer<vtkRenderer> main;
+    vtkSmartPointer<vtkColorTransferFunction> lut;
+    std::unique_ptr<SectionView> sectionView;
+    std::unique_ptr<DeviationChart> chartView;
+
+    vtkSmartPointer<vtkPolyDataMapper> partMapper, ghostMapper, leftoverMapper, coreMapper,
+        stockMapper, jawsMapper, insertMapper, pathMapper;
+    vtkSmartPointer<vtkActor> partActor, ghostActor, leftoverActor, coreActor, stockActor,
+        jawsActor, insertActor, pathActor;
+    vtkSmartPointer<vtkScalarBarActor> scalarBar;
+    vtkSmartPointer<vtkTextActor> panel, help, status, closeLabel;
+    vtkSmartPointer<vtkLight> light;
+
+    void buildLut();
+    void buildMain();
+    void buildGhost();
+    void update();
+    void updatePart();
+    void updatePlots();
+    void applyLayers();
+};
+
+
+} // namespace swarf::viewer::detail
