@@ -27,30 +27,13 @@ double noMetalRadiusMm(double faceRadiusMm) {
 } // namespace
 
 int featureAt(const Part& part, double zMm) {
-    int best = -1;
-    double bestR = -1;
-    for (std::size_t i = 0; i < part.features.size(); ++i) {
-        const Feature& f = part.features[i];
-        if (!isRadial(f) || zMm < f.zStartMm - kEpsZ || zMm > f.zEndMm + kEpsZ)
-            continue;
-        const double r = f.radiusAt(std::clamp(zMm, f.zStartMm, f.zEndMm));
-        if (r > bestR) {
-            bestR = r;
-            best = static_cast<int>(i);
-        }
-    }
-    return best;
+    return part.radialFeatureAt(zMm);
 }
 
 Profile nominalOnGrid(const Part& part, const Profile& grid) {
     Profile n = grid;
-    for (std::size_t i = 0; i < n.radiusMm.size(); ++i) {
-        const double z = grid.zAt(i);
-        const int f = featureAt(part, z);
-        n.radiusMm[i] = f < 0 ? kNaN
-                              : part.features[f].radiusAt(std::clamp(z, part.features[f].zStartMm,
-                                                                     part.features[f].zEndMm));
-    }
+    for (std::size_t i = 0; i < n.radiusMm.size(); ++i)
+        n.radiusMm[i] = part.nominalRadiusAt(grid.zAt(i)).value_or(kNaN);
     return n;
 }
 

@@ -64,18 +64,29 @@ double Feature::surfaceHalfAngleRad() const {
     return 0.0;
 }
 
-std::optional<double> Part::nominalRadiusAt(double zMm) const {
+int Part::radialFeatureAt(double zMm) const {
     constexpr double eps = 1e-9;
-    std::optional<double> r;
-    for (const Feature& f : features) {
-        if (zMm < f.zStartMm - eps || zMm > f.zEndMm + eps)
+    int best = -1;
+    double bestR = -1;
+    for (std::size_t i = 0; i < features.size(); ++i) {
+        const Feature& f = features[i];
+        if (f.kind == FeatureKind::Face || zMm < f.zStartMm - eps || zMm > f.zEndMm + eps)
             continue;
-        const double z = std::clamp(zMm, f.zStartMm, f.zEndMm);
-        const double here = f.radiusAt(z);
-        if (!r || here > *r)
-            r = here;
+        const double r = f.radiusAt(std::clamp(zMm, f.zStartMm, f.zEndMm));
+        if (r > bestR) {
+            bestR = r;
+            best = static_cast<int>(i);
+        }
     }
-    return r;
+    return best;
+}
+
+std::optional<double> Part::nominalRadiusAt(double zMm) const {
+    const int i = radialFeatureAt(zMm);
+    if (i < 0)
+        return std::nullopt;
+    const Feature& f = features[static_cast<std::size_t>(i)];
+    return f.radiusAt(std::clamp(zMm, f.zStartMm, f.zEndMm));
 }
 
 const Feature* Part::mainCone() const {

@@ -13,15 +13,6 @@ namespace {
 
 constexpr double kNaN = std::numeric_limits<double>::quiet_NaN();
 
-// The drawing's radius at z (the feature that gives it, as the kernel compares), NaN if none.
-double drawnRadiusAt(const Part& part, double z) {
-    const int f = featureAt(part, z);
-    if (f < 0)
-        return kNaN;
-    const Feature& ft = part.features[static_cast<std::size_t>(f)];
-    return ft.radiusAt(std::clamp(z, ft.zStartMm, ft.zEndMm));
-}
-
 // Largest error, in units of its tolerance, of the chord from a to b over the samples between.
 // Returns the sample where it is largest (or a if none is over 1).
 std::size_t worstBetween(const Profile& p, const std::vector<double>* dev, std::size_t a,
@@ -210,7 +201,7 @@ DeviationTrace deviationTrace(const Scene& scene, const CutResult& result, const
                 continue;
             const double r = map.at(i, 0);
             all.zMm.push_back(z);
-            all.nominalMm.push_back(drawnRadiusAt(scene.part, z));
+            all.nominalMm.push_back(scene.part.nominalRadiusAt(z).value_or(kNaN));
             all.deviationMm.push_back(normalDeviationAt(scene.part, z, r));
         }
     } else {

@@ -72,7 +72,11 @@ struct Part {
     Iso2768 toleranceClass = Iso2768::m;
     SourceLoc where;
 
-    /// Nominal radius at z: of the feature covering z (the larger where two meet). Empty outside.
+    /// Index of the radial feature (cylinder, cone, chamfer) that gives the drawn radius at z:
+    /// the one covering z, the larger where two meet; −1 where none does. The one definition of
+    /// "the drawing at z" that the comparison, the pictures and the planner use.
+    int radialFeatureAt(double zMm) const;
+    /// The drawn radius at z (mm) from radialFeatureAt; empty where the drawing says nothing.
     std::optional<double> nominalRadiusAt(double zMm) const;
     /// The first cone feature (the one the job is about), or nullptr.
     const Feature* mainCone() const;
