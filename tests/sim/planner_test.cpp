@@ -312,11 +312,14 @@ TEST_CASE("a cone longer than the compound's travel is split into saddle setting
     for (const std::string& c : plan.cautions)
         said = said || c.find("taper attachment") != std::string::npos;
     CHECK(said);
+    int compoundPasses = 0;
     for (const Pass& p : plan.scene.plan.passes)
         if (p.kind == PassKind::Compound) {
             CHECK(p.fromMm >= 0);
             CHECK(p.toMm <= 70.0 + 1e-9);
+            ++compoundPasses;
         }
+    CHECK(compoundPasses >= 2); // at least one at each saddle setting
 }
 
 TEST_CASE("the sine bar stack is built from the block set, on a base when too short", "[planner]") {
