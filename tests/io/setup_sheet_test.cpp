@@ -43,15 +43,18 @@ TEST_CASE("each pass's readings appear as turns and divisions", "[io][sheet]") {
     REQUIRE(plan.planned);
     const std::string text = io::setupSheetText(plan);
     const Setup& su = plan.scene.setup;
+    int compoundPasses = 0;
     for (const Pass& p : plan.scene.plan.passes) {
         if (p.kind != PassKind::Compound)
             continue;
+        ++compoundPasses;
         // derived: 0.02 mm a division, 100 a turn; shown with no-break spaces inside [ ]
         const DialSetting d = dialSetting(su.cross, p.crossMm);
         char buf[64];
         std::snprintf(buf, sizeof buf, "%.3f\u00a0[%ld\u00a0t\u00a0+\u00a0", p.crossMm, d.turns);
         CHECK(has(text, buf));
     }
+    CHECK(compoundPasses > 0);
     CHECK(has(text, "Rt"));
     CHECK(has(text, "rolls"));
     CHECK(has(text, "Sine bar"));

@@ -40,7 +40,8 @@ Scene ramp(double deg) {
 } // namespace
 
 TEST_CASE("trailing edge limit of a 55 degree insert in a 93 degree holder", "[findings]") {
-    // Source: references R8: 180° − κr − ε = 32° for 93° + D; minus 3° clearance (R8: 2–7°).
+    // Source: references R8: 180° − κr − ε = 32° for 93° + D; minus 3° clearance
+    // (references R8: 2–7°).
     const ToolOutline o(barScene(30).tool);
     CHECK(radToDeg(rampLimitRad(o)) == Approx(32.0 - 3.0));
 }

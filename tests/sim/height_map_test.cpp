@@ -33,8 +33,8 @@ TEST_CASE("R2: cusp height and Ra of a turned cylinder", "[height_map]") {
         CHECK(res.rtUm == Approx(6.275).epsilon(0.01));
         CHECK(res.raUm == Approx(1.609).epsilon(0.02));
     }
-    // Source: references R2 table: f 0.1, r 0.4 → Rt exact 3.137 µm; Ra ≈ 0.0321 f²/r (R2,
-    // Boothroyd, from memory) = 0.8025 µm, the exact arc within 0.3% of it.
+    // Source: references R2 table: f 0.1, r 0.4 → Rt exact 3.137 µm; Ra ≈ 0.0321 f²/r
+    // (references R2, Boothroyd, from memory) = 0.8025 µm, the exact arc within 0.3% of it.
     {
         const CutResult res = simulate(turnedCylinder(0.1, 0.4));
         CHECK(res.rtUm == Approx(3.137).epsilon(0.01));

@@ -33,7 +33,8 @@ TEST_CASE("R6 two heights give the taper back", "[roll_check]") {
 }
 
 TEST_CASE("diameter change per unit length", "[roll_check]") {
-    // Source: references R3/R9 (ISO 3040): C = 2 tan θ; 1:20 → 0.05 mm per mm, 1.27 mm per inch.
+    // Source: references R3 and references R9 (ISO 3040): C = 2 tan θ; 1:20 → 0.05 mm per mm,
+    // 1.27 mm per inch.
     const double theta = halfAngleFromRatio(20.0);
     CHECK(diameterChangeOverLengthMm(theta, 1.0) == Approx(0.05));
     CHECK(diameterChangeOverLengthMm(theta, kMmPerInch) == Approx(1.27));
