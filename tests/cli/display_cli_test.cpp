@@ -1,4 +1,4 @@
-// The virtual display `swarf run` starts when there is no screen (viewer/src/display.cpp): a
+// The virtual display `swarf run` starts when there is no screen (viewer/app/support/src/display.cpp): a
 // run killed part way (Ctrl-C, kill -9) leaves no Xvfb behind.
 #include <catch2/catch.hpp>
 
