@@ -46,7 +46,7 @@ TEST_CASE("swarf taper: Morse 3 in inch", "[cli][taper]") {
     // Every section is there, with units.
     for (const char* s : {"Compound slide", "Sine bar", "5 in bar", "200 mm bar", "Nose radius",
                           "ΔX", "ΔZ", "tailstock set-over", "taper attachment", "Over two rolls",
-                          "hyperboloid", "Ra", "µin", "Cautions"})
+                          "hyperboloid", "Ra", "µin", "CAUTION", "chuck key"})
         CHECK(has(r.out, s));
 }
 
