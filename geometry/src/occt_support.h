@@ -26,7 +26,9 @@ inline Solid wrap(const TopoDS_Shape& shape) {
 }
 
 /// Our tool-plane point (z, x) as a modeller point: X = x, Y = 0, Z = z.
-inline gp_Pnt profilePoint(double zMm, double xMm) { return gp_Pnt(xMm, 0.0, zMm); }
+inline gp_Pnt profilePoint(double zMm, double xMm) {
+    return gp_Pnt(xMm, 0.0, zMm);
+}
 
 /// Removes the modeller's console printers once per process (its default messenger prints
 /// progress and statistics to stdout). Safe to call from several threads.
@@ -34,8 +36,7 @@ void silenceModeller();
 
 /// Runs `fn`, turning the modeller's exceptions into GeometryError("<what>: <message>").
 /// swarf::Error passes through unchanged.
-template <class Fn>
-auto guarded(const std::string& what, Fn&& fn) -> decltype(fn()) {
+template <class Fn> auto guarded(const std::string& what, Fn&& fn) -> decltype(fn()) {
     silenceModeller();
     try {
         return fn();
@@ -52,7 +53,8 @@ auto guarded(const std::string& what, Fn&& fn) -> decltype(fn()) {
 
 /// Throws GeometryError("<what>: <why>") unless `ok`.
 inline void require(bool ok, const std::string& what, const std::string& why) {
-    if (!ok) throw GeometryError(what + ": " + why);
+    if (!ok)
+        throw GeometryError(what + ": " + why);
 }
 
 /// Throws GeometryError unless `shape` passes the modeller's validity check.

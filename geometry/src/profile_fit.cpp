@@ -8,11 +8,11 @@
 #include "occt_support.h"
 
 #include <BRepBuilderAPI_MakeEdge.hxx>
-#include <BRep_Tool.hxx>
 #include <BRepBuilderAPI_MakeFace.hxx>
 #include <BRepBuilderAPI_MakeVertex.hxx>
 #include <BRepBuilderAPI_MakeWire.hxx>
 #include <BRepPrimAPI_MakeRevol.hxx>
+#include <BRep_Tool.hxx>
 #include <GC_MakeArcOfCircle.hxx>
 #include <GeomAPI_PointsToBSpline.hxx>
 #include <GeomAPI_ProjectPointOnCurve.hxx>
@@ -34,7 +34,8 @@ double chordDistance(const std::vector<double>& z, const std::vector<double>& x,
                      std::size_t j, std::size_t k) {
     const double dz = z[j] - z[i], dx = x[j] - x[i];
     const double len = std::hypot(dz, dx);
-    if (len == 0) return std::hypot(z[k] - z[i], x[k] - x[i]);
+    if (len == 0)
+        return std::hypot(z[k] - z[i], x[k] - x[i]);
     return std::abs(dz * (x[k] - x[i]) - dx * (z[k] - z[i])) / len;
 }
 
@@ -56,7 +57,8 @@ class Fitter {
                 continue;
             }
             std::size_t j = k;
-            while (j + 1 < breaks.size() && !longEnough(j)) ++j;
+            while (j + 1 < breaks.size() && !longEnough(j))
+                ++j;
             fitStretch(breaks[k], breaks[j]);
             k = j;
         }
@@ -69,7 +71,8 @@ class Fitter {
     gp_Pnt point(std::size_t i) const { return profilePoint(z_[i], x_[i]); }
 
     const TopoDS_Vertex& vertex(std::size_t i) {
-        if (vertices_[i].IsNull()) vertices_[i] = BRepBuilderAPI_MakeVertex(point(i)).Vertex();
+        if (vertices_[i].IsNull())
+            vertices_[i] = BRepBuilderAPI_MakeVertex(point(i)).Vertex();
         return vertices_[i];
     }
 
@@ -85,22 +88,28 @@ class Fitter {
 
     bool addCurve(const Handle(Geom_Curve) & curve, std::size_t i, std::size_t j) {
         BRepBuilderAPI_MakeEdge edge(curve, vertex(i), vertex(j));
-        if (edge.IsDone() != Standard_True) return false;
+        if (edge.IsDone() != Standard_True)
+            return false;
         chain_.edges.push_back(edge.Edge());
         return true;
     }
 
     // A stretch of short chords from sample a to sample b: one arc, or B-splines, or halves.
     void fitStretch(std::size_t a, std::size_t b) {
-        if (b - a < 4) {  // too few samples to fit anything: join them exactly
-            for (std::size_t i = a; i < b; ++i) addLine(i, i + 1);
+        if (b - a < 4) { // too few samples to fit anything: join them exactly
+            for (std::size_t i = a; i < b; ++i)
+                addLine(i, i + 1);
             return;
         }
-        if (tryArc(a, b)) return;
+        if (tryArc(a, b))
+            return;
         // A nose arc often ends in a corner with the next cut: one sample off the circle.
-        if (tryArc(a, b - 1, /*lineAfter=*/true)) return;
-        if (tryArc(a + 1, b, /*lineAfter=*/false, /*lineBefore=*/true)) return;
-        if (trySpline(a, b)) return;
+        if (tryArc(a, b - 1, /*lineAfter=*/true))
+            return;
+        if (tryArc(a + 1, b, /*lineAfter=*/false, /*lineBefore=*/true))
+            return;
+        if (trySpline(a, b))
+            return;
         const std::size_t mid = a + (b - a) / 2;
         fitStretch(a, mid);
         fitStretch(mid, b);
@@ -114,21 +123,25 @@ class Fitter {
     // The circle through samples a, (a+b)/2 and b, and whether every sample between lies on it.
     Circle circleThrough(std::size_t a, std::size_t b) const {
         Circle c;
-        if (b < a + 4) return c;
+        if (b < a + 4)
+            return c;
         const std::size_t m = a + (b - a) / 2;
         const double ax = z_[a], ay = x_[a], bx = z_[m], by = x_[m], cx = z_[b], cy = x_[b];
         const double d = 2 * (ax * (by - cy) + bx * (cy - ay) + cx * (ay - by));
         const double chord = std::hypot(cx - ax, cy - ay);
-        if (std::abs(d) < 1e-12 * chord * chord) return c;
+        if (std::abs(d) < 1e-12 * chord * chord)
+            return c;
         const double a2 = ax * ax + ay * ay, b2 = bx * bx + by * by, c2 = cx * cx + cy * cy;
         c.zMm = (a2 * (by - cy) + b2 * (cy - ay) + c2 * (ay - by)) / d;
         c.xMm = (a2 * (cx - bx) + b2 * (ax - cx) + c2 * (bx - ax)) / d;
         c.radiusMm = std::hypot(ax - c.zMm, ay - c.xMm);
-        if (c.radiusMm > 1e3 * chord) return c;  // nearly straight: leave it to the splines
+        if (c.radiusMm > 1e3 * chord)
+            return c; // nearly straight: leave it to the splines
         for (std::size_t k = a; k <= b; ++k) {
-            c.errorMm = std::max(c.errorMm, std::abs(std::hypot(z_[k] - c.zMm, x_[k] - c.xMm) -
-                                                     c.radiusMm));
-            if (c.errorMm > opt_.lineToleranceMm) return c;
+            c.errorMm = std::max(c.errorMm,
+                                 std::abs(std::hypot(z_[k] - c.zMm, x_[k] - c.xMm) - c.radiusMm));
+            if (c.errorMm > opt_.lineToleranceMm)
+                return c;
         }
         c.ok = true;
         return c;
@@ -137,14 +150,19 @@ class Fitter {
     // One arc from a to b, with a straight edge from a − 1 before it or to b + 1 after it.
     bool tryArc(std::size_t a, std::size_t b, bool lineAfter = false, bool lineBefore = false) {
         const Circle c = circleThrough(a, b);
-        if (!c.ok) return false;
+        if (!c.ok)
+            return false;
         GC_MakeArcOfCircle arc(point(a), point(a + (b - a) / 2), point(b));
-        if (!arc.IsDone()) return false;
+        if (!arc.IsDone())
+            return false;
         BRepBuilderAPI_MakeEdge edge(arc.Value(), vertex(a), vertex(b));
-        if (edge.IsDone() != Standard_True) return false;
-        if (lineBefore) addLine(a - 1, a);
+        if (edge.IsDone() != Standard_True)
+            return false;
+        if (lineBefore)
+            addLine(a - 1, a);
         chain_.edges.push_back(edge.Edge());
-        if (lineAfter) addLine(b, b + 1);
+        if (lineAfter)
+            addLine(b, b + 1);
         chain_.maxErrorMm = std::max(chain_.maxErrorMm, c.errorMm);
         ++chain_.arcs;
         return true;
@@ -170,14 +188,16 @@ class Fitter {
     bool trySpline(std::size_t a, std::size_t b) {
         const int n = static_cast<int>(b - a + 1);
         TColgp_Array1OfPnt pts(1, n);
-        for (int k = 0; k < n; ++k) pts.SetValue(k + 1, point(a + static_cast<std::size_t>(k)));
+        for (int k = 0; k < n; ++k)
+            pts.SetValue(k + 1, point(a + static_cast<std::size_t>(k)));
         Handle(Geom_BSplineCurve) curve;
         try {
             GeomAPI_PointsToBSpline fit(pts, 3, 8, GeomAbs_C2, opt_.splineToleranceMm);
-            if (!fit.IsDone()) return false;
+            if (!fit.IsDone())
+                return false;
             curve = fit.Curve();
         } catch (const Standard_Failure&) {
-            return false;  // refine instead
+            return false; // refine instead
         }
         // The ends must be the samples themselves, so neighbouring pieces share them.
         if (curve->StartPoint().Distance(point(a)) > 1e-8 ||
@@ -189,9 +209,11 @@ class Fitter {
             const gp_Pnt p = point(k);
             proj.Init(p, curve);
             double dk = std::min(p.Distance(curve->StartPoint()), p.Distance(curve->EndPoint()));
-            if (proj.NbPoints() > 0) dk = std::min(dk, proj.LowerDistance());
+            if (proj.NbPoints() > 0)
+                dk = std::min(dk, proj.LowerDistance());
             err = std::max(err, dk);
-            if (err > opt_.maxFitErrorMm) return false;
+            if (err > opt_.maxFitErrorMm)
+                return false;
         }
         // Between the samples too: a spline forced round a sharp corner can loop away from
         // the outline and back, passing every sample. Walk the curve: it must keep going
@@ -202,12 +224,15 @@ class Fitter {
             const double u = curve->FirstParameter() +
                              (curve->LastParameter() - curve->FirstParameter()) * k / steps;
             const gp_Pnt q = curve->Value(u);
-            if (q.Z() < zPrev - 1e-9) return false;  // folds back along the axis
+            if (q.Z() < zPrev - 1e-9)
+                return false; // folds back along the axis
             zPrev = q.Z();
             err = std::max(err, distanceToSamples(q.Z(), q.X(), a, b));
-            if (err > opt_.maxFitErrorMm) return false;
+            if (err > opt_.maxFitErrorMm)
+                return false;
         }
-        if (!addCurve(curve, a, b)) return false;
+        if (!addCurve(curve, a, b))
+            return false;
         chain_.maxErrorMm = std::max(chain_.maxErrorMm, err);
         ++chain_.splines;
         return true;
@@ -235,7 +260,8 @@ std::vector<std::size_t> simplifyOutline(const std::vector<double>& z, const std
         std::size_t at = i;
         for (std::size_t k = i + 1; k < j; ++k) {
             const double d = chordDistance(z, x, i, j, k);
-            if (d > worst) worst = d, at = k;
+            if (d > worst)
+                worst = d, at = k;
         }
         if (worst > toleranceMm) {
             keep[at] = 1;
@@ -245,14 +271,14 @@ std::vector<std::size_t> simplifyOutline(const std::vector<double>& z, const std
     }
     std::vector<std::size_t> out;
     for (std::size_t i = 0; i < n; ++i)
-        if (keep[i]) out.push_back(i);
+        if (keep[i])
+            out.push_back(i);
     return out;
 }
 
 EdgeChain fitOutline(const std::vector<double>& zMm, const std::vector<double>& xMm,
                      const ProfileFitOptions& options) {
-    return guarded("fitting the as-cut outline",
-                   [&] { return Fitter(zMm, xMm, options).run(); });
+    return guarded("fitting the as-cut outline", [&] { return Fitter(zMm, xMm, options).run(); });
 }
 
 EdgeChain polylineChain(const std::vector<double>& zMm, const std::vector<double>& xMm) {
@@ -279,7 +305,8 @@ void extendChain(EdgeChain& chain, double zEndMm, double xMm) {
         const gp_Pnt last = BRep_Tool::Pnt(chain.last);
         TopoDS_Vertex v = chain.last;
         if (std::abs(last.X() - xMm) > 1e-9) {
-            const TopoDS_Vertex up = BRepBuilderAPI_MakeVertex(profilePoint(last.Z(), xMm)).Vertex();
+            const TopoDS_Vertex up =
+                BRepBuilderAPI_MakeVertex(profilePoint(last.Z(), xMm)).Vertex();
             chain.edges.push_back(BRepBuilderAPI_MakeEdge(v, up).Edge());
             v = up;
         }
@@ -302,9 +329,12 @@ TopoDS_Shape revolveChain(const EdgeChain& chain, const std::string& what) {
             a0 = BRepBuilderAPI_MakeVertex(gp_Pnt(0, 0, p0.Z())).Vertex();
         if (std::hypot(p1.X(), p1.Y()) > onAxisMm)
             a1 = BRepBuilderAPI_MakeVertex(gp_Pnt(0, 0, p1.Z())).Vertex();
-        if (!a0.IsSame(chain.first)) wire.Add(BRepBuilderAPI_MakeEdge(a0, chain.first).Edge());
-        for (const TopoDS_Edge& e : chain.edges) wire.Add(e);
-        if (!a1.IsSame(chain.last)) wire.Add(BRepBuilderAPI_MakeEdge(chain.last, a1).Edge());
+        if (!a0.IsSame(chain.first))
+            wire.Add(BRepBuilderAPI_MakeEdge(a0, chain.first).Edge());
+        for (const TopoDS_Edge& e : chain.edges)
+            wire.Add(e);
+        if (!a1.IsSame(chain.last))
+            wire.Add(BRepBuilderAPI_MakeEdge(chain.last, a1).Edge());
         wire.Add(BRepBuilderAPI_MakeEdge(a1, a0).Edge());
         require(wire.IsDone() == Standard_True, what, "the outline does not close");
         BRepBuilderAPI_MakeFace face(wire.Wire(), Standard_True);

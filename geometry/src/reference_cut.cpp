@@ -18,7 +18,7 @@
 namespace swarf::geometry {
 namespace {
 
-using P2 = Eigen::Vector2d;  // (z, x)
+using P2 = Eigen::Vector2d; // (z, x)
 
 double cross(const P2& o, const P2& a, const P2& b) {
     return (a.x() - o.x()) * (b.y() - o.y()) - (a.y() - o.y()) * (b.x() - o.x());
@@ -29,15 +29,18 @@ std::vector<P2> convexHull(std::vector<P2> pts) {
     std::sort(pts.begin(), pts.end(), [](const P2& a, const P2& b) {
         return a.x() < b.x() || (a.x() == b.x() && a.y() < b.y());
     });
-    if (pts.size() < 3) return pts;
+    if (pts.size() < 3)
+        return pts;
     std::vector<P2> h(2 * pts.size());
     std::size_t k = 0;
     for (const P2& p : pts) {
-        while (k >= 2 && cross(h[k - 2], h[k - 1], p) <= 0) --k;
+        while (k >= 2 && cross(h[k - 2], h[k - 1], p) <= 0)
+            --k;
         h[k++] = p;
     }
     for (std::size_t i = pts.size() - 1, t = k + 1; i-- > 0;) {
-        while (k >= t && cross(h[k - 2], h[k - 1], pts[i]) <= 0) --k;
+        while (k >= t && cross(h[k - 2], h[k - 1], pts[i]) <= 0)
+            --k;
         h[k++] = pts[i];
     }
     h.resize(k - 1);
@@ -51,7 +54,8 @@ std::vector<P2> clipToAxis(const std::vector<P2>& poly) {
         const P2& a = poly[i];
         const P2& b = poly[(i + 1) % poly.size()];
         const bool ina = a.y() >= 0, inb = b.y() >= 0;
-        if (ina) out.push_back(a);
+        if (ina)
+            out.push_back(a);
         if (ina != inb) {
             const double t = a.y() / (a.y() - b.y());
             out.emplace_back(a.x() + t * (b.x() - a.x()), 0.0);
@@ -68,11 +72,12 @@ std::vector<P2> offCentre(const std::vector<P2>& poly, double h, double chordErr
     for (std::size_t i = 0; i < poly.size(); ++i) {
         const P2& a = poly[i];
         const P2& b = poly[(i + 1) % poly.size()];
-        const double xNear = (a.y() > 0) == (b.y() > 0) ? std::min(std::abs(a.y()), std::abs(b.y())) : 0.0;
+        const double xNear =
+            (a.y() > 0) == (b.y() > 0) ? std::min(std::abs(a.y()), std::abs(b.y())) : 0.0;
         const double rhoMin = std::hypot(xNear, h);
         const double curvature = h * h / (rhoMin * rhoMin * rhoMin);
         const double maxPiece = std::sqrt(8.0 * chordErrorMm / curvature);
-        const double len = std::abs(b.y() - a.y());  // only the x extent bends
+        const double len = std::abs(b.y() - a.y()); // only the x extent bends
         const int n = std::clamp(static_cast<int>(std::ceil(len / maxPiece)), 1, 20000);
         for (int k = 0; k < n; ++k) {
             const P2 p = a + (b - a) * (static_cast<double>(k) / n);
@@ -84,7 +89,8 @@ std::vector<P2> offCentre(const std::vector<P2>& poly, double h, double chordErr
 
 TopoDS_Shape revolvePolygon(const std::vector<P2>& poly) {
     BRepBuilderAPI_MakePolygon wire;
-    for (const P2& p : poly) wire.Add(profilePoint(p.x(), p.y()));
+    for (const P2& p : poly)
+        wire.Add(profilePoint(p.x(), p.y()));
     wire.Close();
     require(wire.IsDone() == Standard_True, "swept tool", "the hull polygon is degenerate");
     BRepBuilderAPI_MakeFace face(wire.Wire(), Standard_True);
@@ -96,7 +102,7 @@ TopoDS_Shape revolvePolygon(const std::vector<P2>& poly) {
 }
 
 std::vector<P2> sweptRegion(const ToolOutline& outline, const std::vector<P2>& polygon,
-                            const ToolMove& move, double topXMm) {  // topXMm: at least this high
+                            const ToolMove& move, double topXMm) { // topXMm: at least this high
     const P2 c0 = move.tipFrom - outline.imaginaryTip();
     const P2 c1 = move.tipTo - outline.imaginaryTip();
     std::vector<P2> pts;
@@ -126,10 +132,13 @@ Solid sweptToolSolid(const Tool& tool, const ToolMove& move, double stockRadiusM
         const double h = tool.tipHeightMm;
         std::vector<P2> region = sweptRegion(outline, polygon, move, stockRadiusMm + 1.0);
         double xMin = 1e300;
-        for (const P2& p : region) xMin = std::min(xMin, p.y());
-        if (std::hypot(std::max(xMin, 0.0), h) >= stockRadiusMm) return Solid();  // in the air
+        for (const P2& p : region)
+            xMin = std::min(xMin, p.y());
+        if (std::hypot(std::max(xMin, 0.0), h) >= stockRadiusMm)
+            return Solid(); // in the air
         region = clipToAxis(region);
-        if (h != 0) region = offCentre(region, h, options.offCentreChordErrorMm);
+        if (h != 0)
+            region = offCentre(region, h, options.offCentreChordErrorMm);
         return wrap(revolvePolygon(region));
     });
 }

@@ -18,9 +18,8 @@ Solid stockSolid(const Stock& stock) {
     return guarded("stock solid", [&] {
         require(stock.diameterMm > 0 && stock.stickOutMm > 0, "stock solid",
                 "the bar needs a diameter and a stick-out above zero");
-        BRepPrimAPI_MakeCylinder cyl(
-            gp_Ax2(gp_Pnt(0, 0, stock.freeEndZMm()), gp_Dir(0, 0, 1)), stock.diameterMm / 2,
-            stock.stickOutMm);
+        BRepPrimAPI_MakeCylinder cyl(gp_Ax2(gp_Pnt(0, 0, stock.freeEndZMm()), gp_Dir(0, 0, 1)),
+                                     stock.diameterMm / 2, stock.stickOutMm);
         cyl.Build();
         require(cyl.IsDone() == Standard_True, "stock solid", "making the cylinder failed");
         requireValid(cyl.Shape(), "stock solid");
@@ -30,15 +29,17 @@ Solid stockSolid(const Stock& stock) {
 
 namespace {
 double featureRadiusAt(const Feature& f, double zMm) {
-    if (f.kind == FeatureKind::Cylinder) return f.diameterMm / 2;
-    return f.cone.diameterAt(zMm) / 2;  // cone and chamfer
+    if (f.kind == FeatureKind::Cylinder)
+        return f.diameterMm / 2;
+    return f.cone.diameterAt(zMm) / 2; // cone and chamfer
 }
 } // namespace
 
 std::vector<std::pair<double, double>> nominalOutline(const Part& part) {
     std::vector<const Feature*> spans;
     for (const Feature& f : part.features)
-        if (f.kind != FeatureKind::Face && f.zEndMm > f.zStartMm) spans.push_back(&f);
+        if (f.kind != FeatureKind::Face && f.zEndMm > f.zStartMm)
+            spans.push_back(&f);
     std::stable_sort(spans.begin(), spans.end(),
                      [](const Feature* a, const Feature* b) { return a->zStartMm < b->zStartMm; });
     std::vector<std::pair<double, double>> pts;
@@ -110,16 +111,21 @@ FittedSolid fitted(const Profile& profile, const ProfileFitOptions& options, con
     TopoDS_Shape single;
     std::size_t i = 0;
     while (i < n) {
-        while (i < n && x[i] <= kOnAxisMm) ++i;
-        if (i == n) break;
+        while (i < n && x[i] <= kOnAxisMm)
+            ++i;
+        if (i == n)
+            break;
         std::size_t j = i;
-        while (j + 1 < n && x[j + 1] > kOnAxisMm) ++j;
+        while (j + 1 < n && x[j + 1] > kOnAxisMm)
+            ++j;
         const std::size_t a = i > 0 ? i - 1 : 0, b = j + 1 < n ? j + 1 : j;
         i = j + 1;
-        if (b == a) continue;  // a single sample: no length
+        if (b == a)
+            continue; // a single sample: no length
         const std::vector<double> zs(z.begin() + a, z.begin() + b + 1);
         std::vector<double> xs(x.begin() + a, x.begin() + b + 1);
-        for (double& v : xs) v = v <= kOnAxisMm ? 0.0 : v;
+        for (double& v : xs)
+            v = v <= kOnAxisMm ? 0.0 : v;
         EdgeChain chain = fitOutline(zs, xs, options);
         // The bar beyond the profile, up to the jaws, was not touched.
         if (stock && b == n - 1 && stock->jawZMm() > z.back() + 1e-9)

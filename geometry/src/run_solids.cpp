@@ -34,8 +34,10 @@ RunSolids makeRunSolids(const Scene& scene, const CutResult& result, const Profi
     s.asCut = asCutSolid(scene.stock, result.asCut, fit);
     const auto outline = nominalOutline(scene.part);
     double rMax = scene.stock.diameterMm / 2;
-    for (const auto& p : outline) rMax = std::max(rMax, p.second);
-    for (double r : result.asCut.radiusMm) rMax = std::max(rMax, r);
+    for (const auto& p : outline)
+        rMax = std::max(rMax, p.second);
+    for (double r : result.asCut.radiusMm)
+        rMax = std::max(rMax, r);
     const Solid extent = slab(outline.front().first, outline.back().first, rMax + 1.0);
     s.leftover = s.asCut.solid.common(extent).minus(s.nominal);
     s.overcut = s.nominal.minus(s.asCut.solid);
@@ -51,7 +53,9 @@ RunSolidsReport writeRunSolids(const Scene& scene, const CutResult& result,
                                const std::string& outDir, const RunSolidsOptions& options) {
     const RunSolids s = makeRunSolids(scene, result, options.fit);
     RunSolidsReport r;
-    const auto file = [&](const char* name) { return (std::filesystem::path(outDir) / name).string(); };
+    const auto file = [&](const char* name) {
+        return (std::filesystem::path(outDir) / name).string();
+    };
     r.files.push_back(file("as-cut.step"));
     writeStep(r.files.back(), {{"as-cut", s.asCut.solid}});
     if (options.writeNominal) {

@@ -9,15 +9,15 @@
 #include <BRepBndLib.hxx>
 #include <BRepCheck_Analyzer.hxx>
 #include <BRepGProp.hxx>
-#include <IntCurvesFace_ShapeIntersector.hxx>
-#include <gp_Lin.hxx>
 #include <Bnd_Box.hxx>
 #include <GProp_GProps.hxx>
+#include <IntCurvesFace_ShapeIntersector.hxx>
 #include <Message.hxx>
 #include <Message_Messenger.hxx>
 #include <Message_PrinterOStream.hxx>
 #include <TopExp_Explorer.hxx>
 #include <TopoDS.hxx>
+#include <gp_Lin.hxx>
 #include <gp_Pln.hxx>
 
 #include <algorithm>
@@ -47,17 +47,22 @@ void requireValid(const TopoDS_Shape& shape, const std::string& what) {
 Solid::Solid() = default;
 Solid::Solid(std::shared_ptr<const Impl> impl) : impl_(std::move(impl)) {}
 
-bool Solid::empty() const { return solidCount() == 0; }
+bool Solid::empty() const {
+    return solidCount() == 0;
+}
 
 int Solid::solidCount() const {
-    if (!impl_ || impl_->shape.IsNull()) return 0;
+    if (!impl_ || impl_->shape.IsNull())
+        return 0;
     int n = 0;
-    for (TopExp_Explorer ex(impl_->shape, TopAbs_SOLID); ex.More(); ex.Next()) ++n;
+    for (TopExp_Explorer ex(impl_->shape, TopAbs_SOLID); ex.More(); ex.Next())
+        ++n;
     return n;
 }
 
 double Solid::volumeMm3() const {
-    if (empty()) return 0.0;
+    if (empty())
+        return 0.0;
     return guarded("volume of a solid", [&] {
         GProp_GProps props;
         // Adaptive integration to a relative error of 1e-9: the STEP round trip is checked
@@ -68,7 +73,8 @@ double Solid::volumeMm3() const {
 }
 
 bool Solid::isValid() const {
-    if (!impl_ || impl_->shape.IsNull()) return false;
+    if (!impl_ || impl_->shape.IsNull())
+        return false;
     return guarded("validity check", [&] {
         BRepCheck_Analyzer check(impl_->shape);
         return check.IsValid() == Standard_True;
@@ -92,9 +98,11 @@ std::optional<double> rayRadius(const TopoDS_Shape& shape, double zMm) {
     IntCurvesFace_ShapeIntersector ray;
     ray.Load(shape, 1e-9);
     ray.Perform(gp_Lin(gp_Pnt(0, 0, zMm), gp_Dir(1, 0, 0)), -1e-9, 1e9);
-    if (!ray.IsDone() || ray.NbPnt() == 0) return std::nullopt;
+    if (!ray.IsDone() || ray.NbPnt() == 0)
+        return std::nullopt;
     double best = -1;
-    for (int i = 1; i <= ray.NbPnt(); ++i) best = std::max(best, ray.WParameter(i));
+    for (int i = 1; i <= ray.NbPnt(); ++i)
+        best = std::max(best, ray.WParameter(i));
     return best;
 }
 
@@ -120,23 +128,27 @@ std::optional<double> sectionRadius(const TopoDS_Shape& shape, double zMm) {
             best = std::max(best, std::hypot(p.X(), p.Y()));
         }
     }
-    if (best < 0) return std::nullopt;
+    if (best < 0)
+        return std::nullopt;
     return best;
 }
 } // namespace
 
 std::optional<double> Solid::radiusAtZ(double zMm) const {
-    if (empty()) return std::nullopt;
+    if (empty())
+        return std::nullopt;
     return guarded("radius at z = " + std::to_string(zMm) + " mm", [&]() -> std::optional<double> {
         // Solids of revolution: the ray in the XZ plane is enough and much faster than a
         // section of B-spline faces; the section is the fallback where the ray finds nothing.
-        if (auto r = rayRadius(impl_->shape, zMm)) return r;
+        if (auto r = rayRadius(impl_->shape, zMm))
+            return r;
         return sectionRadius(impl_->shape, zMm);
     });
 }
 
 Solid Solid::minus(const Solid& other) const {
-    if (empty() || other.empty()) return *this;
+    if (empty() || other.empty())
+        return *this;
     return guarded("boolean difference", [&] {
         BRepAlgoAPI_Cut op(impl_->shape, other.impl_->shape);
         require(op.IsDone() == Standard_True && !op.HasErrors(), "boolean difference",
@@ -146,7 +158,8 @@ Solid Solid::minus(const Solid& other) const {
 }
 
 Solid Solid::common(const Solid& other) const {
-    if (empty() || other.empty()) return Solid();
+    if (empty() || other.empty())
+        return Solid();
     return guarded("boolean common", [&] {
         BRepAlgoAPI_Common op(impl_->shape, other.impl_->shape);
         require(op.IsDone() == Standard_True && !op.HasErrors(), "boolean common",

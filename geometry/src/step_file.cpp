@@ -1,7 +1,7 @@
 #include "swarf/geometry/step_file.h"
 
-#include "swarf/io/output_file.h"
 #include "occt_support.h"
+#include "swarf/io/output_file.h"
 
 #include <BRep_Builder.hxx>
 #include <IFSelect_ReturnStatus.hxx>
@@ -29,11 +29,14 @@ void nameNewProducts(STEPControl_Writer& writer, const std::string& name) {
     const Handle(StepData_StepModel) model = writer.Model();
     const Handle(TCollection_HAsciiString) text = new TCollection_HAsciiString(name.c_str());
     for (int i = 1; i <= model->NbEntities(); ++i) {
-        const Handle(StepBasic_Product) product = Handle(StepBasic_Product)::DownCast(model->Value(i));
-        if (product.IsNull() || product->Name()->IsSameString(text)) continue;
+        const Handle(StepBasic_Product) product =
+            Handle(StepBasic_Product)::DownCast(model->Value(i));
+        if (product.IsNull() || product->Name()->IsSameString(text))
+            continue;
         const TCollection_AsciiString current = product->Name()->String();
         // Products named earlier in this file carry another solid's name: leave them.
-        if (current.Search((name + " ").c_str()) != 1) continue;
+        if (current.Search((name + " ").c_str()) != 1)
+            continue;
         product->SetName(text);
         product->SetId(text);
     }
@@ -53,7 +56,8 @@ void writeStep(const std::string& path, const std::vector<NamedSolid>& solids) {
             Interface_Static::SetIVal("write.precision.mode", 0);
             int written = 0;
             for (const NamedSolid& s : solids) {
-                if (s.solid.empty()) continue;
+                if (s.solid.empty())
+                    continue;
                 Interface_Static::SetCVal("write.step.product.name", s.name.c_str());
                 const IFSelect_ReturnStatus st =
                     writer.Transfer(s.solid.impl().shape, STEPControl_AsIs);
@@ -76,14 +80,17 @@ Solid readStep(const std::string& path) {
     std::lock_guard lock(translatorMutex());
     return guarded(what, [&] {
         STEPControl_Reader reader;
-        require(reader.ReadFile(path.c_str()) == IFSelect_RetDone, what, "not a readable STEP file");
+        require(reader.ReadFile(path.c_str()) == IFSelect_RetDone, what,
+                "not a readable STEP file");
         const int roots = reader.TransferRoots();
         require(roots > 0, what, "the file has no shape");
-        if (reader.NbShapes() == 1) return wrap(reader.Shape(1));
+        if (reader.NbShapes() == 1)
+            return wrap(reader.Shape(1));
         TopoDS_Compound all;
         BRep_Builder builder;
         builder.MakeCompound(all);
-        for (int i = 1; i <= reader.NbShapes(); ++i) builder.Add(all, reader.Shape(i));
+        for (int i = 1; i <= reader.NbShapes(); ++i)
+            builder.Add(all, reader.Shape(i));
         return wrap(all);
     });
 }

@@ -27,7 +27,8 @@ class StlSink {
         const double vx = c[0] - a[0], vy = c[1] - a[1], vz = c[2] - a[2];
         double nx = uy * vz - uz * vy, ny = uz * vx - ux * vz, nz = ux * vy - uy * vx;
         const double len = std::sqrt(nx * nx + ny * ny + nz * nz);
-        if (len > 0) nx /= len, ny /= len, nz /= len;
+        if (len > 0)
+            nx /= len, ny /= len, nz /= len;
         put(Vec{static_cast<float>(nx), static_cast<float>(ny), static_cast<float>(nz)});
         put(a);
         put(b);
@@ -35,7 +36,8 @@ class StlSink {
         const std::uint16_t attribute = 0;
         append(&attribute, 2);
         ++count_;
-        if (buffer_.size() >= kFlushBytes) flush();
+        if (buffer_.size() >= kFlushBytes)
+            flush();
     }
 
     void flush() {
@@ -67,7 +69,8 @@ std::size_t writeSurfaceStl(const HeightMap& s, const std::string& path,
     io::PendingFile file(path);
     const std::string& tmp = file.tmpPath();
     std::ofstream out(tmp, std::ios::binary | std::ios::trunc);
-    if (!out) throw OutputError("cannot write " + path + ": cannot create " + tmp);
+    if (!out)
+        throw OutputError("cannot write " + path + ": cannot create " + tmp);
 
     std::array<char, 80> header{};
     const char title[] = "swarf as-cut surface, mm, Z = spindle axis";
@@ -80,7 +83,8 @@ std::size_t writeSurfaceStl(const HeightMap& s, const std::string& path,
     const auto keptRows = [&](double spacing) {
         std::vector<int> rows{0};
         for (int i = 1; i < s.nz - 1; ++i)
-            if (s.rowZ(i) - s.rowZ(rows.back()) >= spacing) rows.push_back(i);
+            if (s.rowZ(i) - s.rowZ(rows.back()) >= spacing)
+                rows.push_back(i);
         rows.push_back(s.nz - 1);
         return rows;
     };
@@ -95,7 +99,7 @@ std::size_t writeSurfaceStl(const HeightMap& s, const std::string& path,
         rows = keptRows(hi);
     }
     const auto total = static_cast<std::uint32_t>((rows.size() - 1) * perRow + perRow);
-    out.write(reinterpret_cast<const char*>(&total), 4);  // little-endian hosts only (x86, arm)
+    out.write(reinterpret_cast<const char*>(&total), 4); // little-endian hosts only (x86, arm)
 
     std::vector<float> cosPhi(s.nPhi), sinPhi(s.nPhi);
     for (int j = 0; j < s.nPhi; ++j) {
@@ -121,8 +125,8 @@ std::size_t writeSurfaceStl(const HeightMap& s, const std::string& path,
     const Vec endCentre{0, 0, static_cast<float>(s.rowZ(s.nz - 1))};
     for (int j = 0; j < s.nPhi; ++j) {
         const int k = (j + 1) % s.nPhi;
-        sink.triangle(startCentre, vertex(0, k), vertex(0, j));            // faces −Z
-        sink.triangle(endCentre, vertex(s.nz - 1, j), vertex(s.nz - 1, k));  // faces +Z
+        sink.triangle(startCentre, vertex(0, k), vertex(0, j));             // faces −Z
+        sink.triangle(endCentre, vertex(s.nz - 1, j), vertex(s.nz - 1, k)); // faces +Z
     }
     sink.flush();
     out.close();

@@ -31,7 +31,8 @@ const std::string& safetyCautionShort() {
         "CAUTION: a simulation of the tool path and the insert's shape only; it does not model "
         "cutting forces, deflection, chatter or tool wear. Check every reading on the machine and "
         "take a trial cut; keep guards closed, take the chuck key out, no gloves or loose clothing "
-        "near rotating work, wear eye protection, stop the spindle before measuring, take speeds and feeds from the tooling "
+        "near rotating work, wear eye protection, stop the spindle before measuring, take speeds "
+        "and feeds from the tooling "
         "supplier, and follow your shop's rules.";
     return kShort;
 }

@@ -7,7 +7,8 @@ std::string SourceLoc::str() const {
     std::string s = file.empty() ? std::string("<input>") : file;
     if (line > 0) {
         s += ":" + std::to_string(line);
-        if (column > 0) s += ":" + std::to_string(column);
+        if (column > 0)
+            s += ":" + std::to_string(column);
     }
     return s;
 }
@@ -16,9 +17,12 @@ namespace {
 std::string composeInputMessage(const SourceLoc& where, const std::string& key,
                                 const std::string& value, const std::string& expected) {
     std::string msg = where.str() + ": ";
-    if (!key.empty()) msg += key;
-    if (!value.empty()) msg += (key.empty() ? "" : " = ") + value;
-    if (!key.empty() || !value.empty()) msg += ": ";
+    if (!key.empty())
+        msg += key;
+    if (!value.empty())
+        msg += (key.empty() ? "" : " = ") + value;
+    if (!key.empty() || !value.empty())
+        msg += ": ";
     msg += expected;
     return msg;
 }

@@ -125,7 +125,8 @@ MomentView describeMoment(const Scene& scene, const CutResult& result, double po
     else if (result.nominal.radiusMm.size() == v.profile.radiusMm.size())
         v.deviationMm = normalDeviation(scene.part, result.nominal, v.profile);
     else
-        v.deviationMm = normalDeviation(scene.part, nominalOnGrid(scene.part, v.profile), v.profile);
+        v.deviationMm =
+            normalDeviation(scene.part, nominalOnGrid(scene.part, v.profile), v.profile);
     return v;
 }
 

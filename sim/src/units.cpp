@@ -57,7 +57,8 @@ std::string formatDms(double rad, int secondDecimals) {
     totalSec -= d * 3600.0;
     int m = static_cast<int>(totalSec / 60.0);
     double s = totalSec - m * 60.0;
-    if (s < 0) s = 0;
+    if (s < 0)
+        s = 0;
     char buf[64];
     std::snprintf(buf, sizeof buf, "%s%d°%02d′%0*.*f″", neg ? "-" : "", d, m,
                   secondDecimals > 0 ? secondDecimals + 3 : 2, secondDecimals, s);

@@ -27,7 +27,8 @@ struct Include {
 
 // Every #include in the C++ files below `dir` (relative to the repository), except those under
 // any of `skip`.
-std::vector<Include> includesUnder(const std::string& dir, const std::vector<std::string>& skip = {}) {
+std::vector<Include> includesUnder(const std::string& dir,
+                                   const std::vector<std::string>& skip = {}) {
     std::vector<Include> out;
     const std::regex inc(R"(^\s*#\s*include\s*[<"]([^>"]+)[>"])");
     for (const auto& e : fs::recursive_directory_iterator(kRoot / dir)) {

@@ -4,9 +4,9 @@
 // and the same for the close-up of the feed marks. The window is a real one on the display
 // (as `swarf view` opens it), not an off-screen buffer, unless SWARF_BENCH_OFFSCREEN is set.
 // Run it with no DISPLAY (it starts its own Xvfb with a 24-bit screen) or under a 24-bit one.
+#include "swarf/app/display.h"
 #include "swarf/io/scene_reader.h"
 #include "swarf/sim/kernel.h"
-#include "swarf/app/display.h"
 #include "swarf/viewer/viewer.h"
 
 #include <benchmark/benchmark.h>

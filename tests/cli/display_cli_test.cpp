@@ -1,5 +1,6 @@
-// The virtual display `swarf run` starts when there is no screen (viewer/app/support/src/display.cpp): a
-// run killed part way (Ctrl-C, kill -9) leaves no Xvfb behind.
+// The virtual display `swarf run` starts when there is no screen
+// (viewer/app/support/src/display.cpp): a run killed part way (Ctrl-C, kill -9) leaves no Xvfb
+// behind.
 #include <catch2/catch.hpp>
 
 #include <chrono>

@@ -12,12 +12,13 @@
 namespace swarf::testprofiles {
 
 /// The as-cut radius of the taper test piece at z, mm: 12.5 + 0.05 z along the cone (so 29.000
-/// on diameter at z = 40), the nose arc where the move ends (nose centre at z = 49), rising into the
-/// 15 mm bar at z ≈ 49.19. With tip height hMm the radius becomes sqrt(x² + h²) (references R7, derived).
+/// on diameter at z = 40), the nose arc where the move ends (nose centre at z = 49), rising into
+/// the 15 mm bar at z ≈ 49.19. With tip height hMm the radius becomes sqrt(x² + h²) (references R7,
+/// derived).
 inline double taperRadius(double zMm, double hMm = 0.0) {
     const double r = 0.4, s = 0.05, a = 12.5, zc = 49.0;
     const double root = std::sqrt(1 + s * s);
-    const double xc = a + s * zc + r * root;  // nose centre height at the move's end
+    const double xc = a + s * zc + r * root; // nose centre height at the move's end
     const double zTangent = zc + r * s / root;
     double x = 15.0;
     if (zMm <= zTangent)
@@ -34,7 +35,8 @@ inline Profile sampled(const std::function<double(double)>& f, double z0, double
     p.z0Mm = z0;
     p.dzMm = dz;
     const auto n = static_cast<std::size_t>(std::llround((z1 - z0) / dz)) + 1;
-    for (std::size_t i = 0; i < n; ++i) p.radiusMm.push_back(f(p.zAt(i)));
+    for (std::size_t i = 0; i < n; ++i)
+        p.radiusMm.push_back(f(p.zAt(i)));
     return p;
 }
 

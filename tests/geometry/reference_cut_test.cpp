@@ -88,5 +88,5 @@ TEST_CASE("reference cut: moves in the air cut nothing", "[geometry][reference]"
     const ReferenceResult ref = referenceCut(s, {move(-2, 12, 30, 12), move(55, 5, 70, 5)});
     CHECK(ref.movesCut == 0);
     CHECK(ref.movesSkipped == 2);
-    CHECK_THAT(ref.volumeMm3, WithinAbs(kPi * 100.0 * 40.0, 1e-6));  // derived: πR²L
+    CHECK_THAT(ref.volumeMm3, WithinAbs(kPi * 100.0 * 40.0, 1e-6)); // derived: πR²L
 }

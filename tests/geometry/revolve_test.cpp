@@ -27,7 +27,7 @@ Part taperPart() {
     cone.zEndMm = 50;
     cone.cone.gaugeZMm = 40;
     cone.cone.gaugeDiameterMm = 29;
-    cone.cone.halfAngleRad = std::atan(0.05);  // 1:10 on diameter
+    cone.cone.halfAngleRad = std::atan(0.05); // 1:10 on diameter
     cone.cone.widens = Widens::TowardChuck;
     Feature bar;
     bar.kind = FeatureKind::Cylinder;
@@ -59,7 +59,7 @@ TEST_CASE("stock solid is the stick-out cylinder", "[geometry][revolve]") {
 TEST_CASE("nominal solid follows the drawing's cone and cylinder", "[geometry][revolve]") {
     const Part part = taperPart();
     const auto outline = nominalOutline(part);
-    REQUIRE(outline.size() == 3);  // the cone's two ends and the bar's end (shared point dropped)
+    REQUIRE(outline.size() == 3); // the cone's two ends and the bar's end (shared point dropped)
     CHECK_THAT(outline[0].second, WithinAbs(12.5, 1e-12));
     CHECK_THAT(outline[1].second, WithinAbs(15.0, 1e-12));
     const Solid s = nominalSolid(part);
@@ -93,7 +93,7 @@ TEST_CASE("as-cut solid of lines and a nose arc", "[geometry][revolve]") {
     REQUIRE(f.solid.isValid());
     REQUIRE(f.solid.solidCount() == 1);
     CHECK(f.maxFitErrorMm <= 0.5e-3);
-    CHECK(f.arcCount >= 1);  // the nose arc is recognised as a circle
+    CHECK(f.arcCount >= 1); // the nose arc is recognised as a circle
     CHECK(f.splineCount == 0);
     CHECK(f.lineCount <= 6);
     // The solid's volume against the profile's frustum sum.
@@ -144,9 +144,7 @@ TEST_CASE("a curve running into a sharp step is fitted without loops", "[geometr
     // A curved flank (a parabola: not a line, not a circle) that steps 0.4 mm up to the bar
     // between two samples, as a tool off centre leaves at a shoulder. A smooth spline forced
     // round that corner loops away between the samples; the fit must not keep such a piece.
-    const auto shape = [](double z) {
-        return z < 1.0 ? 9.2 + 0.3 * z * z : 10.0;
-    };
+    const auto shape = [](double z) { return z < 1.0 ? 9.2 + 0.3 * z * z : 10.0; };
     const Profile p = testprofiles::sampled(shape, 0.0, 1.5, 0.002);
     const FittedSolid f = profileSolid(p);
     REQUIRE(f.solid.isValid());

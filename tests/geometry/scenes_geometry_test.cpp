@@ -24,16 +24,19 @@ namespace {
 std::vector<std::string> sceneFiles() {
     std::vector<std::string> files;
     for (const auto& e : fs::directory_iterator(SWARF_SCENES_DIR))
-        if (e.path().extension() == ".toml") files.push_back(e.path().string());
+        if (e.path().extension() == ".toml")
+            files.push_back(e.path().string());
     std::sort(files.begin(), files.end());
     return files;
 }
 
 // The drawing's main cone, or its first chamfer.
 const Feature* mainSlope(const Part& part) {
-    if (const Feature* f = part.mainCone()) return f;
+    if (const Feature* f = part.mainCone())
+        return f;
     for (const Feature& f : part.features)
-        if (f.kind == FeatureKind::Chamfer) return &f;
+        if (f.kind == FeatureKind::Chamfer)
+            return &f;
     return nullptr;
 }
 
@@ -42,7 +45,8 @@ int pieces(const Profile& p) {
     int count = 0;
     bool inside = false;
     for (double r : p.radiusMm) {
-        if (r > 1e-9 && !inside) ++count;
+        if (r > 1e-9 && !inside)
+            ++count;
         inside = r > 1e-9;
     }
     return count;
@@ -50,7 +54,8 @@ int pieces(const Profile& p) {
 
 // Scenes written for `swarf plan` have no passes: plan them, so there is a cut to check.
 Scene withPasses(const Scene& scene) {
-    if (!scene.plan.passes.empty()) return scene;
+    if (!scene.plan.passes.empty())
+        return scene;
     const ConePlan plan = planCone(scene);
     return plan.planned ? plan.scene : scene;
 }
@@ -64,7 +69,8 @@ double kernelVolumeToJaws(const Scene& scene, const Profile& asCut) {
 }
 } // namespace
 
-TEST_CASE("scenes: reference path, kernel and STEP file agree", "[geometry][reference][step][scenes]") {
+TEST_CASE("scenes: reference path, kernel and STEP file agree",
+          "[geometry][reference][step][scenes]") {
     const auto files = sceneFiles();
     REQUIRE_FALSE(files.empty());
     for (const std::string& file : files) {
@@ -92,8 +98,8 @@ TEST_CASE("scenes: reference path, kernel and STEP file agree", "[geometry][refe
             }
 
             // The as-cut STEP file read back against the kernel.
-            const fs::path dir =
-                fs::temp_directory_path() / ("swarf-geometry-scene-" + fs::path(file).stem().string());
+            const fs::path dir = fs::temp_directory_path() /
+                                 ("swarf-geometry-scene-" + fs::path(file).stem().string());
             fs::remove_all(dir);
             fs::create_directories(dir);
             const RunSolidsReport report = writeRunSolids(scene, kernel, dir.string());
@@ -113,7 +119,7 @@ TEST_CASE("scenes: reference path, kernel and STEP file agree", "[geometry][refe
             // Leftover and overcut add up where the drawing has features (derived: volumes of
             // disjoint solids add): as cut = nominal + leftover − overcut there.
             const RunSolids solids = makeRunSolids(scene, kernel);
-            const double rBig = scene.stock.diameterMm;  // beyond any radius of the part
+            const double rBig = scene.stock.diameterMm; // beyond any radius of the part
             const Solid extent =
                 polylineSolid({{scene.part.zMinMm(), rBig}, {scene.part.zMaxMm(), rBig}});
             const double asCutThere = solids.asCut.solid.common(extent).volumeMm3();

@@ -28,7 +28,7 @@ fs::path freshDir(const std::string& name) {
 
 TEST_CASE("as-cut STEP file reads back as one valid solid", "[geometry][step]") {
     const fs::path dir = freshDir("step");
-    const Profile profile = testprofiles::taperProfile();  // a 60 mm stick-out, datum face at 0
+    const Profile profile = testprofiles::taperProfile(); // a 60 mm stick-out, datum face at 0
     const FittedSolid asCut = profileSolid(profile);
     const std::string path = (dir / "as-cut.step").string();
 
@@ -47,8 +47,8 @@ TEST_CASE("as-cut STEP file reads back as one valid solid", "[geometry][step]") 
         std::stringstream text;
         text << in.rdbuf();
         CHECK(text.str().find("ISO-10303-21") != std::string::npos);
-        CHECK(text.str().find("'as-cut'") != std::string::npos);  // the product's name
-        CHECK(text.str().find(".MILLI.") != std::string::npos);   // lengths in mm
+        CHECK(text.str().find("'as-cut'") != std::string::npos); // the product's name
+        CHECK(text.str().find(".MILLI.") != std::string::npos);  // lengths in mm
     }
     REQUIRE(back.solidCount() == 1);
     CHECK(back.isValid());

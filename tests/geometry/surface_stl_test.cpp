@@ -31,7 +31,8 @@ std::vector<Tri> readStl(const std::string& path, std::uint32_t& declared) {
     while (in.read(rec, 50)) {
         Tri t;
         std::memcpy(t.n.data(), rec, 12);
-        for (int k = 0; k < 3; ++k) std::memcpy(t.v[k].data(), rec + 12 + 12 * k, 12);
+        for (int k = 0; k < 3; ++k)
+            std::memcpy(t.v[k].data(), rec + 12 + 12 * k, 12);
         tris.push_back(t);
     }
     return tris;
@@ -43,10 +44,11 @@ TEST_CASE("surface STL is a closed mesh of the height map", "[geometry][stl]") {
     s.z0Mm = -1;
     s.dzMm = 0.5;
     s.nz = 5;
-    s.zMm = {-1.0, -0.5, 0.0, 0.25, 1.0};  // rows need not be evenly spaced
+    s.zMm = {-1.0, -0.5, 0.0, 0.25, 1.0}; // rows need not be evenly spaced
     s.nPhi = 12;
     for (int i = 0; i < s.nz; ++i)
-        for (int j = 0; j < s.nPhi; ++j) s.radiusMm.push_back(10.0f + 0.01f * static_cast<float>(j % 2));
+        for (int j = 0; j < s.nPhi; ++j)
+            s.radiusMm.push_back(10.0f + 0.01f * static_cast<float>(j % 2));
     const fs::path dir = fs::temp_directory_path() / "swarf-geometry-test-stl";
     fs::remove_all(dir);
     fs::create_directories(dir);
@@ -84,7 +86,8 @@ TEST_CASE("surface STL is a closed mesh of the height map", "[geometry][stl]") {
     CHECK(std::abs(side.v[0][2] - (-1.0f)) < 1e-6f);
     float zMax = -10;
     for (const Tri& t : tris)
-        for (const auto& v : t.v) zMax = std::max(zMax, v[2]);
+        for (const auto& v : t.v)
+            zMax = std::max(zMax, v[2]);
     CHECK(zMax == 1.0f);
     CHECK(std::abs(std::hypot(side.v[0][0], side.v[0][1]) - 10.0f) < 1e-5f);
 }
@@ -100,14 +103,15 @@ TEST_CASE("surface STL keeps under its triangle limit", "[geometry][stl]") {
     o.maxTriangles = 3000;
     const std::size_t n = writeSurfaceStl(s, path, o);
     CHECK(n <= 3000);
-    CHECK(n >= 2000);  // the smallest spacing that fits, not much coarser
+    CHECK(n >= 2000); // the smallest spacing that fits, not much coarser
     std::uint32_t declared = 0;
     const auto tris = readStl(path, declared);
     CHECK(tris.size() == n);
     // The last row is kept: the mesh still ends at z = 1 mm.
     float zMax = -1;
     for (const Tri& t : tris)
-        for (const auto& v : t.v) zMax = std::max(zMax, v[2]);
+        for (const auto& v : t.v)
+            zMax = std::max(zMax, v[2]);
     CHECK(std::abs(zMax - 1.0f) < 1e-6f);
     fs::remove(path);
 }

@@ -12,8 +12,7 @@
 using namespace swarf;
 namespace fs = std::filesystem;
 
-TEST_CASE("report.html carries verdict, cautions, findings, pictures and passes",
-          "[io][report]") {
+TEST_CASE("report.html carries verdict, cautions, findings, pictures and passes", "[io][report]") {
     const Scene s = test::syntheticScene(3);
     const CutResult r =
         test::syntheticResult(s, [](int k) { return k == 2 ? 0.1 : 1.0 - 0.4 * k; });

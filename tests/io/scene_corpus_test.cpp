@@ -50,8 +50,7 @@ double simpsonVolumeMm3(const Profile& p, std::size_t lo, std::size_t hi) {
 double quadratureGapMm3(const Profile& p, std::size_t lo, std::size_t hi) {
     double tv = 0;
     for (std::size_t i = lo; i < hi; ++i)
-        tv += kPi * std::abs(p.radiusMm[i + 1] * p.radiusMm[i + 1] -
-                             p.radiusMm[i] * p.radiusMm[i]);
+        tv += kPi * std::abs(p.radiusMm[i + 1] * p.radiusMm[i + 1] - p.radiusMm[i] * p.radiusMm[i]);
     return p.dzMm / 3 * tv;
 }
 
@@ -75,8 +74,8 @@ void checkVolumes(const Scene& s, const CutResult& r) {
     // As cut: Simpson on the samples, within the gap derived above (plus rounding).
     const double asCut = simpsonVolumeMm3(r.asCut, 0, n - 1);
     const double gap = quadratureGapMm3(r.asCut, 0, n - 1) + 1e-9 * stock;
-    INFO("as cut: kernel " << r.asCutVolumeMm3 << " mm3, Simpson " << asCut << " mm3, gap "
-                           << gap << " mm3");
+    INFO("as cut: kernel " << r.asCutVolumeMm3 << " mm3, Simpson " << asCut << " mm3, gap " << gap
+                           << " mm3");
     CHECK(std::abs(r.asCutVolumeMm3 - asCut) <= gap);
     // Removed: the closed-form stock less the Simpson as-cut volume.
     CHECK(std::abs(r.removedVolumeMm3 - (stock - asCut)) <= gap);
@@ -208,10 +207,8 @@ TEST_CASE("a drawing cut within tolerance has the drawing's volume", "[corpus][k
             // As cut over [zStart, zEnd]: Simpson on the samples inside, a trapezoid on π r² for
             // each sliver (shorter than one sample step) at the ends.
             REQUIRE(g.z0Mm <= f.zStartMm + 1e-9);
-            const auto lo =
-                static_cast<std::size_t>(std::ceil((f.zStartMm - g.z0Mm) / dz - 1e-9));
-            const auto hi =
-                static_cast<std::size_t>(std::floor((f.zEndMm - g.z0Mm) / dz + 1e-9));
+            const auto lo = static_cast<std::size_t>(std::ceil((f.zStartMm - g.z0Mm) / dz - 1e-9));
+            const auto hi = static_cast<std::size_t>(std::floor((f.zEndMm - g.z0Mm) / dz + 1e-9));
             REQUIRE(hi < g.radiusMm.size());
             REQUIRE(lo < hi);
             auto sliver = [&](double z0, double z1) {

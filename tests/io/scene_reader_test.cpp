@@ -531,8 +531,8 @@ TEST_CASE("setup approach: in_order or take_up, written back, anything else refu
     const Scene d = io::readSceneText(kMinimal, "d.toml");
     CHECK(io::readSceneText(io::sceneToToml(d), "w.toml").setup.approach == Approach::InOrder);
 
-    const std::string bad = replaced(kMinimal, "[setup.compound]",
-                                     "[setup]\napproach = \"below\"\n\n[setup.compound]");
+    const std::string bad =
+        replaced(kMinimal, "[setup.compound]", "[setup]\napproach = \"below\"\n\n[setup.compound]");
     try {
         io::readSceneText(bad, "bad.toml");
         FAIL("an unknown approach was accepted");

@@ -1,8 +1,8 @@
 // The set-up sheet: safety cautions, every pass's readings in the user's units as turns and
 // divisions, the checks and roughness, and a self-contained HTML page.
 #include "swarf/io/scene_reader.h"
-#include "swarf/sim/planner.h"
 #include "swarf/io/setup_sheet.h"
+#include "swarf/sim/planner.h"
 
 #include <catch2/catch.hpp>
 

@@ -57,7 +57,7 @@ TEST_CASE("whole slider positions show the profile after that pass", "[sim][mome
 TEST_CASE("deviation at a moment is normal to the drawing, + left on", "[sim][moment]") {
     const Scene s = test::syntheticScene(3);
     const CutResult r = test::syntheticResult(s, leftOn);
-    const auto m = describeMoment(s, r, 1.0);   // 1.0 mm left on radially
+    const auto m = describeMoment(s, r, 1.0);           // 1.0 mm left on radially
     const double cosA = 1 / std::sqrt(1 + 0.05 * 0.05); // derived: normal of a 1:10 cone
     const std::size_t mid = 2100;                       // z = 20
     CHECK(m.deviationMm[mid] == Approx(1.0 * cosA).epsilon(1e-9));

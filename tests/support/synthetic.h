@@ -27,7 +27,7 @@ inline Scene syntheticScene(int passes = 3) {
     cone.zEndMm = 40;
     cone.cone.gaugeZMm = 0;
     cone.cone.gaugeDiameterMm = 20;
-    cone.cone.halfAngleRad = std::atan(0.05);  // 1:10 on diameter
+    cone.cone.halfAngleRad = std::atan(0.05); // 1:10 on diameter
     cone.cone.widens = Widens::TowardChuck;
     cone.toleranceMm = 0.05;
     s.part.features.push_back(cone);
@@ -54,7 +54,8 @@ inline Scene syntheticScene(int passes = 3) {
 
 /// Nominal radius of the synthetic cone, mm (NaN off the cone).
 inline double syntheticNominal(double z) {
-    if (z < 0 || z > 40) return std::numeric_limits<double>::quiet_NaN();
+    if (z < 0 || z > 40)
+        return std::numeric_limits<double>::quiet_NaN();
     return 10 + 0.05 * z;
 }
 
@@ -79,9 +80,11 @@ inline CutResult syntheticResult(const Scene& s, const std::function<double(int)
         Profile p = r.stock;
         for (std::size_t i = 0; i < p.radiusMm.size(); ++i) {
             const double z = p.zAt(i);
-            if (z < 0 || z > 40) continue;
+            if (z < 0 || z > 40)
+                continue;
             double rr = syntheticNominal(z) + leftOnAfter(k);
-            if (k == n - 1 && ripple) rr += ripple(z);
+            if (k == n - 1 && ripple)
+                rr += ripple(z);
             p.radiusMm[i] = std::min(15.0, rr);
         }
         r.afterPass.push_back(p);
@@ -122,7 +125,7 @@ inline CutResult syntheticResult(const Scene& s, const std::function<double(int)
     }
     r.gaugeZMm = 0;
     r.gaugeNominalDiameterMm = 20;
-    r.gaugeAsCutDiameterMm = 2 * r.asCut.radiusMm[100];  // z = 0
+    r.gaugeAsCutDiameterMm = 2 * r.asCut.radiusMm[100]; // z = 0
     return r;
 }
 

@@ -2,11 +2,11 @@
 // ensureDisplay start a virtual display).
 #include "swarf/viewer/snapshots.h"
 
+#include "support/synthetic.h"
+#include "swarf/io/report.h"
 #include "swarf/io/scene_reader.h"
 #include "swarf/sim/kernel.h"
 #include "swarf/viewer/image.h"
-#include "swarf/io/report.h"
-#include "support/synthetic.h"
 
 #include <catch2/catch.hpp>
 
@@ -83,8 +83,7 @@ TEST_CASE("snapshots of a part with metal left on", "[viewer][snapshots]") {
         CHECK_FALSE(fs::exists(f + ".tmp"));
         const auto img = viewer::readPng(f);
         CHECK(img.widthPx == 640);
-        CHECK(img.heightPx ==
-              (f == rep.part || f == rep.cone || f == rep.marks ? 480 : 240));
+        CHECK(img.heightPx == (f == rep.part || f == rep.cone || f == rep.marks ? 480 : 240));
         CHECK(distinctColours(img) > 20); // not blank
     }
     // The cone close-up is mostly the warm (left-on) side of the map.

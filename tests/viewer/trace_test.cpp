@@ -2,9 +2,9 @@
 // section and chart, and the close-up stretch.
 #include "swarf/viewer/trace.h"
 
+#include "support/synthetic.h"
 #include "swarf/io/scene_reader.h"
 #include "swarf/sim/kernel.h"
-#include "support/synthetic.h"
 
 #include <catch2/catch.hpp>
 

@@ -3,10 +3,10 @@
 #include "swarf/app/display.h"
 #include "swarf/viewer/viewer.h"
 
+#include "support/synthetic.h"
 #include "swarf/io/scene_reader.h"
 #include "swarf/sim/kernel.h"
 #include "swarf/sim/moment.h"
-#include "support/synthetic.h"
 
 #include <catch2/catch.hpp>
 

@@ -5,11 +5,11 @@
 #include "swarf/io/output_file.h"
 #include "swarf/io/scene_reader.h"
 #include "swarf/io/scene_writer.h"
+#include "swarf/io/setup_sheet.h"
 #include "swarf/sim/caution.h"
 #include "swarf/sim/error.h"
 #include "swarf/sim/kernel.h"
 #include "swarf/sim/planner.h"
-#include "swarf/io/setup_sheet.h"
 
 #include <fmt/core.h>
 
@@ -67,10 +67,8 @@ int runPlan(const PlanArgs& a) {
     // Prove the plan as written: read the file back and simulate it.
     const Scene written = io::readScene(plannedPath);
     const CutResult result = simulate(written);
-    io::writeTextFile((dir / "setup-sheet.txt").string(),
-                            io::setupSheetText(plan, &result));
-    io::writeTextFile((dir / "setup-sheet.html").string(),
-                            io::setupSheetHtml(plan, &result));
+    io::writeTextFile((dir / "setup-sheet.txt").string(), io::setupSheetText(plan, &result));
+    io::writeTextFile((dir / "setup-sheet.html").string(), io::setupSheetHtml(plan, &result));
 
     fmt::print("{}: {} passes ({} cone roughing, {} stepped saddle, compound in {} setting{})\n",
                scene.name, plan.scene.plan.passes.size(), plan.roughingPasses,

@@ -5,6 +5,8 @@
 #include "commands.h"
 #include "swarf/app/display.h"
 #include "swarf/app/progress.h"
+#include "swarf/geometry/reference_cut.h"
+#include "swarf/geometry/run_solids.h"
 #include "swarf/io/output_file.h"
 #include "swarf/io/report.h"
 #include "swarf/io/result_writer.h"
@@ -12,9 +14,6 @@
 #include "swarf/sim/caution.h"
 #include "swarf/sim/error.h"
 #include "swarf/sim/kernel.h"
-#include "swarf/geometry/reference_cut.h"
-#include "swarf/geometry/run_solids.h"
-#include "swarf/io/report.h"
 #include "swarf/viewer/snapshots.h"
 
 #include <fmt/core.h>
@@ -120,15 +119,16 @@ void registerRun(CLI::App& app, int& exitCode) {
             so.writeSurfaceStl = *stl;
             const geometry::RunSolidsReport rep = geometry::writeRunSolids(s, result, *outDir, so);
             written.insert(written.end(), rep.files.begin(), rep.files.end());
-            stepNote = fmt::format("as-cut solid: {} lines, {} arcs, {} B-splines; largest "
-                                   "distance from the kernel's profile {:.3f} µm",
-                                   rep.lineCount, rep.arcCount, rep.splineCount,
-                                   rep.fitErrorMm * 1000.0);
+            stepNote =
+                fmt::format("as-cut solid: {} lines, {} arcs, {} B-splines; largest "
+                            "distance from the kernel's profile {:.3f} µm",
+                            rep.lineCount, rep.arcCount, rep.splineCount, rep.fitErrorMm * 1000.0);
         }
         if (!*noPictures) {
             ensureDisplay();
             const viewer::SnapshotReport pics = viewer::renderSnapshots(s, result, *outDir);
-            for (const std::string& f : pics.files()) written.push_back(f);
+            for (const std::string& f : pics.files())
+                written.push_back(f);
             written.push_back(io::writeReport(s, result, *outDir, &pics));
         }
         if (*reference) {
@@ -139,7 +139,8 @@ void registerRun(CLI::App& app, int& exitCode) {
             double kernelVolume = result.asCutVolumeMm3;
             const double zEnd = result.asCut.zAt(result.asCut.radiusMm.size() - 1);
             const double rBar = 0.5 * s.stock.diameterMm;
-            if (s.stock.jawZMm() > zEnd) kernelVolume += kPi * rBar * rBar * (s.stock.jawZMm() - zEnd);
+            if (s.stock.jawZMm() > zEnd)
+                kernelVolume += kPi * rBar * rBar * (s.stock.jawZMm() - zEnd);
             const double rel = (ref.volumeMm3 - kernelVolume) / std::max(1e-12, ref.volumeMm3);
             double gaugeDiff = 0;
             if (auto rr = ref.asCut.radiusAtZ(result.gaugeZMm))
@@ -151,10 +152,13 @@ void registerRun(CLI::App& app, int& exitCode) {
         }
 
         printSummary(s, result);
-        if (!stepNote.empty()) fmt::print("{}\n", stepNote);
-        if (!referenceNote.empty()) fmt::print("{}\n", referenceNote);
+        if (!stepNote.empty())
+            fmt::print("{}\n", stepNote);
+        if (!referenceNote.empty())
+            fmt::print("{}\n", referenceNote);
         fmt::print("wrote:\n");
-        for (const std::string& f : written) fmt::print("  {}\n", f);
+        for (const std::string& f : written)
+            fmt::print("  {}\n", f);
         for (const std::string& line : wrapWords(safetyCautionShort(), 96))
             fmt::print("{}\n", line);
         exitCode = kExitOk;

@@ -164,7 +164,8 @@ TaperRequest resolveCone(const TaperOptions& o) {
 std::pair<double, double> rollStacks(const std::string& text, Units u) {
     const auto comma = text.find(',');
     if (comma == std::string::npos)
-        bad("--roll-stacks", text, std::string("two stack heights in ") + unitName(u) + ", as H1,H2");
+        bad("--roll-stacks", text,
+            std::string("two stack heights in ") + unitName(u) + ", as H1,H2");
     const double h1 = lengthOpt("--roll-stacks", text.substr(0, comma), u, ">=0");
     const double h2 = lengthOpt("--roll-stacks", text.substr(comma + 1), u, ">=0");
     if (h1 == h2)
@@ -181,8 +182,8 @@ GaugeBlockSet blockSet(const std::string& text, Units u) {
         auto v = parseNumberText(item);
         if (!v || !(*v > 0))
             bad("--blocks", text,
-                std::string("block sizes in ") + unitName(u) +
-                    " > 0, separated by commas (bad: '" + item + "')");
+                std::string("block sizes in ") + unitName(u) + " > 0, separated by commas (bad: '" +
+                    item + "')");
         set.sizes.push_back(*v);
         start = end + 1;
     }
@@ -192,8 +193,9 @@ GaugeBlockSet blockSet(const std::string& text, Units u) {
 } // namespace
 
 double TaperRequest::largeMm() const {
-    return gaugeAtLarge || !lengthMm ? gaugeDiaMm
-                                     : otherEndDiameterMm(gaugeDiaMm, halfAngleRad, *lengthMm, false);
+    return gaugeAtLarge || !lengthMm
+               ? gaugeDiaMm
+               : otherEndDiameterMm(gaugeDiaMm, halfAngleRad, *lengthMm, false);
 }
 
 double TaperRequest::smallMm() const {
@@ -218,13 +220,15 @@ TaperRequest readTaperOptions(const TaperOptions& o) {
     if (f && !r)
         bad("--feed", o.feed, "--nose-radius too, for the roughness");
     if (f && r && !(*f < 2 * *r))
-        bad("--feed", o.feed, "a feed below twice the nose radius (" + formatLength(2 * *r, u) + ")");
+        bad("--feed", o.feed,
+            "a feed below twice the nose radius (" + formatLength(2 * *r, u) + ")");
     if (!o.blocks.empty())
         b.blocks = blockSet(o.blocks, u);
     if (!o.at.empty()) {
         auto v = parseNumberText(o.at);
         if (!v)
-            bad("--at", o.at, std::string("a distance in ") + unitName(u) + " from the gauge plane");
+            bad("--at", o.at,
+                std::string("a distance in ") + unitName(u) + " from the gauge plane");
         b.atMm = toMm(*v, u);
     }
     b.toDiaMm = optLength("--to-dia", o.toDia, u);

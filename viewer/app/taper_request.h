@@ -31,11 +31,11 @@ struct TaperRequest {
     std::string note;   ///< a standard's note
     double gaugeDiaMm = 0;
     double halfAngleRad = 0;
-    bool gaugeAtLarge = true;            ///< the gauge diameter is at the cone's large end
-    std::optional<double> lengthMm;      ///< from the gauge plane to the cone's other end
+    bool gaugeAtLarge = true;       ///< the gauge diameter is at the cone's large end
+    std::optional<double> lengthMm; ///< from the gauge plane to the cone's other end
     Widens widens = Widens::TowardChuck;
-    std::optional<double> atMm;          ///< --at: signed distance from the gauge plane
-    std::optional<double> toDiaMm;       ///< --to-dia
+    std::optional<double> atMm;    ///< --at: signed distance from the gauge plane
+    std::optional<double> toDiaMm; ///< --to-dia
     std::optional<double> noseRadiusMm, feedMmPerRev, tipHeightMm, workLengthMm, rollDiameterMm;
     std::optional<std::pair<double, double>> rollStacksMm; ///< --roll-stacks H1,H2
     TipSide tipSide = TipSide::ChuckSide;

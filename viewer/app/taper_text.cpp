@@ -45,28 +45,28 @@ void printCone(Out& out, const TaperRequest& b) {
     out.say("  taper per foot    {:.5f} in/ft (on diameter)\n", 12 * c);
     out.say("  rate C            {:.6f} (diameter change per unit length)\n", c);
     out.say("  gauge diameter    {} (at the {} end)\n", formatLength(b.gaugeDiaMm, u),
-        b.gaugeAtLarge ? "large" : "small");
+            b.gaugeAtLarge ? "large" : "small");
     if (b.lengthMm) {
         out.say("  length            {}\n", formatLength(*b.lengthMm, u));
         out.say("  large end         {}\n", formatLength(b.largeMm(), u));
         out.say("  small end         {}\n", formatLength(b.smallMm(), u));
     }
     out.say("  diameter change   {} per {}, {} per {}\n",
-        formatLength(c * toMm(1, u), u, Precision::Fine), unitWord(u),
-        formatLength(c * toMm(u == Units::Inch ? 12 : 100, u), u),
-        u == Units::Inch ? "foot" : "100 mm");
+            formatLength(c * toMm(1, u), u, Precision::Fine), unitWord(u),
+            formatLength(c * toMm(u == Units::Inch ? 12 : 100, u), u),
+            u == Units::Inch ? "foot" : "100 mm");
     const Cone cone{0, b.gaugeDiaMm, t, Widens::TowardChuck};
     if (b.atMm) {
         // Positive toward the cone's other end.
         const double d = cone.diameterAt((b.gaugeAtLarge ? -1 : 1) * *b.atMm);
         out.say("  at {} from the gauge plane toward the {} end: diameter {}\n",
-            formatLength(*b.atMm, u), b.gaugeAtLarge ? "small" : "large", formatLength(d, u));
+                formatLength(*b.atMm, u), b.gaugeAtLarge ? "small" : "large", formatLength(d, u));
     }
     if (b.toDiaMm) {
         const double d = *b.toDiaMm;
         out.say("  diameter {} is {} from the gauge plane ({} end side)\n", formatLength(d, u),
-            formatLength(lengthBetweenDiameters(cone, b.gaugeDiaMm, d), u),
-            d < b.gaugeDiaMm ? "small" : "large");
+                formatLength(lengthBetweenDiameters(cone, b.gaugeDiaMm, d), u),
+                d < b.gaugeDiaMm ? "small" : "large");
     }
 }
 
@@ -75,15 +75,15 @@ void printCompound(Out& out, const TaperRequest& b) {
     const double t = b.halfAngleRad;
     out.say("\nCompound slide (saddle locked, in-feed on the cross-slide)\n");
     out.say("  scale graduated from the spindle axis:  set {}\n",
-        formatDms(compoundScaleReadingRad(t, CompoundScale::FromAxis), 1));
+            formatDms(compoundScaleReadingRad(t, CompoundScale::FromAxis), 1));
     out.say("  scale graduated from the cross-slide:   set {}\n",
-        formatDms(compoundScaleReadingRad(t, CompoundScale::FromCrossSlide), 1));
+            formatDms(compoundScaleReadingRad(t, CompoundScale::FromCrossSlide), 1));
     if (b.lengthMm)
-        out.say("  stroke to cover {} of cone:  {} along the compound\n", formatLength(*b.lengthMm, u),
-            formatLength(compoundStrokeMm(t, *b.lengthMm), u));
+        out.say("  stroke to cover {} of cone:  {} along the compound\n",
+                formatLength(*b.lengthMm, u), formatLength(compoundStrokeMm(t, *b.lengthMm), u));
     const double unit = toMm(u == Units::Inch ? 0.001 : 0.01, u);
     out.say("  {} of compound travel changes the diameter by {}\n", formatLength(unit, u),
-        formatLength(diameterChangeForCompoundTravelMm(t, unit), u, Precision::Finer));
+            formatLength(diameterChangeForCompoundTravelMm(t, unit), u, Precision::Finer));
 }
 
 std::string blockList(const GaugeStack& s, Units setUnits) {
@@ -101,7 +101,7 @@ void printSineBars(Out& out, const TaperRequest& b, const std::optional<GaugeBlo
     const GaugeBlockSet metric = custom ? *custom : commonMetricBlockSet();
     out.say("\nSine bar: stack under one roll (H = L sin angle)\n");
     out.say("  blocks from: {}\n",
-        custom ? custom->name : inch.name + " / " + metric.name + " (common practice)");
+            custom ? custom->name : inch.name + " / " + metric.name + " (common practice)");
     const std::pair<const char*, double> uses[] = {
         {"half angle (work on sine centres: the top line lies level)", b.halfAngleRad},
         {"included angle (cone lying on the bar: the top line lies level)", 2 * b.halfAngleRad}};
@@ -119,7 +119,8 @@ void printSineBars(Out& out, const TaperRequest& b, const std::optional<GaugeBlo
             const auto s = combineGaugeBlocks(h, set);
             const std::string stack = formatLength(h, show, Precision::Fine);
             if (s.found)
-                out.say("    {:>6} bar: {:<13} blocks {}\n", bar.name, stack, blockList(s, set.units));
+                out.say("    {:>6} bar: {:<13} blocks {}\n", bar.name, stack,
+                        blockList(s, set.units));
             else
                 out.say("    {:>6} bar: {:<13} no blocks: {}\n", bar.name, stack, s.reason);
         }
@@ -130,16 +131,18 @@ void printNoseOffsets(Out& out, const TaperRequest& b, double r, TipSide side) {
     const Units u = b.u;
     const auto o = noseRadiusOffsets(r, b.halfAngleRad, b.widens, side);
     const int fine = lengthDecimals(u, Precision::Fine);
-    out.say("\nNose radius {} (outside cone widening toward the {}; imaginary tip on the {} side)\n",
+    out.say(
+        "\nNose radius {} (outside cone widening toward the {}; imaginary tip on the {} side)\n",
         formatLength(r, u, fine), b.widens == Widens::TowardChuck ? "chuck" : "tailstock",
         side == TipSide::ChuckSide ? "chuck" : "tailstock");
     out.say("  path on the drawing line {}: {} normal to the surface\n",
-        o.leftOn ? "leaves metal on" : "overcuts", formatLength(o.normalErrorMm, u, fine));
+            o.leftOn ? "leaves metal on" : "overcuts", formatLength(o.normalErrorMm, u, fine));
     out.say("  shift the path by ONE of:\n");
-    out.say("    ΔX {} on radius = {} on diameter, {} the axis\n", formatLength(o.dxRadiusMm, u, fine),
-        formatLength(o.dxDiameterMm, u, fine), o.xShiftSign < 0 ? "toward" : "away from");
+    out.say("    ΔX {} on radius = {} on diameter, {} the axis\n",
+            formatLength(o.dxRadiusMm, u, fine), formatLength(o.dxDiameterMm, u, fine),
+            o.xShiftSign < 0 ? "toward" : "away from");
     out.say("    ΔZ {} toward the {}\n", formatLength(o.dzMm, u, fine),
-        o.zShiftSign > 0 ? "chuck" : "tailstock");
+            o.zShiftSign > 0 ? "chuck" : "tailstock");
 }
 
 void printMethods(Out& out, const TaperRequest& b) {
@@ -152,14 +155,14 @@ void printMethods(Out& out, const TaperRequest& b) {
     const TaperMethodLimits& lim = b.limits;
     TaperJob job{b.halfAngleRad, *b.lengthMm, b.workLengthMm, true};
     out.say("  taper attachment guide bar: set {} from the axis (tan = TPF/24); offset {} per {}\n",
-        formatDms(b.halfAngleRad, 1),
-        formatLength(taperAttachmentOffsetMm(b.halfAngleRad, toMm(u == Units::Inch ? 10 : 100, u)),
-                     u),
-        u == Units::Inch ? "10 in of bar" : "100 mm of bar");
+            formatDms(b.halfAngleRad, 1),
+            formatLength(
+                taperAttachmentOffsetMm(b.halfAngleRad, toMm(u == Units::Inch ? 10 : 100, u)), u),
+            u == Units::Inch ? "10 in of bar" : "100 mm of bar");
     if (job.workLengthMm)
         out.say("  tailstock set-over for {} of work between centres: {}\n",
-            formatLength(*job.workLengthMm, u),
-            formatLength(tailstockSetOverMm(b.halfAngleRad, *job.workLengthMm), u));
+                formatLength(*job.workLengthMm, u),
+                formatLength(tailstockSetOverMm(b.halfAngleRad, *job.workLengthMm), u));
     for (const auto& m : judgeTaperMethods(job, lim))
         out.say("  {:<20} {:<14} {}\n", m.name, m.practical ? "practical" : "not practical", m.why);
 }
@@ -168,7 +171,7 @@ void printRolls(Out& out, const TaperRequest& b) {
     const Units u = b.u;
     const double d = *b.rollDiameterMm;
     out.say("\nOver two rolls of {} (cone standing on its small end on a surface plate)\n",
-        formatLength(d, u));
+            formatLength(d, u));
     if (!b.lengthMm) {
         out.say("  give --length to place the rolls on the cone\n");
         return;
@@ -191,22 +194,22 @@ void printRolls(Out& out, const TaperRequest& b) {
     const auto rr = rollReadingsForCone(b.smallMm(), b.halfAngleRad, d, h1, h2);
     const int fine = lengthDecimals(u, Precision::Fine);
     out.say("  rolls on stacks {}: centres {} up, cone diameter {}, read M1 = {}\n",
-        formatLength(h1, u), formatLength(rr.centreHeight1Mm, u),
-        formatLength(rr.diameter1Mm, u, fine), formatLength(rr.reading1Mm, u, fine));
+            formatLength(h1, u), formatLength(rr.centreHeight1Mm, u),
+            formatLength(rr.diameter1Mm, u, fine), formatLength(rr.reading1Mm, u, fine));
     out.say("  rolls on stacks {}: centres {} up, cone diameter {}, read M2 = {}\n",
-        formatLength(h2, u), formatLength(rr.centreHeight2Mm, u),
-        formatLength(rr.diameter2Mm, u, fine), formatLength(rr.reading2Mm, u, fine));
+            formatLength(h2, u), formatLength(rr.centreHeight2Mm, u),
+            formatLength(rr.diameter2Mm, u, fine), formatLength(rr.reading2Mm, u, fine));
     out.say("  M2 − M1 = {} for {} of height; M − D = {}\n",
-        formatLength(rr.reading2Mm - rr.reading1Mm, u, fine), formatLength(h2 - h1, u),
-        formatLength(rr.reading1Mm - rr.diameter1Mm, u, fine + 1));
+            formatLength(rr.reading2Mm - rr.reading1Mm, u, fine), formatLength(h2 - h1, u),
+            formatLength(rr.reading1Mm - rr.diameter1Mm, u, fine + 1));
     out.say("  from your readings: tan(half angle) = (M2 − M1) / (2 (H2 − H1)); "
-        "D = M − d (1 + sec(half angle))\n");
+            "D = M − d (1 + sec(half angle))\n");
 }
 
 void printTipHeight(Out& out, const TaperRequest& b, double h) {
     const Units u = b.u;
     out.say("\nTip {} {} centre (a straight cut makes a hyperboloid, not a cone)\n",
-        formatLength(std::fabs(h), u, Precision::Normal), h >= 0 ? "above" : "below");
+            formatLength(std::fabs(h), u, Precision::Normal), h >= 0 ? "above" : "below");
     std::vector<std::pair<const char*, double>> dias{{"gauge", b.gaugeDiaMm}};
     if (b.lengthMm)
         dias = {{"large end", b.largeMm()}, {"small end", b.smallMm()}};
@@ -216,22 +219,23 @@ void printTipHeight(Out& out, const TaperRequest& b, double h) {
             continue;
         }
         out.say("  {:<10} {}: cut {} larger on diameter (≈ 2h²/D = {})\n", what, formatLength(d, u),
-            formatSmallLength(diameterErrorOffCentreMm(d, h), u),
-            formatSmallLength(diameterErrorOffCentreApproxMm(d, h), u));
+                formatSmallLength(diameterErrorOffCentreMm(d, h), u),
+                formatSmallLength(diameterErrorOffCentreApproxMm(d, h), u));
     }
 }
 
 void printRoughness(Out& out, const TaperRequest& b, double f, double r) {
     const Units u = b.u;
     out.say("\nTheoretical roughness, feed {} per rev, nose radius {}\n",
-        formatLength(f, u, Precision::Normal), formatLength(r, u, Precision::Insert));
+            formatLength(f, u, Precision::Normal), formatLength(r, u, Precision::Insert));
     auto rough = [u](double mm) {
         return u == Units::Inch
                    ? fmt::format("{:.1f} µin ({:.3f} µm)", mm / kMmPerInch * 1e6, mm * 1e3)
                    : fmt::format("{:.3f} µm", mm * 1e3);
     };
     out.say("  Rt = f²/8r {}   exact arc {}\n", rough(rtApproxMm(f, r)), rough(rtExactMm(f, r)));
-    out.say("  Ra ≈ 0.0321 f²/r {}   exact arc {}\n", rough(raApproxMm(f, r)), rough(raExactMm(f, r)));
+    out.say("  Ra ≈ 0.0321 f²/r {}   exact arc {}\n", rough(raApproxMm(f, r)),
+            rough(raExactMm(f, r)));
     out.say("  (geometry only: real surfaces are rougher with built-up edge, chatter or wear)\n");
 }
 

@@ -10,7 +10,9 @@ namespace swarf::viewer {
 const std::vector<KeyHelp>& windowKeys() {
     static const std::vector<KeyHelp> kKeys = {
         {"Right / Left", {"Right", "Left"}, "next / previous pass (jumps to the end of a pass)"},
-        {"Up / Down", {"Up", "Down"}, "scrub forward / back within a pass, 1/20 of a pass per press"},
+        {"Up / Down",
+         {"Up", "Down"},
+         "scrub forward / back within a pass, 1/20 of a pass per press"},
         {"Home / End", {"Home", "End"}, "the bar before the first pass / the finished part"},
         {"1", {"1"}, "front view, from the operator's side (chuck on the left)"},
         {"2", {"2"}, "top view, looking down on the tool"},

@@ -21,7 +21,6 @@
 #include <vtkTextProperty.h>
 #include <vtkVariant.h>
 
-
 #include <fmt/format.h>
 
 #include <algorithm>
@@ -72,8 +71,7 @@ void PartScene::Impl::updatePart() {
         const std::size_t nn = result.nominal.radiusMm.size();
         std::vector<double> nominal(n), zero(n, 0.0), coreTop(n), leftTop(n, std::nan(""));
         for (std::size_t i = 0; i < n; ++i) {
-            nominal[i] =
-                nn == n ? result.nominal.radiusMm[i] : result.nominal.radiusAt(p.zAt(i));
+            nominal[i] = nn == n ? result.nominal.radiusMm[i] : result.nominal.radiusAt(p.zAt(i));
             const double r = p.radiusMm[i];
             coreTop[i] = std::isnan(nominal[i]) ? r : std::min(r, nominal[i]);
             if (!std::isnan(nominal[i]) && r > nominal[i])

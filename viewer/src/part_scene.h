@@ -3,9 +3,9 @@
 // three renderers (the 3D part, the magnified section, the deviation chart), updated to one
 // moment of the plan. Used by the window, the snapshots and the benchmark.
 #include "swarf/sim/cut.h"
+#include "swarf/sim/moment.h"
 #include "swarf/sim/scene.h"
 #include "swarf/viewer/colour_map.h"
-#include "swarf/sim/moment.h"
 #include "swarf/viewer/trace.h"
 
 #include <vtkSmartPointer.h>

@@ -19,7 +19,6 @@
 #include <vtkTextProperty.h>
 #include <vtkVariant.h>
 
-
 #include <fmt/format.h>
 
 #include <algorithm>

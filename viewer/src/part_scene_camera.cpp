@@ -13,7 +13,6 @@ namespace swarf::viewer::detail {
 
 namespace {
 
-
 // Moves and shifts the camera, keeping its direction, so that the points `pts` project into
 // the rectangle [x0, x1] × [y0, y1] of the viewport (view coordinates, −1..1): the part stays
 // clear of the panel, the slider and the colour bar.

@@ -91,5 +91,4 @@ struct PartScene::Impl {
     void applyLayers();
 };
 
-
 } // namespace swarf::viewer::detail

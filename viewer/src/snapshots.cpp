@@ -1,9 +1,9 @@
 // Headless PNG pictures of a result (see snapshots.h).
 #include "swarf/viewer/snapshots.h"
 
+#include "part_scene.h"
 #include "png_file.h"
 #include "swarf/io/output_file.h"
-#include "part_scene.h"
 #include "swarf/sim/error.h"
 #include "x_connection.h"
 
@@ -79,8 +79,7 @@ SnapshotReport renderSnapshots(const Scene& scene, const CutResult& result,
     // stretch.
     part.setCloseUp(true);
     shoot(part.main(), w, h, rep.marks, [&] { part.view(detail::View::CloseUp); });
-    shoot(part.section(), w, std::max(64, h / 2), rep.marksSection,
-          [&] { part.resetSection(); });
+    shoot(part.section(), w, std::max(64, h / 2), rep.marksSection, [&] { part.resetSection(); });
     part.setCloseUp(false);
 
     shoot(part.section(), w, std::max(64, h / 2), rep.section, [&] { part.resetSection(); });

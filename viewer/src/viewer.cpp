@@ -1,8 +1,8 @@
 // The interactive window (see viewer.h): layout, slider, keys.
 #include "swarf/viewer/viewer.h"
 
-#include "png_file.h"
 #include "part_scene.h"
+#include "png_file.h"
 #include "swarf/sim/error.h"
 #include "x_connection.h"
 

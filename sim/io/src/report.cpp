@@ -150,13 +150,11 @@ std::string reportHtml(const Scene& scene, const CutResult& result,
             {pictures->cone, "The cone filling the picture: the same colours."},
             {pictures->section, "Section through the axis with the deviation magnified."},
             {pictures->chart, "Deviation along the cone with the tolerance lines."},
-            {pictures->marks,
-             "Close-up at the gauge plane: the feed marks of the finishing pass, "
-             "drawn higher than they are (the factor is written on the picture); "
-             "the colours are true to scale."},
-            {pictures->marksSection,
-             "Section of the same stretch, deviation magnified: the feed "
-             "marks on the operator's side."}};
+            {pictures->marks, "Close-up at the gauge plane: the feed marks of the finishing pass, "
+                              "drawn higher than they are (the factor is written on the picture); "
+                              "the colours are true to scale."},
+            {pictures->marksSection, "Section of the same stretch, deviation magnified: the feed "
+                                     "marks on the operator's side."}};
         for (const auto& [path, caption] : figs) {
             if (path.empty())
                 continue;
@@ -178,8 +176,8 @@ std::string reportHtml(const Scene& scene, const CutResult& result,
         };
         std::string after = "-", over = "-";
         if (k < result.afterPass.size()) {
-            const DeviationExtremes e = deviationExtremes(
-                normalDeviation(scene.part, result.nominal, result.afterPass[k]));
+            const DeviationExtremes e =
+                deviationExtremes(normalDeviation(scene.part, result.nominal, result.afterPass[k]));
             after = small(e.leftOnMm);
             over = small(e.overcutMm);
         }

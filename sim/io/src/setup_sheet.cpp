@@ -229,18 +229,16 @@ Section checksSection(const Ctx& c) {
                     " from the cone's small end): before finishing " +
                     c.L(rolls.reading1Mm + rolls.roughExtraMm) + " and " +
                     c.L(rolls.reading2Mm + rolls.roughExtraMm) + "; finished " +
-                    c.L(rolls.reading1Mm) + " and " + c.L(rolls.reading2Mm) +
-                    ". The difference, " + c.L(rolls.reading2Mm - rolls.reading1Mm) +
-                    ", checks the angle at any size.",
+                    c.L(rolls.reading1Mm) + " and " + c.L(rolls.reading2Mm) + ". The difference, " +
+                    c.L(rolls.reading2Mm - rolls.reading1Mm) + ", checks the angle at any size.",
                 "Compound angle with the sine bar stack above, before the first cone pass.",
             })}};
 }
 
 Section finishSection(const Ctx& c) {
     return {"Expected finish",
-            {paragraph("Finishing pass at " +
-                       formatLength(c.sc.planning.finishFeedMmPerRev, c.u) + "/rev with a " +
-                       c.L(c.sc.tool.noseRadiusMm) + " nose: theoretical Rt " +
+            {paragraph("Finishing pass at " + formatLength(c.sc.planning.finishFeedMmPerRev, c.u) +
+                       "/rev with a " + c.L(c.sc.tool.noseRadiusMm) + " nose: theoretical Rt " +
                        formatSmallLength(c.plan.rtMm, c.u) + ", Ra " +
                        formatSmallLength(c.plan.raMm, c.u) +
                        " (from feed and nose radius only; the real finish also depends on the "
@@ -280,7 +278,8 @@ Document buildSheet(const ConePlan& plan, const CutResult* proof) {
     sh.sections.push_back(checksSection(c));
     sh.sections.push_back(finishSection(c));
     if (!plan.cautions.empty())
-        sh.sections.push_back({"Notes for this job", {listBlock(plan.cautions, Block::Kind::Warn)}});
+        sh.sections.push_back(
+            {"Notes for this job", {listBlock(plan.cautions, Block::Kind::Warn)}});
     if (proof)
         sh.sections.push_back(proofSection(c, *proof));
     return sh;

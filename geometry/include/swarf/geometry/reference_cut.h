@@ -25,10 +25,10 @@ struct ReferenceOptions {
 
 /// The reference as-cut part and what it took.
 struct ReferenceResult {
-    Solid asCut;           ///< the stock's stick-out minus every move's swept tool
-    double volumeMm3 = 0;  ///< its volume
-    int movesCut = 0;      ///< moves whose swept tool reached the stock
-    int movesSkipped = 0;  ///< moves wholly in the air (outside the stock)
+    Solid asCut;          ///< the stock's stick-out minus every move's swept tool
+    double volumeMm3 = 0; ///< its volume
+    int movesCut = 0;     ///< moves whose swept tool reached the stock
+    int movesSkipped = 0; ///< moves wholly in the air (outside the stock)
 };
 
 /// Cuts the stock solid by every move of `moves` in turn (imaginary-tip positions, as

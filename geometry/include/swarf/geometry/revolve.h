@@ -45,11 +45,11 @@ struct ProfileFitOptions {
 /// A profile turned into a solid, with what the fit did.
 struct FittedSolid {
     Solid solid;
-    double maxFitErrorMm = 0;  ///< largest distance of any sample from the fitted outline, mm
-    int lineCount = 0;         ///< straight segments fitted (closing and extending ones excluded)
-    int arcCount = 0;          ///< circular arcs
-    int splineCount = 0;       ///< B-spline pieces
-    int sampleCount = 0;       ///< samples fitted
+    double maxFitErrorMm = 0; ///< largest distance of any sample from the fitted outline, mm
+    int lineCount = 0;        ///< straight segments fitted (closing and extending ones excluded)
+    int arcCount = 0;         ///< circular arcs
+    int splineCount = 0;      ///< B-spline pieces
+    int sampleCount = 0;      ///< samples fitted
 };
 
 /// The solid of revolution of a sampled profile (the kernel's as-cut profile): the radii at the

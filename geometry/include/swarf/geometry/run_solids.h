@@ -15,11 +15,11 @@ namespace swarf::geometry {
 /// The solids of a run. Leftover and overcut are taken where the drawing has features
 /// (between Part::features' first start and last end): beyond them the drawing says nothing.
 struct RunSolids {
-    Solid stock;     ///< the bar's stick-out
-    Solid nominal;   ///< the part as drawn
-    FittedSolid asCut;  ///< asCutSolid(): the kernel's profile, then the bar to the jaws
-    Solid leftover;  ///< as cut minus nominal, within the drawing's extent: metal still to cut
-    Solid overcut;   ///< nominal minus as cut: metal cut away that the drawing wanted
+    Solid stock;       ///< the bar's stick-out
+    Solid nominal;     ///< the part as drawn
+    FittedSolid asCut; ///< asCutSolid(): the kernel's profile, then the bar to the jaws
+    Solid leftover;    ///< as cut minus nominal, within the drawing's extent: metal still to cut
+    Solid overcut;     ///< nominal minus as cut: metal cut away that the drawing wanted
     double stockVolumeMm3 = 0, nominalVolumeMm3 = 0, asCutVolumeMm3 = 0;
     double leftoverVolumeMm3 = 0, overcutVolumeMm3 = 0;
 };
@@ -41,12 +41,12 @@ struct RunSolidsOptions {
 
 /// What writeRunSolids() made.
 struct RunSolidsReport {
-    std::vector<std::string> files;  ///< paths written, as-cut.step first
+    std::vector<std::string> files; ///< paths written, as-cut.step first
     double stockVolumeMm3 = 0, nominalVolumeMm3 = 0, asCutVolumeMm3 = 0;
     double leftoverVolumeMm3 = 0, overcutVolumeMm3 = 0;
-    double fitErrorMm = 0;           ///< largest distance of a profile sample from the solid
+    double fitErrorMm = 0; ///< largest distance of a profile sample from the solid
     int lineCount = 0, arcCount = 0, splineCount = 0;
-    std::size_t surfaceTriangles = 0;  ///< triangles in surface.stl (0 if not written)
+    std::size_t surfaceTriangles = 0; ///< triangles in surface.stl (0 if not written)
 };
 
 /// Writes `as-cut.step` (one solid, product "as-cut") into outDir, and as the options say

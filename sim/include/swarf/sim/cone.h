@@ -14,9 +14,9 @@ enum class Widens { TowardChuck, TowardTailstock };
 /// A cone fixed the way a drawing fixes it: a gauge plane, the diameter there, the half angle
 /// and the direction in which it widens.
 struct Cone {
-    double gaugeZMm = 0;         ///< gauge plane: distance from the datum face toward the chuck, mm
-    double gaugeDiameterMm = 0;  ///< diameter at the gauge plane, mm, > 0
-    double halfAngleRad = 0;     ///< half angle from the spindle axis, 0 < θ < π/2
+    double gaugeZMm = 0;        ///< gauge plane: distance from the datum face toward the chuck, mm
+    double gaugeDiameterMm = 0; ///< diameter at the gauge plane, mm, > 0
+    double halfAngleRad = 0;    ///< half angle from the spindle axis, 0 < θ < π/2
     Widens widens = Widens::TowardChuck;
 
     /// Diameter at axial position z (mm); may be negative far past the small end.

@@ -11,9 +11,9 @@ namespace swarf {
 
 /// One straight move of the tool, as the machine model makes it from the dial readings.
 struct ToolMove {
-    int pass = -1;                   ///< index into Scene::plan.passes
-    Eigen::Vector2d tipFrom{0, 0};   ///< imaginary tip (z, x) at the start, mm
-    Eigen::Vector2d tipTo{0, 0};     ///< imaginary tip (z, x) at the end, mm
+    int pass = -1;                 ///< index into Scene::plan.passes
+    Eigen::Vector2d tipFrom{0, 0}; ///< imaginary tip (z, x) at the start, mm
+    Eigen::Vector2d tipTo{0, 0};   ///< imaginary tip (z, x) at the end, mm
     double feedMmPerRev = 0.1;
     /// Dial readings (mm of dial) at the start and end, for display.
     double crossFrom = 0, crossTo = 0, compoundFrom = 0, compoundTo = 0, saddleFrom = 0,
@@ -43,23 +43,25 @@ struct HeightMap {
     double dzMm = 0.01;
     int nz = 0;
     int nPhi = 0;
-    std::vector<float> radiusMm;  ///< radiusMm[i * nPhi + j]
-    std::vector<double> zMm;      ///< z of each row, increasing (nz values), or empty: uniform
+    std::vector<float> radiusMm; ///< radiusMm[i * nPhi + j]
+    std::vector<double> zMm;     ///< z of each row, increasing (nz values), or empty: uniform
     float at(int i, int j) const { return radiusMm[static_cast<std::size_t>(i) * nPhi + j]; }
     /// z of row i, mm.
-    double rowZ(int i) const { return zMm.empty() ? z0Mm + i * dzMm : zMm[static_cast<std::size_t>(i)]; }
+    double rowZ(int i) const {
+        return zMm.empty() ? z0Mm + i * dzMm : zMm[static_cast<std::size_t>(i)];
+    }
 };
 
 /// Kinds of finding about the cut. These are results, not errors.
 enum class FindingKind {
-    LeftOn,          ///< metal left on after the last pass, beyond tolerance
-    Overcut,         ///< cut below the drawing, beyond tolerance: scrap
-    Rubbing,         ///< trailing edge or flank rubs: the cone is steeper than the tool can follow
-    JawCrash,        ///< the tool reaches the chuck jaws
-    PastStock,       ///< the move runs past the stock's free end or through the centre
-    CompoundTravel,  ///< a compound reading beyond its travel
-    DepthOfCut,      ///< depth of cut beyond the cutting edge length
-    AirCut,          ///< the pass cuts nothing
+    LeftOn,         ///< metal left on after the last pass, beyond tolerance
+    Overcut,        ///< cut below the drawing, beyond tolerance: scrap
+    Rubbing,        ///< trailing edge or flank rubs: the cone is steeper than the tool can follow
+    JawCrash,       ///< the tool reaches the chuck jaws
+    PastStock,      ///< the move runs past the stock's free end or through the centre
+    CompoundTravel, ///< a compound reading beyond its travel
+    DepthOfCut,     ///< depth of cut beyond the cutting edge length
+    AirCut,         ///< the pass cuts nothing
 };
 
 /// "left_on", "overcut", ... as written in result.json.
@@ -73,36 +75,36 @@ struct Finding {
     FindingKind kind = FindingKind::LeftOn;
     int pass = -1;
     std::string message;
-    double zMm = 0;       ///< where along the axis, if it has a place
-    double valueMm = 0;   ///< its size, if it has one
+    double zMm = 0;     ///< where along the axis, if it has a place
+    double valueMm = 0; ///< its size, if it has one
 };
 
 /// The as-cut part against one feature of the drawing.
 struct FeatureReport {
-    int feature = -1;                   ///< index into Scene::part.features
-    double maxLeftOnMm = 0;             ///< largest + deviation normal to the surface (≥ 0)
-    double maxOvercutMm = 0;            ///< largest − deviation, as a positive number (≥ 0)
-    double asCutDiameterMm = 0;         ///< cylinder: mean diameter; cone: at the gauge plane
-    double asCutHalfAngleRad = 0;       ///< cone: fitted half angle as cut
+    int feature = -1;             ///< index into Scene::part.features
+    double maxLeftOnMm = 0;       ///< largest + deviation normal to the surface (≥ 0)
+    double maxOvercutMm = 0;      ///< largest − deviation, as a positive number (≥ 0)
+    double asCutDiameterMm = 0;   ///< cylinder: mean diameter; cone: at the gauge plane
+    double asCutHalfAngleRad = 0; ///< cone: fitted half angle as cut
     bool withinTolerance = false;
 };
 
 /// Everything the kernel found.
 struct CutResult {
     std::vector<ToolMove> moves;
-    Profile stock;                      ///< stock radius on the same samples as asCut
-    Profile nominal;                    ///< drawing radius (NaN where the drawing says nothing)
-    Profile asCut;                      ///< exact axisymmetric as-cut profile
-    std::vector<Profile> afterPass;     ///< as-cut profile after each pass
-    std::vector<double> deviationMm;    ///< signed normal deviation per asCut sample; NaN off-feature
-    HeightMap surface;                  ///< 3D surface with feed marks
+    Profile stock;                   ///< stock radius on the same samples as asCut
+    Profile nominal;                 ///< drawing radius (NaN where the drawing says nothing)
+    Profile asCut;                   ///< exact axisymmetric as-cut profile
+    std::vector<Profile> afterPass;  ///< as-cut profile after each pass
+    std::vector<double> deviationMm; ///< signed normal deviation per asCut sample; NaN off-feature
+    HeightMap surface;               ///< 3D surface with feed marks
     std::vector<FeatureReport> features;
     std::vector<Finding> findings;
-    bool withinTolerance = false;       ///< the verdict
+    bool withinTolerance = false; ///< the verdict
     double gaugeZMm = 0, gaugeNominalDiameterMm = 0, gaugeAsCutDiameterMm = 0;
     double maxLeftOnMm = 0, maxOvercutMm = 0;
     double stockVolumeMm3 = 0, asCutVolumeMm3 = 0, removedVolumeMm3 = 0, leftoverVolumeMm3 = 0;
-    double rtUm = 0, raUm = 0;          ///< theoretical roughness of the finishing pass
+    double rtUm = 0, raUm = 0; ///< theoretical roughness of the finishing pass
 };
 
 } // namespace swarf

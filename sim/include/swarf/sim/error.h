@@ -8,13 +8,13 @@ namespace swarf {
 
 /// Process exit codes, one per kind of failure.
 enum ExitCode : int {
-    kExitOk = 0,         ///< ran; the verdict is in the output, whatever it is
-    kExitBadInput = 2,   ///< a scene or an option value is wrong; nothing was written
-    kExitUsage = 64,     ///< the command line itself is wrong
-    kExitOutput = 73,    ///< an output could not be written (disk, permissions)
-    kExitGeometry = 75,  ///< the solid modeller failed on valid input
-    kExitRender = 76,    ///< rendering failed (no display and no Xvfb)
-    kExitInternal = 70,  ///< a bug: please report it
+    kExitOk = 0,        ///< ran; the verdict is in the output, whatever it is
+    kExitBadInput = 2,  ///< a scene or an option value is wrong; nothing was written
+    kExitUsage = 64,    ///< the command line itself is wrong
+    kExitOutput = 73,   ///< an output could not be written (disk, permissions)
+    kExitGeometry = 75, ///< the solid modeller failed on valid input
+    kExitRender = 76,   ///< rendering failed (no display and no Xvfb)
+    kExitInternal = 70, ///< a bug: please report it
 };
 
 /// Root of every error swarf throws on purpose.

@@ -36,9 +36,9 @@ struct MomentView {
 
 /// Describes the moment at slider `position` (clamped to [0, N]). Whole positions use the
 /// kernel's afterPass profiles; positions inside a pass use profileUpTo(); position N uses
-/// the final asCut profile. The deviation is the kernel's (compare.h: normalDeviation). `result` must come from simulate() on
-/// the same scene (or be built with the same sampling: stock, nominal and afterPass on one
-/// grid).
+/// the final asCut profile. The deviation is the kernel's (compare.h: normalDeviation). `result`
+/// must come from simulate() on the same scene (or be built with the same sampling: stock, nominal
+/// and afterPass on one grid).
 MomentView describeMoment(const Scene& scene, const CutResult& result, double position);
 
 /// Indices into result.moves of the moves that make pass `pass` (0-based), in order.

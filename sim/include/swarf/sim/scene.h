@@ -23,12 +23,12 @@ namespace swarf {
 
 /// The bar in the chuck.
 struct Stock {
-    double diameterMm = 0;       ///< bar diameter, mm
-    double lengthMm = 0;         ///< whole bar length, mm (the rest of the bar is in the jaws/spindle)
-    double stickOutMm = 0;       ///< from the jaws' face to the free end, mm
-    double faceAllowanceMm = 0;  ///< stock beyond the datum face, mm (the free end is at z = −this)
-    std::string material;        ///< free text
-    bool tailstockSupport = false;  ///< work supported by a centre in the tailstock
+    double diameterMm = 0; ///< bar diameter, mm
+    double lengthMm = 0;   ///< whole bar length, mm (the rest of the bar is in the jaws/spindle)
+    double stickOutMm = 0; ///< from the jaws' face to the free end, mm
+    double faceAllowanceMm = 0; ///< stock beyond the datum face, mm (the free end is at z = −this)
+    std::string material;       ///< free text
+    bool tailstockSupport = false; ///< work supported by a centre in the tailstock
     SourceLoc where;
 
     double freeEndZMm() const { return -faceAllowanceMm; }
@@ -49,15 +49,16 @@ const char* featureKindName(FeatureKind kind);
 /// A chamfer is stored as a cone (its half angle and diameter at its small end).
 struct Feature {
     FeatureKind kind = FeatureKind::Cylinder;
-    std::string name;          ///< as the scene names it, or "feature N"
+    std::string name; ///< as the scene names it, or "feature N"
     double zStartMm = 0, zEndMm = 0;
-    double diameterMm = 0;     ///< Cylinder: the diameter. Face: the outer diameter of the face.
-    Cone cone;                 ///< Cone and Chamfer
-    std::string coneGivenAs;   ///< how the scene gave the cone ("half_angle", "standard Morse 3", ...)
-    double toleranceMm = 0;    ///< ± on diameter (cylinder diameter, cone gauge diameter), mm
-    double angleToleranceRad = 0;  ///< ± on the half angle (cone, chamfer), rad
-    bool toleranceFromClass = true;  ///< true if taken from the ISO 2768 class
-    bool angleToleranceFromClass = true;  ///< true if angleToleranceRad is from the ISO 2768 class
+    double diameterMm = 0; ///< Cylinder: the diameter. Face: the outer diameter of the face.
+    Cone cone;             ///< Cone and Chamfer
+    std::string
+        coneGivenAs;        ///< how the scene gave the cone ("half_angle", "standard Morse 3", ...)
+    double toleranceMm = 0; ///< ± on diameter (cylinder diameter, cone gauge diameter), mm
+    double angleToleranceRad = 0;        ///< ± on the half angle (cone, chamfer), rad
+    bool toleranceFromClass = true;      ///< true if taken from the ISO 2768 class
+    bool angleToleranceFromClass = true; ///< true if angleToleranceRad is from the ISO 2768 class
     SourceLoc where;
 
     /// Nominal radius at z (mm) for Cylinder, Cone, Chamfer; precondition z in [zStart, zEnd].
@@ -68,7 +69,7 @@ struct Feature {
 
 /// The drawing: features along the axis from the datum face.
 struct Part {
-    std::vector<Feature> features;   ///< in increasing z
+    std::vector<Feature> features; ///< in increasing z
     Iso2768 toleranceClass = Iso2768::m;
     SourceLoc where;
 
@@ -89,15 +90,15 @@ enum class Hand { R, L, N };
 
 /// The insert and its holder.
 struct Tool {
-    char shape = 'D';              ///< ISO 1832 shape letter, or 0 when given by includedAngleRad
-    double includedAngleRad = 0;   ///< insert corner angle ε
-    double noseRadiusMm = 0.4;     ///< r
-    double enteringAngleRad = 0;   ///< holder entering angle κr, measured from the feed direction
+    char shape = 'D';            ///< ISO 1832 shape letter, or 0 when given by includedAngleRad
+    double includedAngleRad = 0; ///< insert corner angle ε
+    double noseRadiusMm = 0.4;   ///< r
+    double enteringAngleRad = 0; ///< holder entering angle κr, measured from the feed direction
     Hand hand = Hand::R;
-    double edgeLengthMm = 15;      ///< cutting edge length (insert size), mm
-    double tipHeightMm = 0;        ///< tip above (+) or below (−) centre, mm
-    double thicknessMm = 4.76;     ///< insert thickness, for drawing it
-    std::string holderCode;        ///< ISO 5608 holder letter if given ("J"), for messages
+    double edgeLengthMm = 15;  ///< cutting edge length (insert size), mm
+    double tipHeightMm = 0;    ///< tip above (+) or below (−) centre, mm
+    double thicknessMm = 4.76; ///< insert thickness, for drawing it
+    std::string holderCode;    ///< ISO 5608 holder letter if given ("J"), for messages
     SourceLoc where;
 };
 
@@ -108,33 +109,33 @@ enum class DialMode { Diameter, Radius };
 
 /// How a slide is brought to a reading it is set to before a pass (scenes/README.md, [setup]).
 enum class Approach {
-    InOrder,  ///< dialled straight to each reading in pass order: backlash shows on a reversal
-    TakeUp,   ///< wound back past each reading and brought up to it: the slide sits at it
+    InOrder, ///< dialled straight to each reading in pass order: backlash shows on a reversal
+    TakeUp,  ///< wound back past each reading and brought up to it: the slide sits at it
 };
 
 /// One handwheel slide.
 struct Slide {
-    double mmPerDivision = 0.02;   ///< one dial division, mm (on diameter for a diameter dial)
-    int divisionsPerTurn = 100;    ///< divisions on the dial before it wraps
-    double backlashMm = 0;         ///< lost motion when the handwheel reverses, mm of slide travel
-    double travelMm = 1e9;         ///< usable travel from the zero reading either way, mm
+    double mmPerDivision = 0.02; ///< one dial division, mm (on diameter for a diameter dial)
+    int divisionsPerTurn = 100;  ///< divisions on the dial before it wraps
+    double backlashMm = 0;       ///< lost motion when the handwheel reverses, mm of slide travel
+    double travelMm = 1e9;       ///< usable travel from the zero reading either way, mm
 };
 
 /// The lathe as set up. Readings of all three slides are zero when the imaginary tip is at
 /// (zeroZMm, zeroDiameterMm / 2), each slide having last moved in its increasing direction.
 struct Setup {
-    double compoundReadingRad = 0;          ///< the compound angle read on its scale
+    double compoundReadingRad = 0; ///< the compound angle read on its scale
     CompoundScale compoundScale = CompoundScale::FromAxis;
-    double compoundErrorRad = 0;            ///< true angle from the axis minus the intended one
-    Widens compoundAdvanceToward = Widens::TowardTailstock;  ///< TowardChuck: advancing moves +z
+    double compoundErrorRad = 0; ///< true angle from the axis minus the intended one
+    Widens compoundAdvanceToward = Widens::TowardTailstock; ///< TowardChuck: advancing moves +z
     Slide compound{0.02, 100, 0, 100};
     Slide cross{0.02, 100, 0, 150};
     DialMode crossDial = DialMode::Diameter;
     Slide saddle{0.1, 200, 0, 1e9};
-    double zeroDiameterMm = 0;              ///< diameter at which the cross-slide reads zero
-    double zeroZMm = 0;                     ///< z at which the saddle reads zero
-    std::optional<double> spindleRpm;       ///< for the sheet only
-    Approach approach = Approach::InOrder;  ///< how slides are set before each pass
+    double zeroDiameterMm = 0;             ///< diameter at which the cross-slide reads zero
+    double zeroZMm = 0;                    ///< z at which the saddle reads zero
+    std::optional<double> spindleRpm;      ///< for the sheet only
+    Approach approach = Approach::InOrder; ///< how slides are set before each pass
     SourceLoc where;
 
     /// The compound's true angle from the spindle axis, rad (reading converted, error added).
@@ -143,10 +144,10 @@ struct Setup {
 
 /// What a person does in one pass.
 enum class PassKind {
-    Compound,    ///< cross-slide and saddle locked, compound wound from → to
-    Saddle,      ///< straight turning: saddle wound from → to
-    CrossSlide,  ///< facing or plunging: cross-slide wound from → to
-    Path,        ///< CNC: straight moves through imaginary-tip points
+    Compound,   ///< cross-slide and saddle locked, compound wound from → to
+    Saddle,     ///< straight turning: saddle wound from → to
+    CrossSlide, ///< facing or plunging: cross-slide wound from → to
+    Path,       ///< CNC: straight moves through imaginary-tip points
 };
 
 /// "compound", "saddle", "cross-slide" or "path": a pass's kind for people (screens, sheets).
@@ -159,13 +160,13 @@ const char* passKindKey(PassKind kind);
 /// One pass of the plan. Readings are in mm of dial (diameter mm for a diameter dial).
 struct Pass {
     PassKind kind = PassKind::Compound;
-    std::string note;                 ///< what the person does, in words
-    double crossMm = 0;               ///< cross-slide reading while the pass runs (if not moving)
-    double compoundMm = 0;            ///< compound reading (if not moving)
-    double saddleMm = 0;              ///< saddle reading (if not moving)
-    double fromMm = 0, toMm = 0;      ///< the moving slide's readings
+    std::string note;            ///< what the person does, in words
+    double crossMm = 0;          ///< cross-slide reading while the pass runs (if not moving)
+    double compoundMm = 0;       ///< compound reading (if not moving)
+    double saddleMm = 0;         ///< saddle reading (if not moving)
+    double fromMm = 0, toMm = 0; ///< the moving slide's readings
     double feedMmPerRev = 0.1;
-    std::vector<std::pair<double, double>> pathZX;  ///< Path: (z, x radius) of the imaginary tip
+    std::vector<std::pair<double, double>> pathZX; ///< Path: (z, x radius) of the imaginary tip
     SourceLoc where;
 };
 
@@ -177,8 +178,8 @@ struct Plan {
 
 /// How the planner should plan (scene section [planning]); lengths mm.
 struct PlanningOptions {
-    double maxDepthMm = 1.0;           ///< largest depth of cut per roughing pass, normal to the cone
-    double finishAllowanceMm = 0.1;    ///< left for the finishing pass, normal to the cone
+    double maxDepthMm = 1.0;        ///< largest depth of cut per roughing pass, normal to the cone
+    double finishAllowanceMm = 0.1; ///< left for the finishing pass, normal to the cone
     double roughFeedMmPerRev = 0.15;
     double finishFeedMmPerRev = 0.08;
     /// How the cone is placed: zero the dials on a finished diameter and face, or turn a
@@ -186,29 +187,29 @@ struct PlanningOptions {
     enum class Placing { ZeroOnDiameter, ReferenceShoulder } placing = Placing::ZeroOnDiameter;
     /// Rough with the compound parallel to the cone, or with stepped saddle passes first.
     enum class Roughing { Compound, SaddleSteps } roughing = Roughing::Compound;
-    double rollDiameterMm = 0;         ///< rolls for the over-rolls check; 0: choose one
+    double rollDiameterMm = 0; ///< rolls for the over-rolls check; 0: choose one
     SourceLoc where;
 };
 
 /// What a scene is made to show ([expect]); the scene tests check it.
 struct Expect {
-    std::optional<bool> withinTolerance;  ///< verdict, if the scene states one
-    std::vector<std::string> findings;    ///< finding kinds that must be raised ("left_on", ...)
-    bool noFindings = false;              ///< true: no finding may be raised
+    std::optional<bool> withinTolerance; ///< verdict, if the scene states one
+    std::vector<std::string> findings;   ///< finding kinds that must be raised ("left_on", ...)
+    bool noFindings = false;             ///< true: no finding may be raised
     SourceLoc where;
 };
 
 /// Options for the simulation.
 struct SimOptions {
-    double profileStepMm = 0.002;     ///< axial sample spacing of the exact profile
-    int angleSamples = 180;           ///< samples around the part for the 3D surface
+    double profileStepMm = 0.002; ///< axial sample spacing of the exact profile
+    int angleSamples = 180;       ///< samples around the part for the 3D surface
 };
 
 /// A whole scene.
 struct Scene {
     std::string name;
     std::string description;
-    std::string file;                 ///< the file it came from
+    std::string file; ///< the file it came from
     Units units = Units::Mm;
     Stock stock;
     Part part;
@@ -218,7 +219,8 @@ struct Scene {
     SimOptions sim;
     PlanningOptions planning;
     Expect expect;
-    std::vector<double> gaugeBlocksMm;  ///< the gauge block set for sine bar stacks (empty: built-in)
+    std::vector<double>
+        gaugeBlocksMm; ///< the gauge block set for sine bar stacks (empty: built-in)
 
     /// Checks ranges and consistency; throws InputError naming the key and its location.
     void validate() const;

@@ -13,23 +13,37 @@ inline constexpr double kMmPerInch = 25.4;
 inline constexpr double kPi = std::numbers::pi;
 
 /// Degrees to radians.
-constexpr double degToRad(double deg) { return deg * kPi / 180.0; }
+constexpr double degToRad(double deg) {
+    return deg * kPi / 180.0;
+}
 /// Radians to degrees.
-constexpr double radToDeg(double rad) { return rad * 180.0 / kPi; }
+constexpr double radToDeg(double rad) {
+    return rad * 180.0 / kPi;
+}
 
 /// A length in the given units to millimetres.
-constexpr double toMm(double value, Units u) { return u == Units::Inch ? value * kMmPerInch : value; }
+constexpr double toMm(double value, Units u) {
+    return u == Units::Inch ? value * kMmPerInch : value;
+}
 /// Millimetres to a length in the given units.
-constexpr double fromMm(double mm, Units u) { return u == Units::Inch ? mm / kMmPerInch : mm; }
+constexpr double fromMm(double mm, Units u) {
+    return u == Units::Inch ? mm / kMmPerInch : mm;
+}
 
 /// "mm" or "in": the unit after a number.
-inline const char* unitName(Units u) { return u == Units::Inch ? "in" : "mm"; }
+inline const char* unitName(Units u) {
+    return u == Units::Inch ? "in" : "mm";
+}
 
 /// "mm" or "inch": the unit as a word, as scene files spell it (`units = "inch"`).
-inline const char* unitWord(Units u) { return u == Units::Inch ? "inch" : "mm"; }
+inline const char* unitWord(Units u) {
+    return u == Units::Inch ? "inch" : "mm";
+}
 
 /// "µm" or "thou": the unit small lengths (deviations, bands) are shown in.
-inline const char* smallUnitName(Units u) { return u == Units::Inch ? "thou" : "µm"; }
+inline const char* smallUnitName(Units u) {
+    return u == Units::Inch ? "thou" : "µm";
+}
 
 /// A small length in mm as a number in µm (mm scenes) or thou (inch scenes).
 constexpr double toSmallUnits(double mm, Units u) {

@@ -4,8 +4,8 @@
 // 3D surface has them), and the stretch of the cone the close-up shows. The window, the
 // snapshots and the tests all go through these, so tests can check the drawn data directly.
 #include "swarf/sim/cut.h"
-#include "swarf/sim/scene.h"
 #include "swarf/sim/moment.h"
+#include "swarf/sim/scene.h"
 
 #include <cstddef>
 #include <vector>

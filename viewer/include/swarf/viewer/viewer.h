@@ -3,8 +3,8 @@
 // readings, the magnified section and the deviation chart. Keys are listed in viewer/KEYS.md
 // and by the help key in the window.
 #include "swarf/sim/cut.h"
-#include "swarf/sim/scene.h"
 #include "swarf/sim/moment.h"
+#include "swarf/sim/scene.h"
 #include "swarf/viewer/trace.h"
 
 #include <Eigen/Core>
