@@ -1,6 +1,8 @@
 // Writing outputs atomically.
 #include "atomic_file.h"
 
+#include "fp_traps.h"
+
 #include "swarf/sim/error.h"
 
 #include <vtkNew.h>
@@ -47,6 +49,7 @@ void writeTextAtomic(const std::string& path, const std::string& text) {
 }
 
 void writeWindowPng(vtkRenderWindow* window, const std::string& path) {
+    const FpTrapsOff mesa; // drawing and reading back the pixels (nothing of ours is computed)
     window->Render();
     vtkNew<vtkWindowToImageFilter> grab;
     grab->SetInput(window);

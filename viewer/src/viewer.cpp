@@ -2,6 +2,7 @@
 #include "swarf/viewer/viewer.h"
 
 #include "atomic_file.h"
+#include "fp_traps.h"
 #include "part_scene.h"
 #include "swarf/sim/error.h"
 #include "swarf/viewer/display.h"
@@ -281,9 +282,12 @@ ViewerSession::ViewerSession(const Scene& scene, std::shared_ptr<const CutResult
 
     if (options.startPosition >= 0)
         d.go(options.startPosition);
-    d.window->Render();
-    d.sliderRep->Modified();
-    d.window->Render();
+    {
+        const detail::FpTrapsOff mesa;
+        d.window->Render();
+        d.sliderRep->Modified();
+        d.window->Render();
+    }
     d.part->resetSection();
 }
 
@@ -307,6 +311,7 @@ void ViewerSession::pressKey(const std::string& key) {
 }
 
 void ViewerSession::render() {
+    const detail::FpTrapsOff mesa;
     impl_->window->Render();
 }
 
