@@ -1,6 +1,8 @@
 // A render window as a PNG file (see png_file.h).
 #include "png_file.h"
 
+#include "fp_traps.h"
+
 #include "swarf/io/output_file.h"
 #include "swarf/sim/error.h"
 
@@ -12,6 +14,7 @@
 namespace swarf::viewer::detail {
 
 void writeWindowPng(vtkRenderWindow* window, const std::string& path) {
+    const FpTrapsOff mesa; // drawing and reading back the pixels (nothing of ours is computed)
     window->Render();
     vtkNew<vtkWindowToImageFilter> grab;
     grab->SetInput(window);

@@ -1,6 +1,7 @@
 // The interactive window (see viewer.h): layout, slider, keys.
 #include "swarf/viewer/viewer.h"
 
+#include "fp_traps.h"
 #include "part_scene.h"
 #include "png_file.h"
 #include "swarf/sim/error.h"
@@ -282,9 +283,12 @@ ViewerSession::ViewerSession(const Scene& scene, std::shared_ptr<const CutResult
 
     if (options.startPosition >= 0)
         d.go(options.startPosition);
-    d.window->Render();
-    d.sliderRep->Modified();
-    d.window->Render();
+    {
+        const detail::FpTrapsOff mesa;
+        d.window->Render();
+        d.sliderRep->Modified();
+        d.window->Render();
+    }
     d.part->resetSection();
 }
 
@@ -308,6 +312,7 @@ bool ViewerSession::pressKey(const std::string& key) {
 }
 
 void ViewerSession::render() {
+    const detail::FpTrapsOff mesa;
     impl_->window->Render();
 }
 
