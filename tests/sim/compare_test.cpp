@@ -65,7 +65,8 @@ TEST_CASE("a cone cut parallel but off by more than its band is out", "[compare]
         const auto dev = normalDeviation(s.part, n, cut);
         CHECK(dev[1000] == Approx(shift));
         CHECK(normalDeviationAt(s.part, cut.zAt(1000), cut.radiusMm[1000]) == Approx(shift));
-        const auto rep = compareFeatures(s, cut, dev, std::vector<bool>(cut.radiusMm.size(), true));
+        const auto rep =
+            compareFeatures(s, cut, dev, {}, std::vector<bool>(cut.radiusMm.size(), true));
         REQUIRE(rep.size() == 1);
         CHECK(rep[0].maxLeftOnMm == Approx(shift));
         CHECK(rep[0].asCutHalfAngleRad == Approx(th));
