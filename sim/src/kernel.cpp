@@ -24,7 +24,8 @@ Profile profileUpTo(const Scene& scene, const std::vector<ToolMove>& moves, std:
 namespace {
 
 // The move that leaves most of the main feature's final surface, and the longest run of
-// samples within the feature that it leaves, trimmed by two feeds and a nose radius at each end.
+// samples within the feature that it leaves, trimmed by two feeds and a nose radius (along the
+// move) at each end.
 // False if no move leaves that surface.
 bool finishingRegion(const Scene& scene, const ExactSweep& sw, const std::vector<ToolMove>& moves,
                      int& move, double& zLo, double& zHi) {
@@ -67,7 +68,11 @@ bool finishingRegion(const Scene& scene, const ExactSweep& sw, const std::vector
             bestLo = i, bestLen = j - i;
         i = j;
     }
-    const double trim = 2.0 * moves[move].feedMmPerRev + scene.tool.noseRadiusMm;
+    // Along the move: two feeds and the nose at each end, in z as the move runs (a steep move
+    // covers little of the axis).
+    const Eigen::Vector2d d = moves[move].tipTo - moves[move].tipFrom;
+    const double cosA = d.norm() > 0 ? std::abs(d.x()) / d.norm() : 1.0;
+    const double trim = (2.0 * moves[move].feedMmPerRev + scene.tool.noseRadiusMm) * cosA;
     zLo = g.zAt(bestLo) + trim;
     zHi = g.zAt(bestLo + bestLen - (bestLen > 0 ? 1 : 0)) - trim;
     return true;
@@ -88,7 +93,7 @@ void checkFinishingFeed(const Scene& scene, const ToolMove& move, const Roughnes
         throw InputError(known ? scene.plan.passes[static_cast<std::size_t>(p)].where
                                : SourceLoc{scene.file, 0, 0},
                          "plan.pass[" + std::to_string(p + 1) + "].feed", value,
-                         "less than twice the nose radius (" + formatLength(2 * r, u) +
+                         "expected less than twice the nose radius (" + formatLength(2 * r, u) +
                              ") on the finishing pass: at 2r or more a revolution the nose cuts "
                              "a thread, not a turned surface (a feed per minute typed as per "
                              "revolution?)");

@@ -14,6 +14,7 @@
 #include <sstream>
 #include <string>
 #include <sys/wait.h>
+#include <unistd.h>
 #include <vector>
 
 using namespace swarf;
@@ -35,7 +36,7 @@ std::string slurp(const fs::path& path) {
 
 // Runs SWARF_BINARY with the arguments; stdout through popen, stderr into a temporary file.
 Run runSwarf(const std::string& args, const std::string& env = "") {
-    const std::string errFile = "run_cli_test.stderr.txt";
+    const std::string errFile = "run_cli_test." + std::to_string(getpid()) + ".stderr.txt";
     const std::string cmd = env + " '" + std::string(SWARF_BINARY) + "' " + args + " 2>" + errFile;
     Run r;
     FILE* p = popen(cmd.c_str(), "r");

@@ -4,6 +4,7 @@
 // in the output); a bad scene exits 2 with nothing written.
 #include "commands.h"
 #include "swarf/app/display.h"
+#include "swarf/app/memory.h"
 #include "swarf/app/progress.h"
 #include "swarf/geometry/reference_cut.h"
 #include "swarf/geometry/run_solids.h"
@@ -15,6 +16,7 @@
 #include "swarf/sim/error.h"
 #include "swarf/sim/kernel.h"
 #include "swarf/sim/result_figures.h"
+#include "swarf/sim/run_budget.h"
 #include "swarf/viewer/snapshots.h"
 
 #include <fmt/core.h>
@@ -83,8 +85,9 @@ void registerRun(CLI::App& app, int& exitCode) {
     cmd->add_flag("--reference", *reference,
                   "Also cut the scene with the solid modeller alone and compare (slow)");
     cmd->callback([scene, outDir, noStep, noPictures, stl, reference, &exitCode] {
-        // Read first: a bad scene writes nothing.
+        // Read first: a bad scene writes nothing; nor does one the machine cannot hold.
         const Scene s = io::readScene(*scene);
+        requireFits(s, {true, !*noStep, !*noPictures}, availableMemoryBytes());
         CutResult result;
         {
             ProgressBar bar;

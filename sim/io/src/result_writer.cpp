@@ -17,7 +17,8 @@ using nlohmann::ordered_json;
 
 // NaN and infinities become null.
 ordered_json num(double v) {
-    return std::isfinite(v) ? ordered_json(v) : ordered_json(nullptr);
+    // -0 (a negated zero, e.g. no face allowance) is written as 0.
+    return std::isfinite(v) ? ordered_json(v == 0 ? 0.0 : v) : ordered_json(nullptr);
 }
 
 ordered_json point(const Eigen::Vector2d& p) {
@@ -144,8 +145,9 @@ std::string resultJson(const Scene& scene, const CutResult& r) {
         passes.push_back(o);
     }
     j["passes"] = passes;
-    j["profile"] = {
-        {"samples", r.asCut.radiusMm.size()}, {"z0_mm", r.asCut.z0Mm}, {"step_mm", r.asCut.dzMm}};
+    j["profile"] = {{"samples", r.asCut.radiusMm.size()},
+                    {"z0_mm", num(r.asCut.z0Mm)},
+                    {"step_mm", r.asCut.dzMm}};
     j["surface"] = {{"marked_moves", r.surface.markedMoveCount()},
                     {"samples_per_feed", kFeedMarkProfileSamples},
                     {"angle_samples", scene.sim.angleSamples}};

@@ -88,10 +88,12 @@ PlanningOptions readPlanning(const Fields& root) {
 
 SimOptions readSim(const Fields& root) {
     SimOptions s;
+    s.where = root.where();
     const toml::table* t = root.subtable("sim");
     if (!t)
         return s;
     Fields f(*t, "sim", root.context(), {"profile_step", "angle_samples"});
+    s.where = f.where("profile_step"); // the table itself if the key is absent
     s.profileStepMm = f.length("profile_step", "axial sample spacing").value_or(s.profileStepMm);
     f.require(s.profileStepMm >= 1e-4 && s.profileStepMm <= 1.0, "profile_step",
               "expected from 0.0001 mm to 1 mm");
