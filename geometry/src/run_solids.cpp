@@ -49,9 +49,21 @@ RunSolids makeRunSolids(const Scene& scene, const CutResult& result, const Profi
     return s;
 }
 
+void takeSolidVolumes(const RunSolids& s, CutResult& result) {
+    result.stockVolumeMm3 = s.stockVolumeMm3;
+    result.asCutVolumeMm3 = s.asCutVolumeMm3;
+    result.removedVolumeMm3 = s.stockVolumeMm3 - s.asCutVolumeMm3;
+    result.leftoverVolumeMm3 = s.leftoverVolumeMm3;
+    result.overcutVolumeMm3 = s.overcutVolumeMm3;
+}
+
 RunSolidsReport writeRunSolids(const Scene& scene, const CutResult& result,
                                const std::string& outDir, const RunSolidsOptions& options) {
-    const RunSolids s = makeRunSolids(scene, result, options.fit);
+    return writeRunSolids(makeRunSolids(scene, result, options.fit), result, outDir, options);
+}
+
+RunSolidsReport writeRunSolids(const RunSolids& s, const CutResult& result,
+                               const std::string& outDir, const RunSolidsOptions& options) {
     RunSolidsReport r;
     const auto file = [&](const char* name) {
         return (std::filesystem::path(outDir) / name).string();
@@ -70,7 +82,7 @@ RunSolidsReport writeRunSolids(const Scene& scene, const CutResult& result,
         r.files.push_back(file("overcut.step"));
         writeStep(r.files.back(), {{"overcut", s.overcut}});
     }
-    if (options.writeSurfaceStl && result.surface.nz >= 2) {
+    if (options.writeSurfaceStl && !result.surface.empty()) {
         r.files.push_back(file("surface.stl"));
         r.surfaceTriangles = writeSurfaceStl(result.surface, r.files.back(), options.stl);
     }

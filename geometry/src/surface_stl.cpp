@@ -60,11 +60,11 @@ class StlSink {
 
 } // namespace
 
-std::size_t writeSurfaceStl(const HeightMap& s, const std::string& path,
-                            const SurfaceStlOptions& options) {
+std::size_t writeSurfaceStl(const SurfaceGrid& s, const std::string& path) {
     static_assert(sizeof(float) == 4 && std::numeric_limits<float>::is_iec559);
     if (s.nz < 2 || s.nPhi < 3 ||
-        s.radiusMm.size() != static_cast<std::size_t>(s.nz) * static_cast<std::size_t>(s.nPhi))
+        s.radiusMm.size() != static_cast<std::size_t>(s.nz) * static_cast<std::size_t>(s.nPhi) ||
+        s.phiRad.size() != static_cast<std::size_t>(s.nPhi))
         throw OutputError("cannot write " + path + ": the surface has no grid to mesh");
     io::PendingFile file(path);
     const std::string& tmp = file.tmpPath();
@@ -76,36 +76,15 @@ std::size_t writeSurfaceStl(const HeightMap& s, const std::string& path,
     const char title[] = "swarf as-cut surface, mm, Z = spindle axis";
     std::memcpy(header.data(), title, sizeof title - 1);
     out.write(header.data(), header.size());
-    // Rows kept: greedily, each at least `spacing` after the last kept one, and always the
-    // last row; the spacing is the smallest that meets the triangle limit. Where the kernel
-    // made rows dense (the finished surface) they are thinned first; sparse rows stay.
     const std::size_t perRow = 2u * static_cast<std::size_t>(s.nPhi);
-    const auto keptRows = [&](double spacing) {
-        std::vector<int> rows{0};
-        for (int i = 1; i < s.nz - 1; ++i)
-            if (s.rowZ(i) - s.rowZ(rows.back()) >= spacing)
-                rows.push_back(i);
-        rows.push_back(s.nz - 1);
-        return rows;
-    };
-    const auto trianglesOf = [&](const std::vector<int>& rows) { return rows.size() * perRow; };
-    std::vector<int> rows = keptRows(0.0);
-    if (options.maxTriangles > 0 && trianglesOf(rows) > options.maxTriangles) {
-        double lo = 0.0, hi = s.rowZ(s.nz - 1) - s.rowZ(0);
-        for (int it = 0; it < 60; ++it) {
-            const double mid = 0.5 * (lo + hi);
-            (trianglesOf(keptRows(mid)) > options.maxTriangles ? lo : hi) = mid;
-        }
-        rows = keptRows(hi);
-    }
-    const auto total = static_cast<std::uint32_t>((rows.size() - 1) * perRow + perRow);
+    const auto total =
+        static_cast<std::uint32_t>((static_cast<std::size_t>(s.nz) - 1) * perRow + perRow);
     out.write(reinterpret_cast<const char*>(&total), 4); // little-endian hosts only (x86, arm)
 
     std::vector<float> cosPhi(s.nPhi), sinPhi(s.nPhi);
     for (int j = 0; j < s.nPhi; ++j) {
-        const double phi = 2 * std::numbers::pi * j / s.nPhi;
-        cosPhi[j] = static_cast<float>(std::cos(phi));
-        sinPhi[j] = static_cast<float>(std::sin(phi));
+        cosPhi[j] = static_cast<float>(std::cos(s.phiRad[static_cast<std::size_t>(j)]));
+        sinPhi[j] = static_cast<float>(std::sin(s.phiRad[static_cast<std::size_t>(j)]));
     }
     const auto vertex = [&](int i, int j) {
         const float r = s.at(i, j);
@@ -113,11 +92,11 @@ std::size_t writeSurfaceStl(const HeightMap& s, const std::string& path,
     };
     StlSink sink(out);
     // Outward normals: counter-clockwise seen from outside.
-    for (std::size_t r = 0; r + 1 < rows.size(); ++r)
+    for (int i = 0; i + 1 < s.nz; ++i)
         for (int j = 0; j < s.nPhi; ++j) {
-            const int i = rows[r], i1 = rows[r + 1];
             const int k = (j + 1) % s.nPhi;
-            const Vec a = vertex(i, j), b = vertex(i, k), c = vertex(i1, k), d = vertex(i1, j);
+            const Vec a = vertex(i, j), b = vertex(i, k), c = vertex(i + 1, k),
+                      d = vertex(i + 1, j);
             sink.triangle(a, b, c);
             sink.triangle(a, c, d);
         }
@@ -134,6 +113,19 @@ std::size_t writeSurfaceStl(const HeightMap& s, const std::string& path,
         throw OutputError("cannot write " + path + ": writing " + tmp + " failed");
     file.commit();
     return sink.count();
+}
+
+std::size_t writeSurfaceStl(const FeedMarkSurface& surface, const std::string& path,
+                            const SurfaceStlOptions& options) {
+    if (surface.empty())
+        throw OutputError("cannot write " + path + ": the surface has no grid to mesh");
+    const int columns = std::max(3, surface.angleSamples());
+    const std::size_t perRow = 2u * static_cast<std::size_t>(columns);
+    const std::size_t maxRows = options.maxTriangles > 0
+                                    ? std::max<std::size_t>(2, options.maxTriangles / perRow - 1)
+                                    : std::numeric_limits<std::size_t>::max();
+    const std::vector<double> rows = surface.markRows(surface.zFromMm(), surface.zToMm(), maxRows);
+    return writeSurfaceStl(surface.grid(rows, evenColumns(columns)), path);
 }
 
 } // namespace swarf::geometry

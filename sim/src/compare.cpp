@@ -69,34 +69,68 @@ DeviationExtremes deviationExtremes(const std::vector<double>& deviationMm) {
     return e;
 }
 
+DeviationExtremes deviationExtremes(const std::vector<double>& deviationMm,
+                                    const std::vector<bool>& mask) {
+    DeviationExtremes e;
+    for (std::size_t i = 0; i < deviationMm.size() && i < mask.size(); ++i)
+        if (mask[i] && !std::isnan(deviationMm[i])) {
+            e.leftOnMm = std::max(e.leftOnMm, deviationMm[i]);
+            e.overcutMm = std::max(e.overcutMm, -deviationMm[i]);
+        }
+    return e;
+}
+
+std::vector<double> markedDeviation(const std::vector<double>& valleysMm,
+                                    const std::vector<double>& crestsMm) {
+    if (crestsMm.size() != valleysMm.size())
+        return valleysMm;
+    std::vector<double> out(valleysMm.size());
+    for (std::size_t i = 0; i < out.size(); ++i)
+        out[i] = crestsMm[i] > -valleysMm[i] ? crestsMm[i] : valleysMm[i];
+    return out;
+}
+
 double normalBandMm(const Feature& f) {
     if (f.kind == FeatureKind::Face)
         return f.toleranceMm;
     return 0.5 * f.toleranceMm * std::cos(f.surfaceHalfAngleRad());
 }
 
-std::vector<bool> verdictMask(const Part& part, const Profile& grid, double noseRadiusMm) {
-    // Internal corners: a radial feature's end where a neighbour stands taller.
-    std::vector<double> corners;
-    for (const Feature& f : part.features) {
+std::vector<InternalCorner> internalCorners(const Part& part) {
+    // A radial feature's end where a neighbour stands taller.
+    std::vector<InternalCorner> corners;
+    for (std::size_t fi = 0; fi < part.features.size(); ++fi) {
+        const Feature& f = part.features[fi];
         if (!isRadial(f))
             continue;
-        for (double ze : {f.zStartMm, f.zEndMm}) {
+        for (const bool atEnd : {false, true}) {
+            const double ze = atEnd ? f.zEndMm : f.zStartMm;
             const double r = f.radiusAt(ze);
+            bool taller = false;
             for (const Feature& g : part.features) {
                 if (&g == &f || ze < g.zStartMm - kEpsZ || ze > g.zEndMm + kEpsZ)
                     continue;
                 const double rg = isRadial(g) ? g.radiusAt(ze) : 0.5 * g.diameterMm;
-                if (rg > r + 1e-6)
-                    corners.push_back(ze);
+                taller = taller || rg > r + 1e-6;
             }
+            if (!taller)
+                continue;
+            const double other = f.radiusAt(atEnd ? f.zStartMm : f.zEndMm);
+            const double theta = f.surfaceHalfAngleRad();
+            corners.push_back({static_cast<int>(fi), ze, r,
+                               other < r ? kPi / 2 + theta : kPi / 2 - theta, atEnd});
         }
     }
+    return corners;
+}
+
+std::vector<bool> verdictMask(const Part& part, const Profile& grid, double noseRadiusMm) {
+    const std::vector<InternalCorner> corners = internalCorners(part);
     std::vector<bool> mask(grid.radiusMm.size(), true);
     for (std::size_t i = 0; i < mask.size(); ++i) {
         const double z = grid.zAt(i);
-        for (double c : corners) {
-            if (std::abs(z - c) < noseRadiusMm)
+        for (const InternalCorner& c : corners) {
+            if (std::abs(z - c.zMm) < noseRadiusMm)
                 mask[i] = false;
         }
     }
@@ -105,7 +139,9 @@ std::vector<bool> verdictMask(const Part& part, const Profile& grid, double nose
 
 std::vector<FeatureReport> compareFeatures(const Scene& scene, const Profile& asCut,
                                            const std::vector<double>& dev,
+                                           const std::vector<double>& crestDev,
                                            const std::vector<bool>& mask) {
+    const std::vector<double>& up = crestDev.size() == dev.size() ? crestDev : dev;
     const Part& part = scene.part;
     std::vector<int> owner(asCut.radiusMm.size());
     for (std::size_t i = 0; i < owner.size(); ++i)
@@ -148,9 +184,8 @@ std::vector<FeatureReport> compareFeatures(const Scene& scene, const Profile& as
                     idx.push_back(i);
         double sumR = 0, sz = 0, sr = 0, szz = 0, szr = 0;
         for (std::size_t i : idx) {
-            const double d = dev[i];
-            rep.maxLeftOnMm = std::max(rep.maxLeftOnMm, d);
-            rep.maxOvercutMm = std::max(rep.maxOvercutMm, -d);
+            rep.maxLeftOnMm = std::max(rep.maxLeftOnMm, up[i]);
+            rep.maxOvercutMm = std::max(rep.maxOvercutMm, -dev[i]);
             const double z = asCut.zAt(i), r = asCut.radiusMm[i];
             sumR += r;
             sz += z;
@@ -178,6 +213,18 @@ std::vector<FeatureReport> compareFeatures(const Scene& scene, const Profile& as
         out.push_back(rep);
     }
     return out;
+}
+
+double overcutVolumeMm3(const Profile& nominal, const Profile& asCut) {
+    double v = 0;
+    for (std::size_t i = 1; i < asCut.radiusMm.size(); ++i) {
+        const double n0 = nominal.radiusMm[i - 1], n1 = nominal.radiusMm[i];
+        if (std::isnan(n0) || std::isnan(n1))
+            continue;
+        const double a0 = std::min(asCut.radiusMm[i - 1], n0), a1 = std::min(asCut.radiusMm[i], n1);
+        v += frustum(n0, n1, asCut.dzMm) - frustum(a0, a1, asCut.dzMm);
+    }
+    return v;
 }
 
 double leftoverVolumeMm3(const Profile& nominal, const Profile& asCut) {

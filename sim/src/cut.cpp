@@ -25,8 +25,28 @@ const char* findingKindName(FindingKind kind) {
         return "depth_of_cut";
     case FindingKind::AirCut:
         return "air_cut";
+    case FindingKind::CornerFillet:
+        return "corner_fillet";
+    case FindingKind::CoarseFinish:
+        return "coarse_finish";
     }
     return "unknown";
+}
+
+const std::vector<FindingKind>& allFindingKinds() {
+    static const std::vector<FindingKind> kinds = {
+        FindingKind::LeftOn,      FindingKind::Overcut,   FindingKind::Rubbing,
+        FindingKind::JawCrash,    FindingKind::PastStock, FindingKind::CompoundTravel,
+        FindingKind::DepthOfCut,  FindingKind::AirCut,    FindingKind::CornerFillet,
+        FindingKind::CoarseFinish};
+    return kinds;
+}
+
+std::optional<FindingKind> findingKindFromName(std::string_view name) {
+    for (FindingKind k : allFindingKinds())
+        if (name == findingKindName(k))
+            return k;
+    return std::nullopt;
 }
 
 const char* findingLabel(FindingKind kind) {
@@ -47,6 +67,10 @@ const char* findingLabel(FindingKind kind) {
         return "depth of cut";
     case FindingKind::AirCut:
         return "cuts nothing";
+    case FindingKind::CornerFillet:
+        return "nose fillet in a corner";
+    case FindingKind::CoarseFinish:
+        return "coarse finishing feed";
     }
     return "?";
 }

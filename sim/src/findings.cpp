@@ -4,10 +4,13 @@
 #include <algorithm>
 #include <cmath>
 #include <cstdio>
+#include <limits>
 #include <string>
 
 namespace swarf {
 namespace {
+
+constexpr double kNone = std::numeric_limits<double>::quiet_NaN();
 
 bool rightHanded(const ToolOutline& o) {
     return o.imaginaryTip().x() > 0;
@@ -41,17 +44,18 @@ double rampLimitRad(const ToolOutline& outline) {
     return kPi - enteringAngle(outline) - eps - kRampClearanceRad;
 }
 
-std::vector<Finding> findCutFindings(const Scene& scene, const ToolOutline& outline,
-                                     const std::vector<ToolMove>& moves, const ExactSweep& sweep,
-                                     const Profile& nominal,
-                                     const std::vector<FeatureReport>& features,
-                                     const std::vector<double>& dev,
-                                     const std::vector<bool>& mask) {
+std::vector<Finding>
+findCutFindings(const Scene& scene, const ToolOutline& outline, const std::vector<ToolMove>& moves,
+                const ExactSweep& sweep, const Profile& nominal,
+                const std::vector<FeatureReport>& features, const std::vector<double>& dev,
+                const std::vector<double>& crestDev, const std::vector<bool>& mask) {
     std::vector<Finding> out;
     const Units u = scene.units;
     const int nPass = static_cast<int>(scene.plan.passes.size());
     const Profile& g = sweep.asCut;
-    auto add = [&](FindingKind kind, int pass, std::string msg, double z = 0, double v = 0) {
+    const std::vector<double>& up = crestDev.size() == dev.size() ? crestDev : dev;
+    auto add = [&](FindingKind kind, int pass, std::string msg, double z = kNone, double v = kNone,
+                   double angle = kNone) {
         for (const Finding& f : out)
             if (f.kind == kind && f.pass == pass && kind != FindingKind::LeftOn &&
                 kind != FindingKind::Overcut)
@@ -62,6 +66,7 @@ std::vector<Finding> findCutFindings(const Scene& scene, const ToolOutline& outl
         f.message = std::move(msg);
         f.zMm = z;
         f.valueMm = v;
+        f.angleRad = angle;
         out.push_back(f);
     };
 
@@ -83,8 +88,8 @@ std::vector<Finding> findCutFindings(const Scene& scene, const ToolOutline& outl
         for (std::size_t i = 0; i < dev.size(); ++i) {
             if (!mask[i] || std::isnan(dev[i]) || featureAt(scene.part, g.zAt(i)) != rep.feature)
                 continue;
-            if (dev[i] > dMax)
-                dMax = dev[i], iMax = i;
+            if (up[i] > dMax)
+                dMax = up[i], iMax = i;
             if (dev[i] < dMin)
                 dMin = dev[i], iMin = i;
         }
@@ -92,8 +97,9 @@ std::vector<Finding> findCutFindings(const Scene& scene, const ToolOutline& outl
             const int m = sweep.finalMove[iMax];
             const int pass = m >= 0 ? moves[m].pass : nPass - 1;
             add(FindingKind::LeftOn, pass,
-                name + ": " + formatSmallLength(rep.maxLeftOnMm, u) + " left on at z = " +
-                    formatLength(g.zAt(iMax), u) + " after the last pass (band ±" +
+                name + ": " + formatSmallLength(rep.maxLeftOnMm, u) +
+                    " left on at z = " + formatLength(g.zAt(iMax), u) +
+                    " after the last pass, to the crests of the feed marks (band ±" +
                     formatSmallLength(band, u) + " normal to the surface)",
                 g.zAt(iMax), rep.maxLeftOnMm);
         }
@@ -145,7 +151,7 @@ std::vector<Finding> findCutFindings(const Scene& scene, const ToolOutline& outl
                         " rubs: the move runs in toward the axis at " + degText(beta) +
                         ", steeper than the insert can follow (" + degText(limit) +
                         " with clearance); the edge gouges the surface behind the nose",
-                    c.zOfMaxRemovedMm, beta);
+                    c.zOfMaxRemovedMm, kNone, beta);
             }
         }
         const MoveSweep s = prepareMove(outline, m);
@@ -160,7 +166,7 @@ std::vector<Finding> findCutFindings(const Scene& scene, const ToolOutline& outl
             add(FindingKind::PastStock, p,
                 "the tool goes " + formatLength(-c.minXOverStockMm, u) +
                     " past the centre where there is metal",
-                0, -c.minXOverStockMm);
+                kNone, -c.minXOverStockMm);
         }
         if (cuts && !plunge) {
             const double engaged = c.maxThicknessNormalMm / std::max(std::sin(kappa), 0.05);
@@ -186,7 +192,7 @@ std::vector<Finding> findCutFindings(const Scene& scene, const ToolOutline& outl
                 add(FindingKind::CompoundTravel, p,
                     "compound reading " + formatLength(rd, u) + " is beyond its travel of ±" +
                         formatLength(scene.setup.compound.travelMm, u),
-                    0, std::abs(rd));
+                    kNone, std::abs(rd));
             }
         }
         if (passRemoved[p] < kAirCutMm) {

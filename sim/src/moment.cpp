@@ -121,7 +121,7 @@ MomentView describeMoment(const Scene& scene, const CutResult& result, double po
     if (v.finished && !result.asCut.radiusMm.empty())
         v.profile = result.asCut;
     if (v.finished && result.deviationMm.size() == v.profile.radiusMm.size())
-        v.deviationMm = result.deviationMm;
+        v.deviationMm = markedDeviation(result.deviationMm, result.crestDeviationMm);
     else if (result.nominal.radiusMm.size() == v.profile.radiusMm.size())
         v.deviationMm = normalDeviation(scene.part, result.nominal, v.profile);
     else

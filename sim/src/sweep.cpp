@@ -46,12 +46,12 @@ double sweptLowestX(const ToolOutline& outline, const MoveSweep& s, double zMm) 
     return x;
 }
 
-Profile sampleGrid(const Scene& scene, const ToolOutline& outline,
-                   const std::vector<ToolMove>& moves) {
-    Profile g;
-    g.z0Mm = scene.stock.freeEndZMm();
-    g.dzMm = scene.sim.profileStepMm > 0 ? scene.sim.profileStepMm : 0.002;
-    double zEnd = scene.part.features.empty() ? g.z0Mm : scene.part.zMaxMm();
+SampleExtent sampleExtent(const Scene& scene, const ToolOutline& outline,
+                          const std::vector<ToolMove>& moves) {
+    SampleExtent e;
+    e.z0Mm = scene.stock.freeEndZMm();
+    e.dzMm = scene.sim.profileStepMm > 0 ? scene.sim.profileStepMm : 0.002;
+    double zEnd = scene.part.features.empty() ? e.z0Mm : scene.part.zMaxMm();
     for (const auto& m : moves) {
         const double cz = std::max(m.tipFrom.x(), m.tipTo.x()) - outline.imaginaryTip().x();
         zEnd = std::max(zEnd, cz + outline.uMaxMm());
@@ -59,9 +59,18 @@ Profile sampleGrid(const Scene& scene, const ToolOutline& outline,
     // A little beyond the last feature or tool reach, so a shoulder's corner shows; never past
     // the jaws, where there is no bar to cut.
     zEnd = std::min(zEnd + 1.0, scene.stock.jawZMm());
-    zEnd = std::max(zEnd, g.z0Mm + g.dzMm);
-    const auto n = static_cast<std::size_t>(std::floor((zEnd - g.z0Mm) / g.dzMm + 1e-9)) + 1;
-    g.radiusMm.assign(n, 0.0);
+    zEnd = std::max(zEnd, e.z0Mm + e.dzMm);
+    e.count = static_cast<std::size_t>(std::floor((zEnd - e.z0Mm) / e.dzMm + 1e-9)) + 1;
+    return e;
+}
+
+Profile sampleGrid(const Scene& scene, const ToolOutline& outline,
+                   const std::vector<ToolMove>& moves) {
+    const SampleExtent e = sampleExtent(scene, outline, moves);
+    Profile g;
+    g.z0Mm = e.z0Mm;
+    g.dzMm = e.dzMm;
+    g.radiusMm.assign(e.count, 0.0);
     return g;
 }
 

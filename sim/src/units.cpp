@@ -47,6 +47,15 @@ std::string formatSmallLength(double mm, Units u) {
     return buf;
 }
 
+std::string formatRoughness(double um, Units u) {
+    char buf[64];
+    if (u == Units::Inch) // 1 µm = 39.37 µin
+        std::snprintf(buf, sizeof buf, "%.0f µin (%.2f µm)", um * 1000.0 / 25.4, um);
+    else
+        std::snprintf(buf, sizeof buf, "%.2f µm", um);
+    return buf;
+}
+
 std::string formatDms(double rad, int secondDecimals) {
     const bool neg = rad < 0;
     double deg = std::fabs(radToDeg(rad));

@@ -7,6 +7,7 @@
 #include <sstream>
 #include <string>
 #include <sys/wait.h>
+#include <unistd.h>
 
 namespace {
 
@@ -24,7 +25,7 @@ std::string slurp(const std::string& path) {
 
 // Runs SWARF_BINARY with the arguments; stdout through popen, stderr into a temporary file.
 Run runSwarf(const std::string& args) {
-    const std::string errFile = "check_cli_test.stderr.txt";
+    const std::string errFile = "check_cli_test." + std::to_string(getpid()) + ".stderr.txt";
     const std::string cmd = std::string("'") + SWARF_BINARY + "' " + args + " 2>" + errFile;
     Run r;
     FILE* p = popen(cmd.c_str(), "r");

@@ -61,11 +61,15 @@ Scene withPasses(const Scene& scene) {
 }
 
 // The kernel samples the profile only as far as the tool reaches (plus 1 mm); the bar from
-// there to the jaws is uncut: the kernel's volume plus that closed-form cylinder (derived).
-double kernelVolumeToJaws(const Scene& scene, const Profile& asCut) {
+// there to the jaws is uncut: the profile's volume plus that closed-form cylinder (derived).
+// The kernel's own as-cut volume covers the same stick-out.
+double kernelVolumeToJaws(const Scene& scene, const CutResult& kernel) {
+    const Profile& asCut = kernel.asCut;
     const double zEnd = asCut.zAt(asCut.radiusMm.size() - 1);
     const double r = scene.stock.diameterMm / 2;
-    return asCut.volumeMm3() + kPi * r * r * std::max(0.0, scene.stock.jawZMm() - zEnd);
+    const double v = asCut.volumeMm3() + kPi * r * r * std::max(0.0, scene.stock.jawZMm() - zEnd);
+    CHECK_THAT(kernel.asCutVolumeMm3, WithinRel(v, 1e-12));
+    return v;
 }
 } // namespace
 
@@ -81,7 +85,7 @@ TEST_CASE("scenes: reference path, kernel and STEP file agree",
             const ReferenceResult ref = referenceCut(scene, kernel.moves);
             REQUIRE(ref.asCut.isValid());
             // The limits: volume within 1e-4 relative, profile within 1 µm.
-            CHECK_THAT(ref.volumeMm3, WithinRel(kernelVolumeToJaws(scene, kernel.asCut), 1e-4));
+            CHECK_THAT(ref.volumeMm3, WithinRel(kernelVolumeToJaws(scene, kernel), 1e-4));
             const Feature* cone = mainSlope(scene.part);
             REQUIRE(cone != nullptr);
             const auto gauge = ref.asCut.radiusAtZ(kernel.gaugeZMm);
@@ -109,7 +113,7 @@ TEST_CASE("scenes: reference path, kernel and STEP file agree",
             // One solid, unless the cut went through the centre and parted the bar.
             REQUIRE(back.solidCount() == pieces(kernel.asCut));
             CHECK(back.isValid());
-            CHECK_THAT(back.volumeMm3(), WithinRel(kernelVolumeToJaws(scene, kernel.asCut), 1e-6));
+            CHECK_THAT(back.volumeMm3(), WithinRel(kernelVolumeToJaws(scene, kernel), 1e-6));
             const BoxMm b = back.bounds();
             CHECK_THAT(b.zMin, WithinAbs(scene.stock.freeEndZMm(), 1e-6));
             CHECK_THAT(b.zMax, WithinAbs(scene.stock.jawZMm(), 1e-6));

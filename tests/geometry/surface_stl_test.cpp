@@ -1,4 +1,5 @@
 #include "swarf/geometry/surface_stl.h"
+#include "swarf/sim/kernel.h"
 
 #include <catch2/catch.hpp>
 
@@ -39,13 +40,12 @@ std::vector<Tri> readStl(const std::string& path, std::uint32_t& declared) {
 }
 } // namespace
 
-TEST_CASE("surface STL is a closed mesh of the height map", "[geometry][stl]") {
-    HeightMap s;
-    s.z0Mm = -1;
-    s.dzMm = 0.5;
+TEST_CASE("surface STL is a closed mesh of the grid", "[geometry][stl]") {
+    SurfaceGrid s;
     s.nz = 5;
     s.zMm = {-1.0, -0.5, 0.0, 0.25, 1.0}; // rows need not be evenly spaced
     s.nPhi = 12;
+    s.phiRad = evenColumns(12);
     for (int i = 0; i < s.nz; ++i)
         for (int j = 0; j < s.nPhi; ++j)
             s.radiusMm.push_back(10.0f + 0.01f * static_cast<float>(j % 2));
@@ -93,33 +93,54 @@ TEST_CASE("surface STL is a closed mesh of the height map", "[geometry][stl]") {
 }
 
 TEST_CASE("surface STL keeps under its triangle limit", "[geometry][stl]") {
-    HeightMap s;
-    s.dzMm = 0.001;
-    s.nz = 1001;
-    s.nPhi = 36;
-    s.radiusMm.assign(static_cast<std::size_t>(s.nz) * 36, 5.0f);
+    // A 30 mm bar turned to 20 mm over 10 mm at 0.1 mm/rev (made up for the test).
+    Scene sc;
+    sc.name = "stl";
+    sc.stock.diameterMm = 30;
+    sc.stock.lengthMm = 100;
+    sc.stock.stickOutMm = 40;
+    Feature cyl;
+    cyl.kind = FeatureKind::Cylinder;
+    cyl.zStartMm = 0;
+    cyl.zEndMm = 10;
+    cyl.diameterMm = 20;
+    cyl.toleranceMm = 0.1;
+    sc.part.features.push_back(cyl);
+    sc.tool.includedAngleRad = degToRad(55);
+    sc.tool.enteringAngleRad = degToRad(93);
+    sc.tool.noseRadiusMm = 0.4;
+    sc.tool.edgeLengthMm = 11.6;
+    sc.sim.angleSamples = 36;
+    Pass p;
+    p.kind = PassKind::Path;
+    p.pathZX = {{-1, 10}, {11, 10}};
+    p.feedMmPerRev = 0.1;
+    sc.plan.passes.push_back(p);
+    const CutResult r = simulate(sc);
     const std::string path = (fs::temp_directory_path() / "swarf-limited-surface.stl").string();
     SurfaceStlOptions o;
     o.maxTriangles = 3000;
-    const std::size_t n = writeSurfaceStl(s, path, o);
+    const std::size_t n = writeSurfaceStl(r.surface, path, o);
     CHECK(n <= 3000);
-    CHECK(n >= 2000); // the smallest spacing that fits, not much coarser
+    CHECK(n >= 2000); // as many rows as fit, not much fewer
     std::uint32_t declared = 0;
     const auto tris = readStl(path, declared);
     CHECK(tris.size() == n);
-    // The last row is kept: the mesh still ends at z = 1 mm.
+    // The mesh runs over the whole surface: to its last z.
     float zMax = -1;
     for (const Tri& t : tris)
         for (const auto& v : t.v)
             zMax = std::max(zMax, v[2]);
-    CHECK(std::abs(zMax - 1.0f) < 1e-6f);
+    CHECK(std::abs(zMax - static_cast<float>(r.surface.zToMm())) < 1e-5f);
     fs::remove(path);
 }
 
 TEST_CASE("surface STL refuses a grid it cannot mesh", "[geometry][stl]") {
-    HeightMap s;
+    SurfaceGrid s;
     s.nz = 1;
     s.nPhi = 12;
+    s.zMm = {0.0};
+    s.phiRad = evenColumns(12);
     s.radiusMm.assign(12, 1.0f);
     const std::string path = (fs::temp_directory_path() / "swarf-bad-surface.stl").string();
     CHECK_THROWS_AS(writeSurfaceStl(s, path), OutputError);

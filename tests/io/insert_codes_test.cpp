@@ -5,6 +5,7 @@
 
 #include <cmath>
 #include <numbers>
+#include <string>
 
 using namespace swarf::io;
 
@@ -45,7 +46,11 @@ TEST_CASE("ISO 1832 designations", "[io][insert]") {
     auto d = parseInsertCode("DCMT 11T304");
     REQUIRE(d);
     CHECK(d->shape == 'D');
-    CHECK(d->edgeLengthMm == 11);
+    // derived: a 55° rhombus with a 9.525 mm (3/8 in) inscribed circle has 9.525 / sin 55° =
+    // 11.63 mm edges; the size code 11 is that truncated (common practice: catalogues print
+    // l = 11.6 for this insert, from memory).
+    CHECK(d->inscribedCircleMm == 9.525);
+    CHECK(d->edgeLengthMm == Approx(11.628).margin(5e-4));
     CHECK(d->thicknessMm == Approx(3.97));
     CHECK(d->noseRadiusMm == Approx(0.4)); // Source: references R8 (code 04 → 0.4 mm)
     auto c = parseInsertCode("cnmg120408-pm");
@@ -71,4 +76,72 @@ TEST_CASE("largest nose radius an insert can have", "[io][insert]") {
     CHECK(maxNoseRadiusMm('V', 35 * deg, 2) ==
           Approx(std::min(2 * std::sin(35 * deg) / 2, 2 * std::tan(17.5 * deg))));
     CHECK(maxNoseRadiusMm('R', 180 * deg, 10) == Approx(5));
+}
+
+TEST_CASE("ISO 1832 size codes: the edge length from the inscribed circle, every shape",
+          "[io][insert]") {
+    const double deg = std::numbers::pi / 180;
+    // Source: a tool maker's general catalogue (tests/REFERENCES.md, "Insert size codes"): size
+    // codes by inscribed circle for C, S and T inserts.
+    struct Row {
+        double icMm;
+        int c, s, t;
+    };
+    for (const Row& r : {Row{6.35, 6, 6, 11}, Row{7.94, 8, 7, 13}, Row{9.525, 9, 9, 16},
+                         Row{12.7, 12, 12, 22}, Row{15.875, 16, 15, 27}}) {
+        INFO("IC " << r.icMm);
+        CHECK(inscribedCircleOfSizeCodeMm('C', r.c) == r.icMm);
+        CHECK(inscribedCircleOfSizeCodeMm('S', r.s) == r.icMm);
+        CHECK(inscribedCircleOfSizeCodeMm('T', r.t) == r.icMm);
+    }
+    // from memory (common catalogue designations), each with its inscribed circle, and the
+    // edge length derived from it by plane geometry (the test's own formulas, derived):
+    struct Insert {
+        const char* code;
+        double icMm, edgeMm;
+    };
+    const double rho = 12.7 / 2;
+    for (const Insert& i :
+         {Insert{"CNMG 120408", 12.7, 12.7 / std::sin(80 * deg)},   // 12.90
+          Insert{"CCMT 09T304", 9.525, 9.525 / std::sin(80 * deg)}, // 9.67
+          Insert{"DNMG 150608", 12.7, 12.7 / std::sin(55 * deg)},   // 15.50
+          Insert{"DCMT 070204", 6.35, 6.35 / std::sin(55 * deg)},   // 7.75
+          Insert{"ECMT 130408", 12.7, 12.7 / std::sin(75 * deg)},   // 13.15
+          Insert{"SNMG 120408", 12.7, 12.7},
+          Insert{"TNMG 160408", 9.525, 9.525 * std::sqrt(3.0)},     // 16.50
+          Insert{"TCMT 110204", 6.35, 6.35 * std::sqrt(3.0)},       // 11.00
+          Insert{"VBMT 160404", 9.525, 9.525 / std::sin(35 * deg)}, // 16.61
+          Insert{"VCMT 110304", 6.35, 6.35 / std::sin(35 * deg)},   // 11.07
+          // a trigon: six sides, corners of 80° and 160° in turn, all tangent to the circle
+          Insert{"WNMG 080408", 12.7, rho / std::tan(40 * deg) + rho / std::tan(80 * deg)},
+          Insert{"WNMG 060408", 9.525,
+                 9.525 / 2 / std::tan(40 * deg) + 9.525 / 2 / std::tan(80 * deg)},
+          Insert{"RCMT 10T3M0", 10.0, 10.0}, // round: the size code is the diameter
+          Insert{"RCMT 1204M0", 12.0, 12.0}}) {
+        INFO(i.code);
+        const auto c = parseInsertCode(i.code);
+        REQUIRE(c);
+        CHECK(c->inscribedCircleMm == i.icMm);
+        CHECK(c->edgeLengthMm == Approx(i.edgeMm).epsilon(1e-12));
+        // ISO 1832: the size code is the edge length (to 0.1 mm, as tabulated) truncated to
+        // whole millimetres (from memory).
+        CHECK(static_cast<int>(std::round(c->edgeLengthMm * 10) / 10) ==
+              std::stoi(std::string(i.code).substr(5, 2)));
+    }
+    // derived: the regular polygons' sides from their inscribed circle.
+    CHECK(*edgeLengthFromInscribedCircleMm('H', 10) == Approx(10 * std::tan(30 * deg)));
+    CHECK(*edgeLengthFromInscribedCircleMm('O', 10) == Approx(10 * std::tan(22.5 * deg)));
+    CHECK(*edgeLengthFromInscribedCircleMm('P', 10) == Approx(10 * std::tan(36 * deg)));
+    CHECK(*edgeLengthFromInscribedCircleMm('M', 10) == Approx(10 / std::sin(86 * deg)));
+    // A parallelogram's edge is not fixed by its circle: the code's whole millimetres.
+    CHECK_FALSE(edgeLengthFromInscribedCircleMm('K', 9.525).has_value());
+    const auto k = parseInsertCode("KNUX 160405");
+    REQUIRE(k);
+    CHECK(k->edgeLengthMm == 16);
+    // No insert of these shapes has these sizes.
+    CHECK_FALSE(parseInsertCode("DCMT 10T304").has_value());
+    CHECK_FALSE(parseInsertCode("SNMG 130408").has_value());
+    // The inverse, for the nose-radius limit: a trigon's circle from its edge (derived).
+    CHECK(inscribedCircleMm('W', 80 * deg, rho / std::tan(40 * deg) + rho / std::tan(80 * deg)) ==
+          Approx(12.7));
 }

@@ -49,7 +49,8 @@ TEST_CASE("profile.csv has one row per sample and empty cells off the drawing", 
     std::istringstream in(io::profileCsv(r));
     std::string line;
     std::getline(in, line);
-    CHECK(line == "z_mm,nominal_radius_mm,as_cut_radius_mm,deviation_mm");
+    CHECK(line == "z_mm,nominal_radius_mm,as_cut_radius_mm,deviation_mm,crest_radius_mm,"
+                  "crest_deviation_mm");
     std::size_t rows = 0, empty = 0;
     while (std::getline(in, line)) {
         ++rows;

@@ -6,6 +6,7 @@
 #include <catch2/catch.hpp>
 
 #include <cmath>
+#include <numbers>
 #include <string>
 
 using namespace swarf;
@@ -589,7 +590,8 @@ TEST_CASE("an ISO 1832 insert code gives shape, nose radius and size", "[io][sce
     const Scene s = io::readSceneText(text, "insert.toml");
     CHECK(s.tool.shape == 'C');
     CHECK(s.tool.noseRadiusMm == Approx(0.8)); // Source: references R8 (code 08 → 0.8 mm)
-    CHECK(s.tool.edgeLengthMm == 12);
+    // derived: a C (80°) rhombus's edge from its inscribed circle, 12.7 mm (size code 12).
+    CHECK(s.tool.edgeLengthMm == Approx(12.7 / std::sin(80 * std::numbers::pi / 180)));
     CHECK(s.tool.thicknessMm == Approx(4.76));
     // A code and a nose radius that disagree are an error.
     const std::string bad = replaced(kMinimal, "shape = \"C\"", "insert = \"CNMG 120404\"");

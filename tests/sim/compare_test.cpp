@@ -65,7 +65,8 @@ TEST_CASE("a cone cut parallel but off by more than its band is out", "[compare]
         const auto dev = normalDeviation(s.part, n, cut);
         CHECK(dev[1000] == Approx(shift));
         CHECK(normalDeviationAt(s.part, cut.zAt(1000), cut.radiusMm[1000]) == Approx(shift));
-        const auto rep = compareFeatures(s, cut, dev, std::vector<bool>(cut.radiusMm.size(), true));
+        const auto rep =
+            compareFeatures(s, cut, dev, {}, std::vector<bool>(cut.radiusMm.size(), true));
         REQUIRE(rep.size() == 1);
         CHECK(rep[0].maxLeftOnMm == Approx(shift));
         CHECK(rep[0].asCutHalfAngleRad == Approx(th));
@@ -82,4 +83,40 @@ TEST_CASE("left-on volume between the drawing and the cut", "[compare]") {
     const Profile n = nominalOnGrid(part, cut);
     // Source: derived (Pappus: annulus 10..10.5 over 10 mm).
     CHECK(leftoverVolumeMm3(n, cut) == Approx(kPi * (10.5 * 10.5 - 100) * 10).epsilon(1e-9));
+}
+
+TEST_CASE("left on counts the crests, overcut the valleys", "[compare]") {
+    Scene s = barScene(30);
+    s.part.features.push_back(cylinderFeature(0, 10, 20, 0.02)); // band 0.01 on radius
+    const Profile valleys = gridOf(0, 0.01, 1001, 9.996);        // 4 µm under
+    const Profile n = nominalOnGrid(s.part, valleys);
+    const auto dev = normalDeviation(s.part, n, valleys);
+    for (double crest : {0.009, 0.012}) { // crests 5 and 8 µm above the drawing
+        const Profile crests = gridOf(0, 0.01, 1001, 9.996 + crest);
+        const auto up = normalDeviation(s.part, n, crests);
+        const auto rep = compareFeatures(s, valleys, dev, up, std::vector<bool>(1001, true));
+        CHECK(rep[0].maxOvercutMm == Approx(0.004));
+        CHECK(rep[0].maxLeftOnMm == Approx(crest - 0.004));
+        CHECK(rep[0].withinTolerance == (crest - 0.004 <= 0.01));
+        // The colour: whichever stands further from the drawing.
+        const auto shown = markedDeviation(dev, up);
+        CHECK(shown[500] == Approx(crest - 0.004 > 0.004 ? crest - 0.004 : -0.004));
+    }
+}
+
+TEST_CASE("overcut volume and the drawing's inside corners", "[compare]") {
+    Part part;
+    part.features.push_back(cylinderFeature(0, 10, 20, 0.1));
+    const Profile cut = gridOf(0, 0.01, 1001, 9.5);
+    // Source: derived (Pappus: annulus 9.5..10 over 10 mm).
+    CHECK(overcutVolumeMm3(nominalOnGrid(part, cut), cut) ==
+          Approx(kPi * (100 - 9.5 * 9.5) * 10).epsilon(1e-9));
+    CHECK(leftoverVolumeMm3(nominalOnGrid(part, cut), cut) == 0);
+    part.features.push_back(cylinderFeature(10, 20, 24, 0.1));
+    const auto corners = internalCorners(part);
+    REQUIRE(corners.size() == 1);
+    CHECK(corners[0].feature == 0);
+    CHECK(corners[0].zMm == 10);
+    CHECK(corners[0].atFeatureEnd);
+    CHECK(corners[0].interiorAngleRad == Approx(kPi / 2)); // derived: a square shoulder
 }

@@ -8,6 +8,7 @@
 #include <algorithm>
 #include <catch2/catch.hpp>
 #include <cmath>
+#include <string>
 
 using namespace swarf;
 using namespace swarf::testing;
@@ -102,4 +103,31 @@ TEST_CASE("each finding from a plan made for it", "[findings]") {
         s.plan.passes.push_back(p);
         CHECK(has(simulate(s), FindingKind::CompoundTravel));
     }
+}
+
+TEST_CASE("the nose leaves a fillet in a sharp inside corner", "[findings]") {
+    // A 26 mm cylinder up to a 29 mm shoulder at z = 30: the path runs along the cylinder, then
+    // straight up the shoulder's face. A nose of radius r in a square corner stands r(√2 − 1)
+    // out of the drawn corner along the bisector (derived): 0.331 mm for r = 0.8 mm.
+    Scene s = barScene(32);
+    s.part.features.push_back(cylinderFeature(0, 30, 26, 0.05));
+    s.part.features.push_back(cylinderFeature(30, 40, 29, 0.05));
+    s.plan.passes.push_back(pathPass({{-2, 13.0}, {30, 13.0}, {30, 14.5}, {42, 14.5}}, 0.1));
+    const CutResult r = simulate(s);
+    const auto f = std::find_if(r.findings.begin(), r.findings.end(), [](const Finding& x) {
+        return x.kind == FindingKind::CornerFillet;
+    });
+    REQUIRE(f != r.findings.end());
+    CHECK(f->zMm == 30);
+    CHECK(f->valueMm == Approx(0.8 * (std::sqrt(2.0) - 1)).epsilon(0.01));
+    CHECK(f->pass == 0);
+    // It says what the drawing would need.
+    CHECK(f->message.find("relief groove") != std::string::npos);
+    CHECK(f->message.find("smaller nose radius") != std::string::npos);
+    // Away from the corner the cylinder is to size: the fillet is the only finding.
+    CHECK(r.withinTolerance);
+    CHECK(r.findings.size() == 1);
+    // A corner with no taller neighbour (the cylinder ends at the bar's free end) has none.
+    Scene plain = goodPlan();
+    CHECK_FALSE(has(simulate(plain), FindingKind::CornerFillet));
 }

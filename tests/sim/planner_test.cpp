@@ -215,9 +215,11 @@ TEST_CASE("every planned cone proves itself in the kernel", "[planner][kernel]")
         REQUIRE(plan.planned);
         REQUIRE_NOTHROW(plan.scene.validate());
         const CutResult r = simulate(plan.scene);
+        // The nose's fillet in a corner against a shoulder is the drawing's to settle (a relief
+        // groove or a corner radius), not the plan's: any other finding is a fault of the plan.
         for (const Finding& f : r.findings)
-            UNSCOPED_INFO(f.message);
-        CHECK(r.findings.empty());
+            if (f.kind != FindingKind::CornerFillet)
+                FAIL_CHECK(findingKindName(f.kind) << ": " << f.message);
         CHECK(r.withinTolerance);
         const Feature& cone = plan.scene.part.features[plan.featureIndex];
         // No metal on beyond the tolerance, nothing overcut beyond it, normal to the cone.

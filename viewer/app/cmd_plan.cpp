@@ -2,6 +2,7 @@
 // scene and the set-up sheet, then run the planned scene (as written) through the kernel and
 // print its verdict, so the plan proves itself.
 #include "commands.h"
+#include "swarf/app/memory.h"
 #include "swarf/io/output_file.h"
 #include "swarf/io/scene_reader.h"
 #include "swarf/io/scene_writer.h"
@@ -10,6 +11,7 @@
 #include "swarf/sim/error.h"
 #include "swarf/sim/kernel.h"
 #include "swarf/sim/planner.h"
+#include "swarf/sim/run_budget.h"
 
 #include <fmt/core.h>
 
@@ -42,6 +44,8 @@ std::vector<std::string> headerFor(const ConePlan& plan, const std::string& from
 int runPlan(const PlanArgs& a) {
     const Scene scene = io::readScene(a.scene); // bad input throws before anything is written
     const ConePlan plan = planCone(scene);
+    if (plan.planned) // the plan is simulated below: refuse now one the machine cannot hold
+        requireFits(plan.scene, {false, false, false}, availableMemoryBytes());
     io::makeOutputFolder(a.outDir);
     const std::filesystem::path dir(a.outDir);
     const Units u = scene.units;

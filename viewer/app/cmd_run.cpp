@@ -4,6 +4,7 @@
 // in the output); a bad scene exits 2 with nothing written.
 #include "commands.h"
 #include "swarf/app/display.h"
+#include "swarf/app/memory.h"
 #include "swarf/app/progress.h"
 #include "swarf/geometry/reference_cut.h"
 #include "swarf/geometry/run_solids.h"
@@ -14,6 +15,8 @@
 #include "swarf/sim/caution.h"
 #include "swarf/sim/error.h"
 #include "swarf/sim/kernel.h"
+#include "swarf/sim/result_figures.h"
+#include "swarf/sim/run_budget.h"
 #include "swarf/viewer/snapshots.h"
 
 #include <fmt/core.h>
@@ -21,6 +24,7 @@
 #include <algorithm>
 #include <cstdio>
 #include <filesystem>
+#include <optional>
 #include <string>
 
 namespace swarf::app {
@@ -34,40 +38,23 @@ std::string passName(const Scene& s, int pass) {
     return fmt::format("pass {}{}", pass + 1, p.note.empty() ? "" : " (" + p.note + ")");
 }
 
-std::string signedSmall(double mm, Units u) {
-    return (mm >= 0 ? "+" : "−") + formatSmallLength(std::abs(mm), u);
-}
-
 void printSummary(const Scene& s, const CutResult& r) {
-    const Units u = s.units;
+    // The figures as every other place shows them (result_figures.h).
+    const ResultFigures fig = resultFigures(s, r);
     fmt::print("scene: {}\n", s.name);
-    fmt::print("verdict: {}\n", r.withinTolerance ? "IN TOLERANCE" : "OUT OF TOLERANCE");
-    fmt::print("gauge plane z = {}: diameter as cut {}, drawing {} ({})\n",
-               formatLength(r.gaugeZMm, u),
-               formatLength(r.gaugeAsCutDiameterMm, u, Precision::Fine),
-               formatLength(r.gaugeNominalDiameterMm, u, Precision::Fine),
-               signedSmall(r.gaugeAsCutDiameterMm - r.gaugeNominalDiameterMm, u));
-    fmt::print("largest metal left on: {}   largest overcut: {}   (normal to the surface)\n",
-               formatSmallLength(r.maxLeftOnMm, u), formatSmallLength(r.maxOvercutMm, u));
-    if (u == Units::Inch) {
-        // The inch trade gives roughness in microinches (1 µm = 39.37 µin).
-        fmt::print("feed marks of the finishing pass: Rt {:.0f} µin, Ra {:.0f} µin ({:.2f} µm, "
-                   "{:.2f} µm)\n",
-                   r.rtUm * 1000.0 / 25.4, r.raUm * 1000.0 / 25.4, r.rtUm, r.raUm);
-    } else {
-        fmt::print("feed marks of the finishing pass: Rt {:.2f} µm, Ra {:.2f} µm\n", r.rtUm,
-                   r.raUm);
-    }
-    for (const FeatureReport& f : r.features) {
-        const Feature& ft = s.part.features[static_cast<std::size_t>(f.feature)];
+    fmt::print("verdict: {}\n", fig.within ? "IN TOLERANCE" : "OUT OF TOLERANCE");
+    fmt::print("gauge plane z = {}: diameter as cut {}, drawing {} ({})\n", fig.gaugePlane,
+               fig.gaugeAsCut, fig.gaugeDrawing, fig.gaugeError);
+    fmt::print("largest metal left on: {}   largest overcut: {}   (normal to the surface; left on "
+               "to the crests of the feed marks)\n",
+               fig.leftOn, fig.overcut);
+    fmt::print("feed marks of the finishing pass: Rt {}, Ra {}\n", fig.rt, fig.ra);
+    for (const FeatureFigures& f : fig.features) {
         std::string extra;
-        if (ft.kind == FeatureKind::Cone || ft.kind == FeatureKind::Chamfer)
-            extra = fmt::format(", half angle {} (drawing {})", formatDms(f.asCutHalfAngleRad),
-                                formatDms(ft.cone.halfAngleRad));
-        fmt::print("  {} {}: left on {}, overcut {}{}\n", f.withinTolerance ? "ok " : "OUT",
-                   ft.name.empty() ? fmt::format("feature {}", f.feature + 1) : ft.name,
-                   formatSmallLength(f.maxLeftOnMm, u), formatSmallLength(f.maxOvercutMm, u),
-                   extra);
+        if (!f.halfAngle.empty())
+            extra = fmt::format(", half angle {} (drawing {})", f.halfAngle, f.drawnAngle);
+        fmt::print("  {} {}: left on {}, overcut {}{}\n", f.within ? "ok " : "OUT", f.name,
+                   f.leftOn, f.overcut, extra);
     }
     if (r.findings.empty()) {
         fmt::print("findings: none\n");
@@ -98,8 +85,9 @@ void registerRun(CLI::App& app, int& exitCode) {
     cmd->add_flag("--reference", *reference,
                   "Also cut the scene with the solid modeller alone and compare (slow)");
     cmd->callback([scene, outDir, noStep, noPictures, stl, reference, &exitCode] {
-        // Read first: a bad scene writes nothing.
+        // Read first: a bad scene writes nothing; nor does one the machine cannot hold.
         const Scene s = io::readScene(*scene);
+        requireFits(s, {true, !*noStep, !*noPictures}, availableMemoryBytes());
         CutResult result;
         {
             ProgressBar bar;
@@ -107,6 +95,14 @@ void registerRun(CLI::App& app, int& exitCode) {
         }
         std::string stepNote, referenceNote;
         namespace fs = std::filesystem;
+        // The solids first: result.json reports the volumes of exactly the solids written.
+        geometry::RunSolidsOptions so;
+        so.writeSurfaceStl = *stl;
+        std::optional<geometry::RunSolids> solids;
+        if (!*noStep) {
+            solids = geometry::makeRunSolids(s, result, so.fit);
+            geometry::takeSolidVolumes(*solids, result);
+        }
         io::makeOutputFolder(*outDir);
         const std::string json = (fs::path(*outDir) / "result.json").string();
         const std::string csv = (fs::path(*outDir) / "profile.csv").string();
@@ -114,10 +110,9 @@ void registerRun(CLI::App& app, int& exitCode) {
         io::writeProfileCsv(csv, result);
 
         std::vector<std::string> written{json, csv};
-        if (!*noStep) {
-            geometry::RunSolidsOptions so;
-            so.writeSurfaceStl = *stl;
-            const geometry::RunSolidsReport rep = geometry::writeRunSolids(s, result, *outDir, so);
+        if (solids) {
+            const geometry::RunSolidsReport rep =
+                geometry::writeRunSolids(*solids, result, *outDir, so);
             written.insert(written.end(), rep.files.begin(), rep.files.end());
             stepNote =
                 fmt::format("as-cut solid: {} lines, {} arcs, {} B-splines; largest "
@@ -134,13 +129,8 @@ void registerRun(CLI::App& app, int& exitCode) {
         if (*reference) {
             // The solid modeller's own cut, independent of the kernel: slow, for checking.
             const geometry::ReferenceResult ref = geometry::referenceCut(s, result.moves);
-            // The kernel's profile stops past the tool's reach; the reference solid runs to the
-            // jaws. Add the untouched bar between, so both volumes cover the same stick-out.
-            double kernelVolume = result.asCutVolumeMm3;
-            const double zEnd = result.asCut.zAt(result.asCut.radiusMm.size() - 1);
-            const double rBar = 0.5 * s.stock.diameterMm;
-            if (s.stock.jawZMm() > zEnd)
-                kernelVolume += kPi * rBar * rBar * (s.stock.jawZMm() - zEnd);
+            // Both volumes cover the whole stick-out, free end to the jaws' face.
+            const double kernelVolume = result.asCutVolumeMm3;
             const double rel = (ref.volumeMm3 - kernelVolume) / std::max(1e-12, ref.volumeMm3);
             double gaugeDiff = 0;
             if (auto rr = ref.asCut.radiusAtZ(result.gaugeZMm))

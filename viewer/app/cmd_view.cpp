@@ -1,9 +1,11 @@
 // swarf view SCENE: reads the scene, runs the simulation and opens the 3D window.
 #include "commands.h"
 #include "swarf/app/display.h"
+#include "swarf/app/memory.h"
 #include "swarf/io/scene_reader.h"
 #include "swarf/sim/error.h"
 #include "swarf/sim/kernel.h"
+#include "swarf/sim/run_budget.h"
 #include "swarf/viewer/viewer.h"
 
 #include <cstdio>
@@ -52,6 +54,7 @@ void registerView(CLI::App& app, int& exitCode) {
             std::sscanf(args->size.c_str(), "%dx%d", &args->options.widthPx,
                         &args->options.heightPx);
         const Scene scene = io::readScene(args->scene);
+        requireFits(scene, {false, false, true}, availableMemoryBytes());
         const auto result = std::make_shared<const CutResult>(simulate(scene));
         if (!args->screenshot.empty()) {
             viewer::ViewerOptions o = args->options;

@@ -4,6 +4,7 @@
 
 #include <cstdio>
 #include <exception>
+#include <new>
 
 int main(int argc, char** argv) {
     CLI::App app{"swarf: plan, simulate and check cones (tapers) turned on a lathe"};
@@ -29,6 +30,12 @@ int main(int argc, char** argv) {
     } catch (const swarf::Error& e) {
         std::fprintf(stderr, "swarf: %s\n", e.what());
         return e.exitCode();
+    } catch (const std::bad_alloc&) {
+        // The memory estimate (run_budget.h) should have refused the scene before any work;
+        // if the machine still ran short, say what to change, as for a scene refused outright.
+        std::fprintf(stderr, "swarf: sim.profile_step: the machine ran out of memory on this "
+                             "scene; a coarser sim.profile_step or fewer passes need less\n");
+        return swarf::kExitBadInput;
     } catch (const std::exception& e) {
         std::fprintf(stderr, "swarf: internal error: %s\n", e.what());
         return swarf::kExitInternal;

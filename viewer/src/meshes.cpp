@@ -99,41 +99,31 @@ vtkSmartPointer<vtkPolyData> revolve(const Profile& profile, const std::vector<s
     return pd;
 }
 
-vtkSmartPointer<vtkPolyData> feedMarkPatch(const HeightMap& map, const Profile& smooth,
+vtkSmartPointer<vtkPolyData> feedMarkPatch(const FeedMarkSurface& surface, const Profile& smooth,
                                            const Part& part, double zFromMm, double zToMm,
                                            std::size_t maxRows, double fineCentreRad,
-                                           double fineHalfWidthRad, int coarseStride,
-                                           double reliefFactor, double toDisplay) {
+                                           double fineHalfWidthRad, double fineStepRad,
+                                           int coarseStride, double reliefFactor,
+                                           double toDisplay) {
     auto pd = vtkSmartPointer<vtkPolyData>::New();
-    if (map.nz < 2 || map.nPhi < 3 || maxRows < 2)
+    if (surface.empty() || maxRows < 2 || !(zToMm > zFromMm) || !(fineStepRad > 0))
         return pd;
-    // Rows evenly spread in z (the map's own rows are uneven): the first row at or after each
-    // step, so no row is drawn twice.
-    std::vector<int> rows;
-    const double step = (zToMm - zFromMm) / static_cast<double>(maxRows - 1);
-    double next = zFromMm;
-    for (int i = 0; i < map.nz; ++i) {
-        const double z = map.rowZ(i);
-        if (z < zFromMm - 1e-12)
-            continue;
-        if (z > zToMm + 1e-12)
-            break;
-        if (z + 1e-12 >= next) {
-            rows.push_back(i);
-            next = z + step;
-        }
-    }
-    if (rows.size() < 2)
-        return pd;
-    std::vector<int> cols;
-    for (int j = 0; j < map.nPhi; ++j) {
-        const double phi = kTwoPi * j / map.nPhi;
+    std::vector<double> rowZ(maxRows);
+    for (std::size_t i = 0; i < maxRows; ++i)
+        rowZ[i] =
+            zFromMm + (zToMm - zFromMm) * static_cast<double>(i) / static_cast<double>(maxRows - 1);
+    // Columns: a whole number of fine steps round, all of them near where the view looks.
+    const int steps = std::max(3, static_cast<int>(std::lround(kTwoPi / fineStepRad)));
+    std::vector<double> colPhi;
+    for (int j = 0; j < steps; ++j) {
+        const double phi = kTwoPi * j / steps;
         const double off = std::remainder(phi - fineCentreRad, kTwoPi);
         if (std::fabs(off) <= fineHalfWidthRad || j % std::max(coarseStride, 1) == 0)
-            cols.push_back(j);
+            colPhi.push_back(phi);
     }
-    const int nc = static_cast<int>(cols.size());
-    const auto nr = static_cast<vtkIdType>(rows.size());
+    const SurfaceGrid map = surface.grid(rowZ, colPhi);
+    const int nc = map.nPhi;
+    const auto nr = static_cast<vtkIdType>(map.nz);
     auto points = vtkSmartPointer<vtkPoints>::New();
     points->SetNumberOfPoints(nr * nc);
     auto dev = vtkSmartPointer<vtkFloatArray>::New();
@@ -141,16 +131,15 @@ vtkSmartPointer<vtkPolyData> feedMarkPatch(const HeightMap& map, const Profile& 
     dev->SetNumberOfTuples(points->GetNumberOfPoints());
     std::vector<double> cosPhi(static_cast<std::size_t>(nc)), sinPhi(static_cast<std::size_t>(nc));
     for (int c = 0; c < nc; ++c) {
-        const double phi = kTwoPi * cols[static_cast<std::size_t>(c)] / map.nPhi;
-        cosPhi[static_cast<std::size_t>(c)] = std::cos(phi);
-        sinPhi[static_cast<std::size_t>(c)] = std::sin(phi);
+        cosPhi[static_cast<std::size_t>(c)] = std::cos(colPhi[static_cast<std::size_t>(c)]);
+        sinPhi[static_cast<std::size_t>(c)] = std::sin(colPhi[static_cast<std::size_t>(c)]);
     }
     vtkIdType id = 0;
-    for (int i : rows) {
+    for (int i = 0; i < map.nz; ++i) {
         const double z = map.rowZ(i);
         const double base = smooth.radiusMm.empty() ? 0.0 : smooth.radiusAt(z);
         for (int c = 0; c < nc; ++c, ++id) {
-            const double r = map.at(i, cols[static_cast<std::size_t>(c)]);
+            const double r = map.at(i, c);
             // The marks stand above the swept envelope; raise that height only.
             const double shown = smooth.radiusMm.empty() ? r : base + reliefFactor * (r - base);
             points->SetPoint(id, z, shown * cosPhi[static_cast<std::size_t>(c)],

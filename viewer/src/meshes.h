@@ -21,18 +21,19 @@ vtkSmartPointer<vtkPolyData> revolve(const Profile& profile, const std::vector<s
                                      const std::vector<double>* scalars, int nPhi, double phi0,
                                      double phiSpan);
 
-/// The finished surface with its feed marks over [zFromMm, zToMm], the whole way round: rows of
-/// the height map evenly spread in z (at most maxRows); every column of the map within
-/// ±fineHalfWidthRad of φ = fineCentreRad (where the close-up looks), every `coarseStride`-th
-/// elsewhere (the rest of the ring, off the picture until the view is turned).
+/// The finished surface with its feed marks over [zFromMm, zToMm], the whole way round: `rows`
+/// rows evenly spread in z; columns every fineStepRad within ±fineHalfWidthRad of
+/// φ = fineCentreRad (where the close-up looks), every coarseStride-th step elsewhere (the rest
+/// of the ring, off the picture until the view is turned). The grid is filled from the kernel's
+/// surface for this patch only.
 /// Each point stands reliefFactor times its true height above the smooth swept surface `smooth`
 /// (the exact profile), so that marks a micrometre high can be seen; its scalar is the true
 /// signed deviation normal to the drawing in display units (mm times toDisplay), NaN off it.
-vtkSmartPointer<vtkPolyData> feedMarkPatch(const HeightMap& map, const Profile& smooth,
+vtkSmartPointer<vtkPolyData> feedMarkPatch(const FeedMarkSurface& surface, const Profile& smooth,
                                            const Part& part, double zFromMm, double zToMm,
-                                           std::size_t maxRows, double fineCentreRad,
-                                           double fineHalfWidthRad, int coarseStride,
-                                           double reliefFactor, double toDisplay);
+                                           std::size_t rows, double fineCentreRad,
+                                           double fineHalfWidthRad, double fineStepRad,
+                                           int coarseStride, double reliefFactor, double toDisplay);
 
 /// The two faces of a cut-away wedge at φ = a and φ = b: strips between innerMm[i] and
 /// outerMm[i] (radii on the samples of `grid`) where both are numbers and outer > inner.

@@ -2,6 +2,7 @@
 #include "panel_text.h"
 
 #include "swarf/sim/compare.h"
+#include "swarf/sim/result_figures.h"
 
 #include <fmt/format.h>
 
@@ -28,13 +29,23 @@ std::string momentPanelText(const Scene& scene, const CutResult& result, const M
     s += fmt::format("Cross-slide {} ({} dial)   Compound {}   Saddle {}\n",
                      formatLength(m.crossMm, u), diamDial ? "diameter" : "radius",
                      formatLength(m.compoundMm, u), formatLength(m.saddleMm, u));
-    const DeviationExtremes now = deviationExtremes(m.deviationMm);
+    if (m.finished) {
+        // The finished part: the result's own figures, as the terminal, result.json and the
+        // report give them (crests of the feed marks in the left-on).
+        const ResultFigures fig = resultFigures(scene, result);
+        s += fmt::format("Finished: most left on {}, most overcut {} (tolerance +/-{})\n",
+                         fig.leftOn, fig.overcut, formatSmallLength(scale.bandMm, u));
+        s += fmt::format("Feed marks Rt {}, Ra {}\nVerdict: {}", fig.rt, fig.ra,
+                         fig.within ? "within tolerance" : "OUT OF TOLERANCE");
+        return s;
+    }
+    // Part-way: the swept profile now, counted as the verdict counts it (not within a nose
+    // radius of an inside corner, where the nose leaves its fillet).
+    const DeviationExtremes now = deviationExtremes(
+        m.deviationMm, verdictMask(scene.part, m.profile, scene.tool.noseRadiusMm));
     s += fmt::format("Now: most left on {}, most overcut {} (tolerance +/-{})",
                      formatSmallLength(now.leftOnMm, u), formatSmallLength(now.overcutMm, u),
                      formatSmallLength(scale.bandMm, u));
-    if (m.finished)
-        s += fmt::format("\nVerdict: {}",
-                         result.withinTolerance ? "within tolerance" : "OUT OF TOLERANCE");
     return s;
 }
 
@@ -43,12 +54,12 @@ std::string closeUpPanelText(const Scene& scene, const CutResult& result, const 
     const Units u = scene.units;
     std::string s = fmt::format("Close-up at the gauge plane: z {} to {}",
                                 formatLength(close.zFromMm, u), formatLength(close.zToMm, u));
-    const bool marks = moment.finished && result.surface.nz > 1 && result.rtUm > 0;
+    const bool marks = moment.finished && !result.surface.empty() && result.rtUm > 0;
     if (marks)
         s += fmt::format("\nFeed marks {} apart, {} high (Rt), drawn {:g} times as high; "
                          "colours are true to scale",
-                         formatLength(close.feedMmPerRev, u),
-                         formatSmallLength(result.rtUm / 1000, u), close.reliefFactor);
+                         formatLength(close.feedMmPerRev, u), resultFigures(scene, result).rt,
+                         close.reliefFactor);
     else if (moment.passCount == 0)
         s += "\nThe plan has no passes: nothing is cut ('swarf plan' makes them)";
     else if (!moment.finished)

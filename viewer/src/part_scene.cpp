@@ -48,15 +48,12 @@ void PartScene::Impl::updatePart() {
             std::clamp(std::round((z - p.z0Mm) / p.dzMm), 0.0, static_cast<double>(n - 1)));
     };
 
-    const HeightMap& map = result.surface;
-    const bool haveMap = map.nz > 1 && map.nPhi > 2 &&
-                         map.radiusMm.size() == static_cast<std::size_t>(map.nz) * map.nPhi;
     vtkSmartPointer<vtkPolyData> surface;
-    if (closeUp && moment.finished && haveMap) {
+    if (closeUp && moment.finished && !result.surface.empty()) {
         // The finished stretch with its feed marks raised.
-        surface = feedMarkPatch(map, result.asCut, scene.part, close.zFromMm, close.zToMm,
-                                kCloseRows, kCloseLimb, kCloseFineHalfWidth, kCloseCoarseStride,
-                                close.reliefFactor, toDisp);
+        surface = feedMarkPatch(result.surface, result.asCut, scene.part, close.zFromMm,
+                                close.zToMm, kCloseRows, kCloseLimb, kCloseFineHalfWidth,
+                                kCloseFineStep, kCloseCoarseStride, close.reliefFactor, toDisp);
     } else if (closeUp) {
         const auto rows = pickRows(index(close.zFromMm), index(close.zToMm), kCloseRows);
         surface = revolve(p, rows, &devDisplay, kCloseColumns, 0, 2 * kPi);
@@ -250,7 +247,12 @@ void PartScene::setStatus(const std::string& text) {
     impl_->status->SetInput(text.c_str());
 }
 std::string PartScene::panelText() const {
-    return momentPanelText(impl_->scene, impl_->result, impl_->moment, impl_->scale);
+    const char* t = impl_->panel->GetInput();
+    return t ? t : "";
+}
+std::string PartScene::closeUpText() const {
+    const char* t = impl_->closeLabel->GetInput();
+    return t ? t : "";
 }
 const DeviationScale& PartScene::scale() const {
     return impl_->scale;

@@ -68,8 +68,10 @@ class PartScene {
     bool helpVisible() const;
     /// Shows a one-line message in the 3D view (e.g. "saved ..."); empty hides it.
     void setStatus(const std::string& text);
-    /// Text of the panel with the pass, the note and the dial readings.
+    /// Text of the panel with the pass, the note, the dial readings and the figures, as drawn.
     std::string panelText() const;
+    /// Text of the close-up's label (the feed marks' pitch, height and relief), as drawn.
+    std::string closeUpText() const;
     const DeviationScale& scale() const;
     /// The part mesh as handed to VTK, read back along its first meridian: (z, radius) of every
     /// drawn row, mm. For tests: the rendered part's profile.

@@ -34,11 +34,12 @@ inline constexpr double kCutFrom = 45 * kDeg, kCutTo = 135 * kDeg;
 inline constexpr std::size_t kBaseRows = 240, kMaxRows = 1500;
 inline constexpr int kColumns = 72; // round the part (5°): the silhouette is within 0.1 px of round
 // The close-up: rows across the stretch (ten per feed mark: fewer show as facets, more cost
-// frames in software OpenGL, measured in swarf_bench); every column of the 3D map
-// within 20° of where it looks (the picture shows about 15°), every fourth elsewhere.
+// frames in software OpenGL, measured in swarf_bench); a column every 2° within 20° of where it
+// looks (the picture shows about 15°), every 8° elsewhere. The kernel's surface is sampled at
+// exactly these points, whatever the scene's angle_samples.
 inline constexpr std::size_t kCloseRows = 400;
 inline constexpr int kCloseColumns = 120, kCloseCoarseStride = 4;
-inline constexpr double kCloseFineHalfWidth = 20 * kDeg;
+inline constexpr double kCloseFineHalfWidth = 20 * kDeg, kCloseFineStep = 2 * kDeg;
 // Where the close-up looks along the surface: from the operator's side, a little above, square
 // to the axis, so that the marks stand as teeth along the top edge.
 inline const Eigen::Vector3d kCloseDir = Eigen::Vector3d(0, 1.0, 0.35).normalized();
@@ -52,7 +53,7 @@ vtkSmartPointer<vtkActor> makeActor(vtkSmartPointer<vtkPolyDataMapper>& mapper);
 struct PartScene::Impl {
     explicit Impl(std::shared_ptr<const CutResult> r) : held(std::move(r)), result(*held) {}
     Scene scene;
-    // Shared, not copied: the finished part's 3D surface alone is a few hundred MB.
+    // Shared, not copied: the result holds every profile of the plan.
     std::shared_ptr<const CutResult> held;
     const CutResult& result;
     DeviationScale scale;

@@ -63,6 +63,7 @@ SnapshotReport renderSnapshots(const Scene& scene, const CutResult& result,
     part.setTextScale(h);
     // The whole part, oblique, with the cut-away, stock outline, insert and paths.
     shoot(part.main(), w, h, rep.part, [&] { part.view(detail::View::Iso); });
+    rep.partLabel = part.panelText();
 
     // The cone filling the picture: the deviation colours, nothing in front of them.
     detail::Layers close = part.layers();
@@ -79,6 +80,7 @@ SnapshotReport renderSnapshots(const Scene& scene, const CutResult& result,
     // stretch.
     part.setCloseUp(true);
     shoot(part.main(), w, h, rep.marks, [&] { part.view(detail::View::CloseUp); });
+    rep.marksLabel = part.closeUpText();
     shoot(part.section(), w, std::max(64, h / 2), rep.marksSection, [&] { part.resetSection(); });
     part.setCloseUp(false);
 

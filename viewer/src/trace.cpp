@@ -12,6 +12,8 @@ namespace swarf::viewer {
 namespace {
 
 constexpr double kNaN = std::numeric_limits<double>::quiet_NaN();
+// At most this many points along a meridian of the 3D surface before decimation.
+constexpr std::size_t kMeridianRows = 400'000;
 
 // Largest error, in units of its tolerance, of the chord from a to b over the samples between.
 // Returns the sample where it is largest (or a if none is over 1).
@@ -190,16 +192,15 @@ void mainConeExtent(const Scene& scene, const CutResult& result, double& zFromMm
 DeviationTrace deviationTrace(const Scene& scene, const CutResult& result, const MomentView& moment,
                               double zFromMm, double zToMm, std::size_t maxPoints) {
     DeviationTrace all;
-    const HeightMap& map = result.surface;
-    const bool useMap = moment.finished && map.nz > 1 && map.nPhi > 0 &&
-                        map.radiusMm.size() == static_cast<std::size_t>(map.nz) * map.nPhi;
-    if (useMap) {
+    const FeedMarkSurface& surface = result.surface;
+    if (moment.finished && !surface.empty()) {
+        // Along the operator's meridian (φ = 0), at the rows that resolve the marks, at most
+        // kMeridianRows of them (evenly spaced then).
         all.feedMarks = true;
-        for (int i = 0; i < map.nz; ++i) {
-            const double z = map.rowZ(i);
-            if (z < zFromMm || z > zToMm)
-                continue;
-            const double r = map.at(i, 0);
+        const double z0 = std::max(zFromMm, surface.zFromMm());
+        const double z1 = std::min(zToMm, surface.zToMm());
+        for (double z : surface.markRows(z0, z1, kMeridianRows)) {
+            const double r = surface.radiusAt(z, 0.0);
             all.zMm.push_back(z);
             all.nominalMm.push_back(scene.part.nominalRadiusAt(z).value_or(kNaN));
             all.deviationMm.push_back(normalDeviationAt(scene.part, z, r));

@@ -329,6 +329,12 @@ std::vector<Eigen::Vector2d> ViewerSession::drawnSection() const {
     return impl_->part->drawnSection();
 }
 
+std::string ViewerSession::panelText() const {
+    return impl_->part->panelText();
+}
+std::string ViewerSession::closeUpText() const {
+    return impl_->part->closeUpText();
+}
 const DeviationTrace& ViewerSession::sectionTrace() const {
     return impl_->part->sectionTrace();
 }

@@ -89,10 +89,18 @@ std::optional<InsertCode> parseInsertCode(std::string_view code) {
     auto digit = [](char c) { return std::isdigit(static_cast<unsigned char>(c)) != 0; };
     InsertCode out;
     out.shape = s[0];
-    // Size: two digits, whole mm of the edge length (for round inserts, the diameter).
+    // Size: two digits, whole mm of the edge length (for round inserts, the diameter): the
+    // edge itself follows from the inscribed circle the code stands for.
     if (!digit(s[4]) || !digit(s[5]))
         return std::nullopt;
-    out.edgeLengthMm = (s[4] - '0') * 10 + (s[5] - '0');
+    const int size = (s[4] - '0') * 10 + (s[5] - '0');
+    out.edgeLengthMm = size;
+    if (const auto ic = inscribedCircleOfSizeCodeMm(out.shape, size)) {
+        out.inscribedCircleMm = *ic;
+        out.edgeLengthMm = *edgeLengthFromInscribedCircleMm(out.shape, *ic);
+    } else if (out.shape != 'K') {
+        return std::nullopt; // no insert of this shape has that size
+    }
     // Thickness: "T3" is 3.97 mm, "03" 3.18 mm and so on (nominal inch fractions).
     const std::string t = s.substr(6, 2);
     if (t == "01")
@@ -133,6 +141,77 @@ std::optional<InsertCode> parseInsertCode(std::string_view code) {
     return out;
 }
 
+namespace {
+
+double cotDeg(double deg) {
+    return 1.0 / std::tan(deg * std::numbers::pi / 180.0);
+}
+
+} // namespace
+
+const std::vector<double>& standardInscribedCirclesMm() {
+    // The inch series (5/32, 3/16, 7/32, 1/4, 5/16, 3/8, 1/2, 5/8, 3/4, 1, 1¼ in) and the
+    // metric diameters of round inserts.
+    static const std::vector<double> ic = {3.97,  4.76, 5.56, 6.0,   6.35,   7.94, 8.0,
+                                           9.525, 10.0, 12.0, 12.7,  15.875, 16.0, 19.05,
+                                           20.0,  25.0, 25.4, 31.75, 32.0};
+    return ic;
+}
+
+std::optional<double> edgeLengthFromInscribedCircleMm(char shape, double icMm) {
+    const double rho = icMm / 2;
+    switch (std::toupper(static_cast<unsigned char>(shape))) {
+    case 'C': // rhombus of corner ε: ρ (cot(ε/2) + tan(ε/2)) = IC / sin ε
+        return icMm / std::sin(80 * std::numbers::pi / 180);
+    case 'D':
+        return icMm / std::sin(55 * std::numbers::pi / 180);
+    case 'E':
+        return icMm / std::sin(75 * std::numbers::pi / 180);
+    case 'M':
+        return icMm / std::sin(86 * std::numbers::pi / 180);
+    case 'V':
+        return icMm / std::sin(35 * std::numbers::pi / 180);
+    case 'S':
+        return icMm;
+    case 'T':
+        return 2 * rho * cotDeg(30);
+    case 'W': // corners of 80° and 160° in turn
+        return rho * (cotDeg(40) + cotDeg(80));
+    case 'P':
+        return 2 * rho * cotDeg(54);
+    case 'H':
+        return 2 * rho * cotDeg(60);
+    case 'O':
+        return 2 * rho * cotDeg(67.5);
+    case 'R':
+        return icMm;
+    default:
+        return std::nullopt;
+    }
+}
+
+std::optional<double> inscribedCircleOfSizeCodeMm(char shape, int sizeCode) {
+    const bool round = std::toupper(static_cast<unsigned char>(shape)) == 'R';
+    const std::vector<double>& ics = standardInscribedCirclesMm();
+    if (round)
+        for (double ic : ics)
+            if (ic == sizeCode)
+                return ic;
+    for (double ic : ics) {
+        const auto edge = edgeLengthFromInscribedCircleMm(shape, ic);
+        // The inch series (whole 32nds of an inch) for shapes with corners; the metric circles
+        // are round inserts'.
+        const double n32 = ic * 32 / 25.4;
+        const bool inch = std::abs(n32 - std::round(n32)) < 0.02;
+        // The edge to 0.1 mm, as the tables give it (6.35 · √3 = 10.998 is 11.0: code 11),
+        // then its whole millimetres.
+        if (edge && (round || inch) &&
+            static_cast<int>(std::floor(std::round(*edge * 10) / 10 + 1e-9)) == sizeCode)
+            return ic;
+    }
+    return std::nullopt;
+}
+
 double inscribedCircleMm(char shape, double includedRad, double edgeLengthMm) {
     switch (std::toupper(static_cast<unsigned char>(shape))) {
     case 'R':
@@ -140,7 +219,7 @@ double inscribedCircleMm(char shape, double includedRad, double edgeLengthMm) {
     case 'T':
         return edgeLengthMm / std::sqrt(3.0);
     case 'W':
-        return edgeLengthMm * std::sin(includedRad) * 2.0 / 3.0;
+        return 2.0 * edgeLengthMm / (cotDeg(40) + cotDeg(80));
     default:
         if (includedRad >= std::numbers::pi)
             return edgeLengthMm;

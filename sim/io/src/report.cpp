@@ -6,6 +6,7 @@
 #include "swarf/io/output_file.h"
 #include "swarf/sim/caution.h"
 #include "swarf/sim/compare.h"
+#include "swarf/sim/result_figures.h"
 
 #include <fmt/format.h>
 
@@ -51,10 +52,12 @@ std::string reportHtml(const Scene& scene, const CutResult& result,
         h += "<p>Scene file: <code>" + esc(scene.file) + "</code></p>\n";
 
     // Verdict.
-    h += result.withinTolerance ? "<p class=\"ok\"><b>Verdict: within tolerance.</b>"
-                                : "<p class=\"bad\"><b>Verdict: out of tolerance.</b>";
-    h += fmt::format(" Most metal left on: {}; most overcut: {}.</p>\n", small(result.maxLeftOnMm),
-                     small(result.maxOvercutMm));
+    const ResultFigures fig = resultFigures(scene, result);
+    h += fig.within ? "<p class=\"ok\"><b>Verdict: within tolerance.</b>"
+                    : "<p class=\"bad\"><b>Verdict: out of tolerance.</b>";
+    h += fmt::format(" Most metal left on: {} (to the crests of the feed marks); most overcut: "
+                     "{}.</p>\n",
+                     esc(fig.leftOn), esc(fig.overcut));
 
     h += "<div class=\"caution\"><b>Cautions.</b><ul>\n";
     for (const std::string& c : safetyCautions())
@@ -91,35 +94,38 @@ std::string reportHtml(const Scene& scene, const CutResult& result,
     if (scene.setup.spindleRpm)
         row("Spindle", fmt::format("{:.0f} rev/min", *scene.setup.spindleRpm));
     row("Gauge plane",
-        fmt::format("z = {}: drawing {} diameter, as cut {} (difference {})", len(result.gaugeZMm),
-                    len(result.gaugeNominalDiameterMm), len(result.gaugeAsCutDiameterMm),
-                    small(result.gaugeAsCutDiameterMm - result.gaugeNominalDiameterMm)));
-    row("Finish (theoretical)",
-        fmt::format("Rt {:.2f} µm, Ra {:.2f} µm", result.rtUm, result.raUm));
+        fmt::format("z = {}: drawing {} diameter, as cut {} (difference {})", esc(fig.gaugePlane),
+                    esc(fig.gaugeDrawing), esc(fig.gaugeAsCut), esc(fig.gaugeError)));
+    row("Finish (feed marks of the finishing pass)",
+        fmt::format("Rt {}, Ra {}", esc(fig.rt), esc(fig.ra)));
     row("Volumes",
-        fmt::format("stock {:.0f} mm³, as cut {:.0f} mm³, removed {:.0f} mm³",
-                    result.stockVolumeMm3, result.asCutVolumeMm3, result.removedVolumeMm3));
+        fmt::format("stock {:.0f} mm³, as cut {:.0f} mm³, removed {:.0f} mm³ (z = {} to {}, the "
+                    "solids written); left on {:.1f} mm³, overcut {:.1f} mm³ (within the drawing)",
+                    result.stockVolumeMm3, result.asCutVolumeMm3, result.removedVolumeMm3,
+                    len(result.volumeFromZMm), len(result.volumeToZMm), result.leftoverVolumeMm3,
+                    result.overcutVolumeMm3));
     h += "</table>\n";
 
     // Features against the drawing.
     if (!result.features.empty()) {
         h += "<h2>Against the drawing</h2>\n<table><tr><th>Feature</th><th>Tolerance</th>"
              "<th>Most left on</th><th>Most overcut</th><th>As cut</th><th>Result</th></tr>\n";
+        std::size_t k = 0;
         for (const FeatureReport& fr : result.features) {
             if (fr.feature < 0 ||
                 static_cast<std::size_t>(fr.feature) >= scene.part.features.size())
                 continue;
             const Feature& f = scene.part.features[static_cast<std::size_t>(fr.feature)];
+            const FeatureFigures& ff = fig.features[k++];
             std::string asCut = fmt::format("diameter {}", len(fr.asCutDiameterMm));
-            if (f.kind == FeatureKind::Cone || f.kind == FeatureKind::Chamfer)
-                asCut += fmt::format(", half angle {} (drawing {})",
-                                     esc(formatDms(fr.asCutHalfAngleRad)),
-                                     esc(formatDms(f.cone.halfAngleRad)));
+            if (!ff.halfAngle.empty())
+                asCut += fmt::format(", half angle {} (drawing {})", esc(ff.halfAngle),
+                                     esc(ff.drawnAngle));
             h += fmt::format("<tr><td>{} ({})</td><td>&plusmn;{}</td><td class=\"num\">{}</td><td "
                              "class=\"num\">{}</td><td>{}</td><td>{}</td></tr>\n",
-                             esc(f.name), featureKindName(f.kind), len(f.toleranceMm),
-                             small(fr.maxLeftOnMm), small(fr.maxOvercutMm), asCut,
-                             fr.withinTolerance ? "within" : "<b>outside</b>");
+                             esc(ff.name), featureKindName(f.kind), len(f.toleranceMm),
+                             esc(ff.leftOn), esc(ff.overcut), asCut,
+                             ff.within ? "within" : "<b>outside</b>");
         }
         h += "</table>\n";
     }
@@ -131,10 +137,10 @@ std::string reportHtml(const Scene& scene, const CutResult& result,
     } else {
         h += "<table><tr><th>What</th><th>Pass</th><th>Where</th><th>Details</th></tr>\n";
         for (const Finding& f : result.findings)
-            h += fmt::format("<tr><td>{}</td><td>{}</td><td>z = {}</td><td>{}</td></tr>\n",
-                             findingLabel(f.kind),
-                             f.pass >= 0 ? std::to_string(f.pass + 1) : std::string("-"),
-                             len(f.zMm), esc(f.message));
+            h += fmt::format(
+                "<tr><td>{}</td><td>{}</td><td>{}</td><td>{}</td></tr>\n", findingLabel(f.kind),
+                f.pass >= 0 ? std::to_string(f.pass + 1) : std::string("-"),
+                std::isfinite(f.zMm) ? "z = " + len(f.zMm) : std::string("-"), esc(f.message));
         h += "</table>\n";
     }
 
@@ -169,15 +175,21 @@ std::string reportHtml(const Scene& scene, const CutResult& result,
         "<h2>Passes</h2>\n<table><tr><th>#</th><th>Kind</th><th>What to do</th><th>Cross-slide</th>"
         "<th>Compound</th><th>Saddle</th><th>Feed /rev</th><th>After the pass: most left on</th>"
         "<th>most overcut</th><th>Findings</th></tr>\n";
+    const std::vector<bool> mask = verdictMask(scene.part, result.asCut, scene.tool.noseRadiusMm);
     for (std::size_t k = 0; k < scene.plan.passes.size(); ++k) {
         const Pass& p = scene.plan.passes[k];
         auto reading = [&](PassKind moving, double fixed) {
             return p.kind == moving ? len(p.fromMm) + " &rarr; " + len(p.toMm) : len(fixed);
         };
         std::string after = "-", over = "-";
-        if (k < result.afterPass.size()) {
-            const DeviationExtremes e =
-                deviationExtremes(normalDeviation(scene.part, result.nominal, result.afterPass[k]));
+        if (k + 1 == result.afterPass.size()) {
+            // After the last pass: the result's own figures (feed marks' crests included).
+            after = esc(fig.leftOn);
+            over = esc(fig.overcut);
+        } else if (k < result.afterPass.size()) {
+            // Counted as the verdict counts (not within a nose radius of an inside corner).
+            const DeviationExtremes e = deviationExtremes(
+                normalDeviation(scene.part, result.nominal, result.afterPass[k]), mask);
             after = small(e.leftOnMm);
             over = small(e.overcutMm);
         }

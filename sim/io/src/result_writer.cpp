@@ -17,7 +17,8 @@ using nlohmann::ordered_json;
 
 // NaN and infinities become null.
 ordered_json num(double v) {
-    return std::isfinite(v) ? ordered_json(v) : ordered_json(nullptr);
+    // -0 (a negated zero, e.g. no face allowance) is written as 0.
+    return std::isfinite(v) ? ordered_json(v == 0 ? 0.0 : v) : ordered_json(nullptr);
 }
 
 ordered_json point(const Eigen::Vector2d& p) {
@@ -55,18 +56,29 @@ std::string resultJson(const Scene& scene, const CutResult& r) {
                   {"error_mm", num(r.gaugeAsCutDiameterMm - r.gaugeNominalDiameterMm)}};
     j["deviation"] = {{"max_left_on_mm", num(r.maxLeftOnMm)},
                       {"max_overcut_mm", num(r.maxOvercutMm)}};
-    j["volume"] = {{"stock_mm3", num(r.stockVolumeMm3)},
+    const bool drawn = !scene.part.features.empty();
+    j["volume"] = {{"from_z_mm", num(r.volumeFromZMm)},
+                   {"to_z_mm", num(r.volumeToZMm)},
+                   {"stock_mm3", num(r.stockVolumeMm3)},
                    {"as_cut_mm3", num(r.asCutVolumeMm3)},
                    {"removed_mm3", num(r.removedVolumeMm3)},
-                   {"left_on_mm3", num(r.leftoverVolumeMm3)}};
-    j["roughness"] = {{"rt_um", num(r.rtUm)}, {"ra_um", num(r.raUm)}};
+                   {"drawing_from_z_mm", drawn ? num(scene.part.zMinMm()) : num(NAN)},
+                   {"drawing_to_z_mm", drawn ? num(scene.part.zMaxMm()) : num(NAN)},
+                   {"left_on_mm3", num(r.leftoverVolumeMm3)},
+                   {"overcut_mm3", num(r.overcutVolumeMm3)}};
+    j["roughness"] = {{"rt_um", num(r.rtUm)}, {"ra_um", num(r.raUm)}, {"pass", r.finishingPass}};
     ordered_json findings = ordered_json::array();
     for (const Finding& f : r.findings) {
-        findings.push_back({{"kind", findingKindName(f.kind)},
-                            {"pass", f.pass},
-                            {"message", f.message},
-                            {"z_mm", num(f.zMm)},
-                            {"value_mm", num(f.valueMm)}});
+        ordered_json o = {
+            {"kind", findingKindName(f.kind)}, {"pass", f.pass}, {"message", f.message}};
+        // Each figure under its own key and unit; a figure the finding has not is left out.
+        if (std::isfinite(f.zMm))
+            o["z_mm"] = f.zMm;
+        if (std::isfinite(f.valueMm))
+            o["value_mm"] = f.valueMm;
+        if (std::isfinite(f.angleRad))
+            o["angle_deg"] = radToDeg(f.angleRad);
+        findings.push_back(o);
     }
     j["findings"] = findings;
 
@@ -133,11 +145,12 @@ std::string resultJson(const Scene& scene, const CutResult& r) {
         passes.push_back(o);
     }
     j["passes"] = passes;
-    j["profile"] = {
-        {"samples", r.asCut.radiusMm.size()}, {"z0_mm", r.asCut.z0Mm}, {"step_mm", r.asCut.dzMm}};
-    j["surface"] = {{"rows", r.surface.nz},
-                    {"angle_samples", r.surface.nPhi},
-                    {"finest_row_step_mm", r.surface.dzMm}};
+    j["profile"] = {{"samples", r.asCut.radiusMm.size()},
+                    {"z0_mm", num(r.asCut.z0Mm)},
+                    {"step_mm", r.asCut.dzMm}};
+    j["surface"] = {{"marked_moves", r.surface.markedMoveCount()},
+                    {"samples_per_feed", kFeedMarkProfileSamples},
+                    {"angle_samples", scene.sim.angleSamples}};
     j["caution"] = "A simulation of the tool path only: it does not model cutting forces, "
                    "deflection of the work or tool, chatter or tool wear. Check every reading "
                    "on the machine and take a trial cut before trusting a number here.";
@@ -145,8 +158,9 @@ std::string resultJson(const Scene& scene, const CutResult& r) {
 }
 
 std::string profileCsv(const CutResult& r) {
-    std::string out = "z_mm,nominal_radius_mm,as_cut_radius_mm,deviation_mm\n";
-    out.reserve(out.size() + r.asCut.radiusMm.size() * 48);
+    std::string out =
+        "z_mm,nominal_radius_mm,as_cut_radius_mm,deviation_mm,crest_radius_mm,crest_deviation_mm\n";
+    out.reserve(out.size() + r.asCut.radiusMm.size() * 72);
     char buf[128];
     for (std::size_t i = 0; i < r.asCut.radiusMm.size(); ++i) {
         const double n = i < r.nominal.radiusMm.size() ? r.nominal.radiusMm[i] : NAN;
@@ -161,6 +175,14 @@ std::string profileCsv(const CutResult& r) {
         out.append(buf, static_cast<std::size_t>(len));
         if (std::isfinite(d)) {
             len = std::snprintf(buf, sizeof buf, "%.7f", d);
+            out.append(buf, static_cast<std::size_t>(len));
+        }
+        const double c = i < r.crest.radiusMm.size() ? r.crest.radiusMm[i] : r.asCut.radiusMm[i];
+        const double cd = i < r.crestDeviationMm.size() ? r.crestDeviationMm[i] : NAN;
+        len = std::snprintf(buf, sizeof buf, ",%.7f,", c);
+        out.append(buf, static_cast<std::size_t>(len));
+        if (std::isfinite(cd)) {
+            len = std::snprintf(buf, sizeof buf, "%.7f", cd);
             out.append(buf, static_cast<std::size_t>(len));
         }
         out += '\n';

@@ -3,6 +3,7 @@
 
 #include "scene_sections.h"
 #include "swarf/io/did_you_mean.h"
+#include "swarf/sim/cut.h"
 
 #include <cmath>
 #include <fstream>
@@ -87,10 +88,12 @@ PlanningOptions readPlanning(const Fields& root) {
 
 SimOptions readSim(const Fields& root) {
     SimOptions s;
+    s.where = root.where();
     const toml::table* t = root.subtable("sim");
     if (!t)
         return s;
     Fields f(*t, "sim", root.context(), {"profile_step", "angle_samples"});
+    s.where = f.where("profile_step"); // the table itself if the key is absent
     s.profileStepMm = f.length("profile_step", "axial sample spacing").value_or(s.profileStepMm);
     f.require(s.profileStepMm >= 1e-4 && s.profileStepMm <= 1.0, "profile_step",
               "expected from 0.0001 mm to 1 mm");
@@ -110,9 +113,9 @@ Expect readExpect(const Fields& root) {
     e.where = f.where();
     if (auto v = f.choice("verdict", {"in_tolerance", "out_of_tolerance"}))
         e.withinTolerance = *v == "in_tolerance";
-    static const std::vector<std::string> kinds = {"left_on",      "overcut",    "rubbing",
-                                                   "jaw_crash",    "past_stock", "compound_travel",
-                                                   "depth_of_cut", "air_cut"};
+    std::vector<std::string> kinds;
+    for (FindingKind k : allFindingKinds())
+        kinds.emplace_back(findingKindName(k));
     if (const toml::array* a = f.array("findings", "finding kinds")) {
         for (const toml::node& n : *a) {
             const auto* s = n.as_string();

@@ -29,6 +29,10 @@ struct RunSolids {
 RunSolids makeRunSolids(const Scene& scene, const CutResult& result,
                         const ProfileFitOptions& fit = {});
 
+/// Sets the result's volumes to those of the solids (what result.json then reports, so that it
+/// agrees with the STEP files): stock, as cut, removed, left on (leftover) and overcut.
+void takeSolidVolumes(const RunSolids& solids, CutResult& result);
+
 /// Which files writeRunSolids() writes.
 struct RunSolidsOptions {
     ProfileFitOptions fit;
@@ -55,6 +59,11 @@ struct RunSolidsReport {
 /// atomically. outDir must exist. Throws GeometryError if the modeller fails and OutputError
 /// if a file cannot be written.
 RunSolidsReport writeRunSolids(const Scene& scene, const CutResult& result,
+                               const std::string& outDir, const RunSolidsOptions& options = {});
+
+/// The same for solids made already (makeRunSolids with options.fit); `result` gives the
+/// surface for surface.stl.
+RunSolidsReport writeRunSolids(const RunSolids& solids, const CutResult& result,
                                const std::string& outDir, const RunSolidsOptions& options = {});
 
 } // namespace swarf::geometry

@@ -33,14 +33,32 @@ double normalDeviationAt(const Part& part, double zMm, double radiusMm);
 /// the axial ±t).
 double normalBandMm(const Feature& feature);
 
+/// A sharp internal corner of the drawing: radial feature `feature` ends at zMm (its start or its
+/// end) against a neighbour that stands taller there, so the drawing has a wall square to the
+/// axis. interiorAngleRad is the angle between the feature's surface and the wall, inside the
+/// metal's outline: 90° + θ if the feature rises toward the wall, 90° − θ if it falls.
+struct InternalCorner {
+    int feature = -1;
+    double zMm = 0;
+    double radiusMm = 0; ///< the feature's drawn radius at the corner
+    double interiorAngleRad = 0;
+    bool atFeatureEnd = true; ///< the corner is at the feature's end (else its start)
+};
+
+/// The drawing's internal corners, in the order of the features.
+std::vector<InternalCorner> internalCorners(const Part& part);
+
 /// True where sample i of the grid counts toward its feature's verdict (not within one nose
 /// radius of an internal corner).
 std::vector<bool> verdictMask(const Part& part, const Profile& grid, double noseRadiusMm);
 
-/// Per-feature reports: largest left-on and overcut, diameter as cut (cylinder: mean; cone: at
-/// the gauge plane), fitted half angle (least squares over the counted samples) and verdict.
+/// Per-feature reports: largest left-on (from the crests' deviation `crestDeviationMm`, what a
+/// gauge or micrometer touches; the valleys' `deviationMm` if it is empty) and largest overcut
+/// (from the valleys), diameter as cut (cylinder: mean; cone: at the gauge plane, both of the
+/// swept envelope), fitted half angle (least squares over the counted samples) and verdict.
 std::vector<FeatureReport> compareFeatures(const Scene& scene, const Profile& asCut,
                                            const std::vector<double>& deviationMm,
+                                           const std::vector<double>& crestDeviationMm,
                                            const std::vector<bool>& mask);
 
 /// The largest metal left on and the largest overcut among signed deviations (NaN skipped).
@@ -50,7 +68,19 @@ struct DeviationExtremes {
 };
 DeviationExtremes deviationExtremes(const std::vector<double>& deviationMm);
 
+/// The same over the samples the verdict counts (mask from verdictMask, same length).
+DeviationExtremes deviationExtremes(const std::vector<double>& deviationMm,
+                                    const std::vector<bool>& mask);
+
+/// The marked surface's deviation per sample for colouring: the crests' where they stand further
+/// out than the valleys sink in, else the valleys'. Both vectors per sample, NaN off the drawing.
+std::vector<double> markedDeviation(const std::vector<double>& valleysMm,
+                                    const std::vector<double>& crestsMm);
+
 /// Volume of metal left on outside the drawing, mm³: ∫ π (R² − Rn²) where R > Rn.
 double leftoverVolumeMm3(const Profile& nominal, const Profile& asCut);
+
+/// Volume of the drawing's metal cut away, mm³: ∫ π (Rn² − R²) where R < Rn.
+double overcutVolumeMm3(const Profile& nominal, const Profile& asCut);
 
 } // namespace swarf

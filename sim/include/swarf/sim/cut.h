@@ -1,10 +1,14 @@
 #pragma once
 // What the kernel makes of a scene: tool moves, the exact as-cut profile, the 3D surface with
 // feed marks, the comparison with the drawing, and findings. Plain values; mm and radians.
+#include "swarf/sim/feed_marks.h"
 #include "swarf/sim/scene.h"
 
 #include <Eigen/Core>
+#include <limits>
+#include <optional>
 #include <string>
+#include <string_view>
 #include <vector>
 
 namespace swarf {
@@ -34,24 +38,6 @@ struct Profile {
     double volumeMm3() const;
 };
 
-/// The 3D as-cut surface: radius R(z, φ) at row z (zMm[i] if given, else z0 + i·dz) and
-/// φ = 2π j / nPhi. The kernel spaces its rows per region (fine where a feed leaves the final
-/// surface, to resolve the cusps, coarser elsewhere) and fills zMm; z0Mm is then the first row
-/// and dzMm the finest spacing used.
-struct HeightMap {
-    double z0Mm = 0;
-    double dzMm = 0.01;
-    int nz = 0;
-    int nPhi = 0;
-    std::vector<float> radiusMm; ///< radiusMm[i * nPhi + j]
-    std::vector<double> zMm;     ///< z of each row, increasing (nz values), or empty: uniform
-    float at(int i, int j) const { return radiusMm[static_cast<std::size_t>(i) * nPhi + j]; }
-    /// z of row i, mm.
-    double rowZ(int i) const {
-        return zMm.empty() ? z0Mm + i * dzMm : zMm[static_cast<std::size_t>(i)];
-    }
-};
-
 /// Kinds of finding about the cut. These are results, not errors.
 enum class FindingKind {
     LeftOn,         ///< metal left on after the last pass, beyond tolerance
@@ -62,28 +48,38 @@ enum class FindingKind {
     CompoundTravel, ///< a compound reading beyond its travel
     DepthOfCut,     ///< depth of cut beyond the cutting edge length
     AirCut,         ///< the pass cuts nothing
+    CornerFillet,   ///< the nose leaves a fillet in an internal corner the drawing has sharp
+    CoarseFinish,   ///< the finishing feed is more than a nose radius finishes well (f > r/2)
 };
+
+/// Every finding kind, in the order above.
+const std::vector<FindingKind>& allFindingKinds();
 
 /// "left_on", "overcut", ... as written in result.json.
 const char* findingKindName(FindingKind kind);
 
+/// The kind named `name` as result.json spells it ("left_on", ...); empty if none is.
+std::optional<FindingKind> findingKindFromName(std::string_view name);
+
 /// The finding's kind for people: "metal left on", "tool reaches the jaws", ...
 const char* findingLabel(FindingKind kind);
 
-/// One finding, tied to the pass that caused it (−1 if none).
+/// One finding, tied to the pass that caused it (−1 if none). Each figure has its own unit; a
+/// figure the finding does not have is NaN.
 struct Finding {
     FindingKind kind = FindingKind::LeftOn;
     int pass = -1;
     std::string message;
-    double zMm = 0;     ///< where along the axis, if it has a place
-    double valueMm = 0; ///< its size, if it has one
+    double zMm = std::numeric_limits<double>::quiet_NaN();      ///< where along the axis, mm
+    double valueMm = std::numeric_limits<double>::quiet_NaN();  ///< its size as a length, mm
+    double angleRad = std::numeric_limits<double>::quiet_NaN(); ///< its size as an angle, rad
 };
 
 /// The as-cut part against one feature of the drawing.
 struct FeatureReport {
-    int feature = -1;             ///< index into Scene::part.features
-    double maxLeftOnMm = 0;       ///< largest + deviation normal to the surface (≥ 0)
-    double maxOvercutMm = 0;      ///< largest − deviation, as a positive number (≥ 0)
+    int feature = -1;       ///< index into Scene::part.features
+    double maxLeftOnMm = 0; ///< largest metal left on, normal to the surface, crests included (≥ 0)
+    double maxOvercutMm = 0;      ///< largest overcut (valleys below the drawing), positive (≥ 0)
     double asCutDiameterMm = 0;   ///< cylinder: mean diameter; cone: at the gauge plane
     double asCutHalfAngleRad = 0; ///< cone: fitted half angle as cut
     bool withinTolerance = false;
@@ -94,17 +90,25 @@ struct CutResult {
     std::vector<ToolMove> moves;
     Profile stock;                   ///< stock radius on the same samples as asCut
     Profile nominal;                 ///< drawing radius (NaN where the drawing says nothing)
-    Profile asCut;                   ///< exact axisymmetric as-cut profile
+    Profile asCut;                   ///< exact axisymmetric as-cut profile (the marks' valleys)
+    Profile crest;                   ///< the feed marks' crests on the same samples (≥ asCut)
     std::vector<Profile> afterPass;  ///< as-cut profile after each pass
     std::vector<double> deviationMm; ///< signed normal deviation per asCut sample; NaN off-feature
-    HeightMap surface;               ///< 3D surface with feed marks
+    std::vector<double> crestDeviationMm; ///< the same for the crests: what a gauge touches
+    FeedMarkSurface surface;              ///< 3D surface with feed marks R(z, φ)
     std::vector<FeatureReport> features;
     std::vector<Finding> findings;
     bool withinTolerance = false; ///< the verdict
     double gaugeZMm = 0, gaugeNominalDiameterMm = 0, gaugeAsCutDiameterMm = 0;
-    double maxLeftOnMm = 0, maxOvercutMm = 0;
-    double stockVolumeMm3 = 0, asCutVolumeMm3 = 0, removedVolumeMm3 = 0, leftoverVolumeMm3 = 0;
-    double rtUm = 0, raUm = 0; ///< theoretical roughness of the finishing pass
+    double maxLeftOnMm = 0, maxOvercutMm = 0; ///< over all features, as FeatureReport
+    /// Volumes of the bar's stick-out, from its free end to the jaws' face (volumeFromZMm ..
+    /// volumeToZMm): the extent of the stock and as-cut solids swarf writes. Left-on and overcut
+    /// are taken over the drawing's extent (its first feature's start to its last's end).
+    double volumeFromZMm = 0, volumeToZMm = 0;
+    double stockVolumeMm3 = 0, asCutVolumeMm3 = 0, removedVolumeMm3 = 0;
+    double leftoverVolumeMm3 = 0, overcutVolumeMm3 = 0;
+    double rtUm = 0, raUm = 0; ///< roughness of the finishing pass's marks, measured (µm)
+    int finishingPass = -1;    ///< the pass whose marks rtUm and raUm measure (−1: none)
 };
 
 } // namespace swarf

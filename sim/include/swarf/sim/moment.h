@@ -26,7 +26,9 @@ struct MomentView {
     double feedMmPerRev = 0; ///< feed of the pass, mm/rev (0 before the first pass)
     Profile profile;         ///< the as-cut profile at this moment (exact, axisymmetric)
     /// Signed deviation from the drawing per profile sample, mm, normal to the drawn surface:
-    /// + metal left on, − overcut; NaN where the drawing says nothing.
+    /// + metal left on, − overcut; NaN where the drawing says nothing. At the finished part the
+    /// feed marks' crests count where they stand out further than the valleys sink in
+    /// (compare.h, markedDeviation): what the colours show.
     std::vector<double> deviationMm;
     bool finished = false;       ///< true at position N: the part as the plan leaves it
     Eigen::Vector2d tipZX{0, 0}; ///< imaginary tip of the tool now (z, x), mm

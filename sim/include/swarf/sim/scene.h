@@ -202,7 +202,8 @@ struct Expect {
 /// Options for the simulation.
 struct SimOptions {
     double profileStepMm = 0.002; ///< axial sample spacing of the exact profile
-    int angleSamples = 180;       ///< samples around the part for the 3D surface
+    int angleSamples = 180;       ///< samples around the part for surface.stl
+    SourceLoc where;              ///< the profile_step key if given, else the [sim] table or file
 };
 
 /// A whole scene.

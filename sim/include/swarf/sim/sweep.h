@@ -40,8 +40,19 @@ inline double cutRadiusMm(double xMm, double tipHeightMm) {
     return std::sqrt(xp * xp + tipHeightMm * tipHeightMm);
 }
 
-/// The axial sample grid for a scene and its moves: from the stock's free end to past the last
-/// place the tool or the drawing reaches (never past the jaws' face), spaced sim.profileStepMm.
+/// Where the axial samples lie: `count` of them from z0Mm every dzMm.
+struct SampleExtent {
+    double z0Mm = 0, dzMm = 0;
+    std::size_t count = 0;
+};
+
+/// The axial samples for a scene and its moves, without making them: from the stock's free end
+/// to 1 mm past the last place the tool or the drawing reaches (never past the jaws' face),
+/// spaced sim.profileStepMm.
+SampleExtent sampleExtent(const Scene& scene, const ToolOutline& outline,
+                          const std::vector<ToolMove>& moves);
+
+/// The axial sample grid of sampleExtent, radii 0.
 Profile sampleGrid(const Scene& scene, const ToolOutline& outline,
                    const std::vector<ToolMove>& moves);
 

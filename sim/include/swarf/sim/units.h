@@ -74,6 +74,10 @@ std::string formatLengthNumber(double mm, Units u, Precision p = Precision::Norm
 /// A small length (deviation, roughness) for people: "4.2 µm" or "0.17 thou".
 std::string formatSmallLength(double mm, Units u);
 
+/// A roughness figure (Rt, Ra) given in µm, for people: "0.78 µm" in a mm scene; in an inch
+/// scene microinches first, as the inch trade reads them, then µm: "31 µin (0.78 µm)".
+std::string formatRoughness(double um, Units u);
+
 /// An angle as degrees, minutes and seconds: 2°51′51.1″.
 std::string formatDms(double rad, int secondDecimals = 1);
 

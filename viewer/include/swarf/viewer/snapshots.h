@@ -21,6 +21,8 @@ struct SnapshotOptions {
 /// section: see io::ReportPictures, which the report shows) and their size.
 struct SnapshotReport : io::ReportPictures {
     int widthPx = 0, heightPx = 0; ///< size of part, cone and marks; section, chart half as high
+    std::string partLabel;         ///< the panel's text drawn on part.png (figures of the result)
+    std::string marksLabel; ///< the label drawn on marks.png (the feed marks' pitch and height)
     /// All six paths, in the order above.
     std::vector<std::string> files() const {
         return {part, cone, section, chart, marks, marksSection};

@@ -45,7 +45,8 @@ struct DeviationTrace {
 
 /// The deviation line at a moment over [zFromMm, zToMm], with at most about `maxPoints` points
 /// (min/max decimated, see minMaxSamples; 0: every sample). At the finished part it follows the
-/// 3D surface (feed marks) where the result has one, else the moment's profile.
+/// 3D surface (feed marks) along φ = 0 where the result has one, sampled at the rows that
+/// resolve the marks (FeedMarkSurface::markRows, at most 400 000), else the moment's profile.
 DeviationTrace deviationTrace(const Scene& scene, const CutResult& result, const MomentView& moment,
                               double zFromMm, double zToMm, std::size_t maxPoints);
 

@@ -32,8 +32,8 @@ class ViewerSession {
   public:
     /// Builds the window for a scene and its result (the result is copied).
     ViewerSession(const Scene& scene, const CutResult& result, const ViewerOptions& options = {});
-    /// The same, sharing the result instead of copying it (its 3D surface can be hundreds of
-    /// MB). Precondition: result is not null.
+    /// The same, sharing the result instead of copying it (it holds every profile of the
+    /// plan). Precondition: result is not null.
     ViewerSession(const Scene& scene, std::shared_ptr<const CutResult> result,
                   const ViewerOptions& options = {});
     ~ViewerSession();
@@ -60,6 +60,11 @@ class ViewerSession {
     /// The part mesh handed to VTK, read back along one meridian: (z, radius) per drawn row,
     /// mm. Lets tests check what is drawn without looking at pixels.
     std::vector<Eigen::Vector2d> drawnSection() const;
+    /// The panel's text now (top left of the 3D view): pass, readings and, at the finished part,
+    /// the result's figures. For tests: the same text the pictures carry.
+    std::string panelText() const;
+    /// The close-up's label now (pitch and height of the feed marks, relief factor).
+    std::string closeUpText() const;
     /// The deviation line handed to the section view now (its close-up stretch after key c).
     const DeviationTrace& sectionTrace() const;
     /// Number of polygons of the part surface handed to VTK now (what each frame must draw).

@@ -1,12 +1,14 @@
-// The 3D as-cut surface with feed marks (see height_map.h).
-#include "swarf/sim/height_map.h"
+// Benchmark only: the dense height map swarf built before the feed-mark surface (a copy of the
+// old sim/src/height_map.cpp, unchanged but for names), kept so that swarf_bench can measure
+// today's surface against it in one run. Not part of swarf.
+#include "dense_map_reference.h"
 
 #include <algorithm>
 #include <cmath>
 #include <limits>
 #include <thread>
 
-namespace swarf {
+namespace swarf::bench {
 namespace {
 
 constexpr double kInf = std::numeric_limits<double>::infinity();
@@ -34,44 +36,9 @@ double cuspRowSpacingMm(double feedMmPerRev, double cosAlpha) {
     return 0.004 * feedMmPerRev * std::max(cosAlpha, 0.05);
 }
 
-double markedRadiusMm(const ToolOutline& outline, const MoveSweep& s, double f, double h,
-                      double zMm, double phiRad) {
-    const Eigen::Vector2d d = s.centreTo - s.centreFrom;
-    const double len = d.norm();
-    auto xAt = [&](double sPos) {
-        const Eigen::Vector2d p = s.centreFrom + (len > 0 ? sPos / len : 0.0) * d;
-        return outline.lowerEnvelope(zMm - p.x()) + p.y();
-    };
-    if (len <= 1e-12)
-        return cutRadiusMm(xAt(0), h);
-    if (f <= 0)
-        return cutRadiusMm(sweptLowestX(outline, s, zMm), h);
-    // Continuous optimum: where the support point sits over z (monotone along a vertical move).
-    double sStar;
-    const double dzu = d.x() / len;
-    if (std::abs(d.x()) > 1e-12) {
-        sStar = (zMm - s.support.x() - s.centreFrom.x()) / dzu;
-    } else {
-        sStar = d.y() < 0 ? len : 0.0;
-    }
-    const double phiF = f * phiRad / (2.0 * kPi);
-    double x;
-    if (phiF >= len || sStar >= len) {
-        x = xAt(len); // the dwell at the end is the position nearest the optimum
-    } else if (sStar <= phiF) {
-        x = xAt(phiF);
-    } else {
-        const double k = std::floor((sStar - phiF) / f);
-        const double sa = phiF + k * f;
-        const double sb = std::min(sa + f, len);
-        x = std::min(xAt(sa), xAt(sb));
-    }
-    return cutRadiusMm(x, h);
-}
-
-HeightMap buildHeightMap(const Scene& scene, const ToolOutline& outline,
-                         const std::vector<ToolMove>& moves, const ExactSweep& sweep,
-                         const ProgressFn& progress) {
+DenseMap buildDenseMap(const Scene& scene, const ToolOutline& outline,
+                       const std::vector<ToolMove>& moves, const ExactSweep& sweep,
+                       const ProgressFn& progress) {
     const Profile& g = sweep.asCut;
     const std::size_t n = g.radiusMm.size();
     const std::size_t count = sweep.cuts.size();
@@ -88,7 +55,7 @@ HeightMap buildHeightMap(const Scene& scene, const ToolOutline& outline,
         cusp = std::max(cusp, vertical ? 0.0 : cuspBoundMm(moves[k].feedMmPerRev, r, cosA[k]));
     }
 
-    HeightMap map;
+    DenseMap map;
     map.nPhi = std::max(1, scene.sim.angleSamples);
     // Rows: fine where one feed move leaves the final surface on both sides of an interval.
     map.dzMm = g.dzMm;
@@ -201,9 +168,9 @@ HeightMap buildHeightMap(const Scene& scene, const ToolOutline& outline,
     return map;
 }
 
-Roughness measureRoughness(const HeightMap& map, const ToolOutline& outline, const MoveSweep& s,
-                           double h, double zLoMm, double zHiMm) {
-    Roughness out;
+DenseRoughness measureDenseRoughness(const DenseMap& map, const ToolOutline& outline,
+                                     const MoveSweep& s, double h, double zLoMm, double zHiMm) {
+    DenseRoughness out;
     std::vector<int> rows;
     for (int i = 0; i < map.nz; ++i) {
         const double z = map.rowZ(i);
@@ -250,4 +217,4 @@ Roughness measureRoughness(const HeightMap& map, const ToolOutline& outline, con
     return out;
 }
 
-} // namespace swarf
+} // namespace swarf::bench

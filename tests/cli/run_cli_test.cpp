@@ -1,0 +1,127 @@
+// `swarf run`: the terminal summary shows the figures result.json holds, on every scene; a scene
+// it cannot honestly simulate is refused with exit 2 before anything is written.
+#include "swarf/io/scene_reader.h"
+#include "swarf/sim/units.h"
+
+#include <catch2/catch.hpp>
+#include <nlohmann/json.hpp>
+
+#include <algorithm>
+#include <cstdio>
+#include <filesystem>
+#include <fstream>
+#include <regex>
+#include <sstream>
+#include <string>
+#include <sys/wait.h>
+#include <unistd.h>
+#include <vector>
+
+using namespace swarf;
+namespace fs = std::filesystem;
+
+namespace {
+
+struct Run {
+    int exitCode = -1;
+    std::string out, err;
+};
+
+std::string slurp(const fs::path& path) {
+    std::ifstream in(path);
+    std::stringstream ss;
+    ss << in.rdbuf();
+    return ss.str();
+}
+
+// Runs SWARF_BINARY with the arguments; stdout through popen, stderr into a temporary file.
+Run runSwarf(const std::string& args, const std::string& env = "") {
+    const std::string errFile = "run_cli_test." + std::to_string(getpid()) + ".stderr.txt";
+    const std::string cmd = env + " '" + std::string(SWARF_BINARY) + "' " + args + " 2>" + errFile;
+    Run r;
+    FILE* p = popen(cmd.c_str(), "r");
+    REQUIRE(p != nullptr);
+    char buf[4096];
+    std::size_t n;
+    while ((n = std::fread(buf, 1, sizeof buf, p)) > 0)
+        r.out.append(buf, n);
+    const int status = pclose(p);
+    r.exitCode = WIFEXITED(status) ? WEXITSTATUS(status) : -1;
+    r.err = slurp(errFile);
+    std::remove(errFile.c_str());
+    return r;
+}
+
+std::vector<fs::path> sceneFiles() {
+    std::vector<fs::path> files;
+    for (const auto& e : fs::directory_iterator(SWARF_SCENES_DIR))
+        if (e.path().extension() == ".toml")
+            files.push_back(e.path());
+    std::sort(files.begin(), files.end());
+    return files;
+}
+
+bool contains(const std::string& text, const std::string& piece) {
+    return text.find(piece) != std::string::npos;
+}
+
+} // namespace
+
+TEST_CASE("swarf run prints the figures of result.json, on every scene", "[cli][run]") {
+    int checked = 0;
+    for (const fs::path& scene : sceneFiles()) {
+        INFO(scene.filename().string());
+        const fs::path dir = fs::temp_directory_path() / ("swarf-run-cli-" + scene.stem().string());
+        fs::remove_all(dir);
+        const Run r = runSwarf("run '" + scene.string() + "' --out '" + dir.string() +
+                               "' --no-pictures --no-step");
+        INFO(r.out << r.err);
+        REQUIRE(r.exitCode == 0);
+        const nlohmann::json j = nlohmann::json::parse(slurp(dir / "result.json"));
+        const Units u = io::readScene(scene.string()).units;
+        auto small = [&](const char* a, const char* b) {
+            return formatSmallLength(j.at(a).at(b).get<double>(), u);
+        };
+        CHECK(contains(r.out, "largest metal left on: " + small("deviation", "max_left_on_mm")));
+        CHECK(contains(r.out, "largest overcut: " + small("deviation", "max_overcut_mm")));
+        CHECK(contains(r.out, "Rt " + formatRoughness(j["roughness"]["rt_um"].get<double>(), u)));
+        CHECK(contains(r.out, "Ra " + formatRoughness(j["roughness"]["ra_um"].get<double>(), u)));
+        CHECK(contains(r.out, "diameter as cut " +
+                                  formatLength(j["gauge"]["as_cut_diameter_mm"].get<double>(), u,
+                                               Precision::Fine)));
+        CHECK(contains(r.out, j["verdict"] == "in_tolerance" ? "verdict: IN TOLERANCE"
+                                                             : "verdict: OUT OF TOLERANCE"));
+        for (const auto& f : j["features"]) {
+            INFO(f["name"].get<std::string>());
+            CHECK(contains(r.out, f["name"].get<std::string>() + ": left on " +
+                                      formatSmallLength(f["max_left_on_mm"].get<double>(), u) +
+                                      ", overcut " +
+                                      formatSmallLength(f["max_overcut_mm"].get<double>(), u)));
+        }
+        for (const auto& f : j["findings"])
+            CHECK(contains(r.out, f["message"].get<std::string>()));
+        fs::remove_all(dir);
+        ++checked;
+    }
+    CHECK(checked >= 19);
+}
+
+TEST_CASE("swarf run refuses a finishing feed of twice the nose radius", "[cli][run]") {
+    // The demo with its finishing pass fed at 0.8 mm/rev: twice its 0.4 mm nose radius.
+    std::string text = slurp(fs::path(SWARF_SCENES_DIR) / "fixture-arbor.toml");
+    const std::size_t last = text.rfind("\nfeed = 0.05"); // the last pass's (not finish_feed)
+    REQUIRE(last != std::string::npos);
+    text.replace(last, std::string("\nfeed = 0.05").size(), "\nfeed = 0.8");
+    const fs::path scene = fs::temp_directory_path() / "swarf-run-cli-feed-2r.toml";
+    std::ofstream(scene) << text;
+    const fs::path dir = fs::temp_directory_path() / "swarf-run-cli-feed-2r";
+    fs::remove_all(dir);
+    const Run r = runSwarf("run '" + scene.string() + "' --out '" + dir.string() + "'");
+    INFO(r.out << r.err);
+    CHECK(r.exitCode == 2);
+    CHECK(r.out.empty());
+    CHECK(contains(r.err, "plan.pass[4].feed = 0.8"));
+    CHECK(contains(r.err, "twice the nose radius"));
+    CHECK_FALSE(fs::exists(dir)); // nothing written
+    fs::remove(scene);
+}
