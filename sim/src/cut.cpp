@@ -25,6 +25,8 @@ const char* findingKindName(FindingKind kind) {
         return "depth_of_cut";
     case FindingKind::AirCut:
         return "air_cut";
+    case FindingKind::CutBetweenPasses:
+        return "cut_between_passes";
     }
     return "unknown";
 }
@@ -47,6 +49,8 @@ const char* findingLabel(FindingKind kind) {
         return "depth of cut";
     case FindingKind::AirCut:
         return "cuts nothing";
+    case FindingKind::CutBetweenPasses:
+        return "cuts between passes";
     }
     return "?";
 }

@@ -1,9 +1,11 @@
 // The cutting kernel's entry points: profileUpTo and simulate (planMoves is in machine.cpp).
 #include "swarf/sim/kernel.h"
 
+#include "swarf/sim/between_passes.h"
 #include "swarf/sim/compare.h"
 #include "swarf/sim/findings.h"
 #include "swarf/sim/height_map.h"
+#include "swarf/sim/machine.h"
 #include "swarf/sim/sweep.h"
 #include "swarf/sim/tool_outline.h"
 
@@ -117,6 +119,12 @@ CutResult simulate(const Scene& scene, const ProgressFn& progress) {
 
     res.findings = findCutFindings(scene, outline, res.moves, sw, res.nominal, res.features,
                                    res.deviationMm, mask);
+    // The moves between passes should cut nothing (between_passes.h).
+    res.between = betweenPassMoves(scene);
+    for (Finding& f : findCutsBetweenPasses(scene, outline, res.between, sw))
+        res.findings.push_back(std::move(f));
+    std::stable_sort(res.findings.begin(), res.findings.end(),
+                     [](const Finding& a, const Finding& b) { return a.pass < b.pass; });
     report(0.15);
 
     res.surface =

@@ -30,6 +30,9 @@ struct Job {
     DialMode dial = DialMode::Diameter;
     double crossDiv = 0.02, compDiv = 0.02, saddleDiv = 0.1, compTravel = 90, compBacklash = 0.04;
     CompoundScale scale = CompoundScale::FromAxis;
+    // The compound's sense as the reading increases (the lathe's; the planner keeps it).
+    Widens advance = Widens::TowardTailstock;
+    Across across = Across::In;
     PlanningOptions::Placing placing = PlanningOptions::Placing::ZeroOnDiameter;
     PlanningOptions::Roughing roughing = PlanningOptions::Roughing::Compound;
     double maxDepth = 1.0, allowance = 0.1, roughFeed = 0.12, finishFeed = 0.05;
@@ -74,6 +77,8 @@ Scene makeScene(const Job& j) {
     s.tool.edgeLengthMm = mm(j.edge);
     s.tool.hand = j.hand;
     s.setup.compoundScale = j.scale;
+    s.setup.compoundAdvanceToward = j.advance;
+    s.setup.compoundAdvanceAcross = j.across;
     s.setup.compoundReadingRad = j.scale == CompoundScale::FromAxis ? 0.0 : kPi / 2;
     s.setup.compound = Slide{mm(j.compDiv), 100, mm(j.compBacklash), mm(j.compTravel)};
     s.setup.cross = Slide{mm(j.crossDiv), j.dial == DialMode::Diameter ? 100 : 200, 0, mm(150)};
@@ -154,7 +159,7 @@ std::vector<Job> cases() {
         Job j; // 10° flare narrowing toward the chuck: compound advances toward the chuck
         j.name = "10° flare";
         j.stockD = 25, j.stickOut = 50, j.to = 20, j.gaugeZ = 0, j.gaugeD = 24, j.halfAngleDeg = 10;
-        j.tol = 0.05, j.widens = Widens::TowardTailstock;
+        j.tol = 0.05, j.widens = Widens::TowardTailstock, j.advance = Widens::TowardChuck;
         v.push_back(j);
     }
     {
@@ -245,11 +250,12 @@ TEST_CASE("hand-checked readings: 60/20/80 mm cone, r = 0.8, diameter dial", "[p
     //   run-in of r + 0.5 = 1.3 (no compound backlash here): z = 80 + 0.6059715 + 1.3 = 81.9060,
     //   so the saddle is locked at the next 0.1 division up, 82.0.
     //   Tip at compound 0: z = 82.0, x = 30 + 0.25·2 − 0.1753789 = 30.3246211.
-    //   Cross reading (diameter dial): c = 2 (30 − 30.3246211) = −0.6492422 → −0.65 to the
-    //   nearest half division of 0.02.
+    //   Cross reading (diameter dial): c = 2 (30 − 30.3246211) = −0.6492422 → −0.64 to the
+    //   nearest whole division of 0.02 (0.0092 mm on diameter from the exact reading, within
+    //   the ±0.05 tolerance).
     //   Compound from p = (82.0 − 81.9060)/cosθ = 0.0969 → 0.08 (whole division below) to
     //   p = (82.0 − (0 + 0.6059715 − 1.3))/cosθ = 85.2389 → 85.24 (whole division above).
-    //   On the dial: −0.65 is −1 turn + 67.5 divisions (100 divisions of 0.02 a turn).
+    //   On the dial: −0.64 is −1 turn + 68 divisions (100 divisions of 0.02 a turn).
     Job j;
     j.name = "hand check";
     j.stockD = 60, j.stickOut = 120, j.to = 80, j.gaugeZ = 80, j.gaugeD = 60;
@@ -265,12 +271,12 @@ TEST_CASE("hand-checked readings: 60/20/80 mm cone, r = 0.8, diameter dial", "[p
     const Pass& fin = plan.scene.plan.passes.back();
     CHECK(fin.kind == PassKind::Compound);
     CHECK(fin.saddleMm == Approx(82.0)); // derived above
-    CHECK(fin.crossMm == Approx(-0.65)); // derived above
+    CHECK(fin.crossMm == Approx(-0.64)); // derived above
     CHECK(fin.fromMm == Approx(0.08));   // derived above
     CHECK(fin.toMm == Approx(85.24));    // derived above
     const DialSetting d = dialSetting(plan.scene.setup.cross, fin.crossMm);
-    CHECK(d.turns == -1);              // derived above
-    CHECK(d.division == Approx(67.5)); // derived above
+    CHECK(d.turns == -1);            // derived above
+    CHECK(d.division == Approx(68)); // derived above
     // And the kernel agrees it cuts the drawn cone.
     const CutResult r = simulate(plan.scene);
     CHECK(r.findings.empty());

@@ -12,11 +12,11 @@ namespace swarf::io::detail {
 namespace {
 
 const std::vector<std::string_view> kCompoundPassKeys = {"kind", "note", "cross", "saddle",
-                                                         "from", "to",   "feed"};
+                                                         "from", "to",   "feed",  "retract_to"};
 const std::vector<std::string_view> kSaddlePassKeys = {"kind", "note", "cross", "compound",
-                                                       "from", "to",   "feed"};
+                                                       "from", "to",   "feed",  "retract_to"};
 const std::vector<std::string_view> kCrossPassKeys = {"kind", "note", "compound", "saddle",
-                                                      "from", "to",   "feed"};
+                                                      "from", "to",   "feed",     "retract_to"};
 
 std::string fmtNum(double v) {
     char buf[64];
@@ -174,7 +174,7 @@ Setup readSetup(const Fields& root) {
     if (!t)
         root.missing("setup", "a [setup] table with [setup.compound] and [setup.cross]");
     Fields f(*t, "setup", root.context(),
-             {"compound", "cross", "saddle", "spindle_rpm", "approach"});
+             {"compound", "cross", "saddle", "spindle_rpm", "approach", "wind_back"});
     const bool inch = root.context().units == Units::Inch;
     Setup s;
     s.where = f.where();
@@ -184,13 +184,17 @@ Setup readSetup(const Fields& root) {
     }
     auto approach = f.choice("approach", {"in_order", "take_up"});
     s.approach = approach && *approach == "take_up" ? Approach::TakeUp : Approach::InOrder;
+    if (auto w = f.number("wind_back", "turns of a handwheel wound back past a reading")) {
+        f.require(*w > 0 && *w <= 10, "wind_back", "expected more than 0 and at most 10 turns");
+        s.windBackTurns = *w;
+    }
 
     const toml::table* ct = f.subtable("compound");
     if (!ct)
         f.missing("compound", "a [setup.compound] table: the compound's angle and dial");
-    Fields c(
-        *ct, "setup.compound", root.context(),
-        {"angle", "scale", "error", "advance", "per_division", "divisions", "backlash", "travel"});
+    Fields c(*ct, "setup.compound", root.context(),
+             {"angle", "scale", "error", "advance", "across", "per_division", "divisions",
+              "backlash", "travel"});
     s.compoundReadingRad = c.requiredAngle("angle", "the compound angle as read on its scale");
     auto scale = c.choice("scale", {"axis", "cross_slide"});
     s.compoundScale =
@@ -215,6 +219,8 @@ Setup readSetup(const Fields& root) {
         c.missing("advance",
                   "\"chuck\" or \"tailstock\": where the tool goes as the reading grows");
     s.compoundAdvanceToward = *adv == "chuck" ? Widens::TowardChuck : Widens::TowardTailstock;
+    auto across = c.choice("across", {"in", "out"});
+    s.compoundAdvanceAcross = across && *across == "out" ? Across::Out : Across::In;
     readSlide(c, s.compound, inch ? 0.001 * kMmPerInch : 0.02, inch ? 4 * kMmPerInch : 100);
 
     const toml::table* xt = f.subtable("cross");
@@ -259,7 +265,8 @@ Plan readPlan(const Fields& root) {
             throw InputError(locOf(n.source(), root.context().file), path, valueText(n),
                              "expected a table: write passes as [[plan.pass]]");
         Fields any(*pt, path, root.context(),
-                   {"kind", "note", "cross", "compound", "saddle", "from", "to", "feed", "points"});
+                   {"kind", "note", "cross", "compound", "saddle", "from", "to", "feed", "points",
+                    "retract_to"});
         auto kind = any.choice("kind", {"compound", "saddle", "cross", "path"});
         if (!kind)
             any.missing("kind", "\"compound\", \"saddle\", \"cross\" or \"path\"");
@@ -323,6 +330,8 @@ Plan readPlan(const Fields& root) {
                    "expected a reading other than from: the pass must move");
         p.feedMmPerRev = pf.requiredLength("feed", "feed per revolution");
         requirePositive(pf, "feed", p.feedMmPerRev);
+        p.retractToMm = pf.length("retract_to", "the cross-slide reading backed out to after "
+                                                "the pass");
         plan.passes.push_back(std::move(p));
     }
     return plan;

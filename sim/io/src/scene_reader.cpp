@@ -110,9 +110,9 @@ Expect readExpect(const Fields& root) {
     e.where = f.where();
     if (auto v = f.choice("verdict", {"in_tolerance", "out_of_tolerance"}))
         e.withinTolerance = *v == "in_tolerance";
-    static const std::vector<std::string> kinds = {"left_on",      "overcut",    "rubbing",
-                                                   "jaw_crash",    "past_stock", "compound_travel",
-                                                   "depth_of_cut", "air_cut"};
+    static const std::vector<std::string> kinds = {
+        "left_on",         "overcut",      "rubbing", "jaw_crash",         "past_stock",
+        "compound_travel", "depth_of_cut", "air_cut", "cut_between_passes"};
     if (const toml::array* a = f.array("findings", "finding kinds")) {
         for (const toml::node& n : *a) {
             const auto* s = n.as_string();
