@@ -124,10 +124,16 @@ std::vector<Finding> findCutsBetweenPasses(const Scene& scene, const ToolOutline
         f.pass = pass;
         f.zMm = w.zMm;
         f.valueMm = w.depthMm;
+        const std::string fix =
+            m.step == ReturnStep::FeedIn
+                ? "the pass starts in the metal: start it clear (plunge a relief there first, or "
+                  "cut from the other end of the cone)"
+            : m.step == ReturnStep::BackOut
+                ? "the tool ends the pass against metal it cannot back out of"
+                : "back the cross-slide out further before the tool goes back";
         f.message = where + ", " + betweenMoveWords(m) + " cuts " + formatLength(w.depthMm, u) +
                     " into the metal at z = " + formatLength(w.zMm, u) +
-                    ": a move that should cut nothing; back the cross-slide out further, or "
-                    "start the pass clear of the metal";
+                    ", a move that should cut nothing: " + fix;
         if (same == out.end())
             out.push_back(f);
         else if (w.depthMm > same->valueMm)

@@ -144,13 +144,17 @@ Section readingsSection(const Ctx& c) {
         "; saddle: toward the chuck): wind back past it, then forward to it. The readings then "
         "need no backlash correction. Lock the slides that do not move during a pass. Between "
         "passes, back the cross-slide out before the tool goes back: each pass says where to."));
+    bool twoStages = false;
+    for (const PassDisplay& d : c.plan.display)
+        twoStages = twoStages || d.stage == 0;
+    const std::string zero = "the cross-slide reads 0 at Ø" + c.L(c.su.zeroDiameterMm) +
+                             ", the saddle reads 0 with the tip at " + c.L(c.su.zeroZMm) +
+                             " from the datum face.";
     refs.blocks.push_back(paragraph(
-        "Stage A readings count from the first touch-off on the bar (Ø" +
-        c.L(c.sc.stock.diameterMm) +
-        ") and its end face. Stage B readings count from the references: the cross-slide reads 0 "
-        "at Ø" +
-        c.L(c.su.zeroDiameterMm) + ", the saddle reads 0 with the tip at " + c.L(c.su.zeroZMm) +
-        " from the datum face."));
+        twoStages ? "Stage A readings count from the first touch-off on the bar (Ø" +
+                        c.L(c.sc.stock.diameterMm) +
+                        ") and its end face. Stage B readings count from the references: " + zero
+                  : "Readings count from the touch-off: " + zero));
     return refs;
 }
 

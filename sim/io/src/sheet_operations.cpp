@@ -130,6 +130,10 @@ Section operationsSection(const SheetCtx& c) {
     passes.head = {"step",           "pass",         "stage", "moves", "cross-slide " + un,
                    "compound " + un, "saddle " + un, "from",  "to",    "feed " + un + "/rev",
                    "back out to"};
+    // Stages are named only when there are two (straight passes before the references).
+    bool twoStages = false;
+    for (const PassDisplay& d : plan.display)
+        twoStages = twoStages || d.stage == 0;
     int stepNo = 0;
     for (const PlanStep& st : plan.steps) {
         ++stepNo;
@@ -157,9 +161,10 @@ Section operationsSection(const SheetCtx& c) {
                       dialCell(su.saddle, p.saddleMm + sOff, u);
         const std::string there = wayThere(c, between, k);
         const std::string back = backOutAfter(c, between, k);
-        std::string line = std::to_string(stepNo) + ". Pass " + std::to_string(k + 1) + " (stage " +
-                           (d.stage == 0 ? "A" : "B") + "): " + p.note + ". It " +
-                           feedDirectionWords(passFeedDirection(c.sc, p)) + ".";
+        const std::string stage = d.stage == 0 ? "A" : "B";
+        std::string line = std::to_string(stepNo) + ". Pass " + std::to_string(k + 1) +
+                           (twoStages ? " (stage " + stage + ")" : std::string()) + ": " + p.note +
+                           ". It " + feedDirectionWords(passFeedDirection(c.sc, p)) + ".";
         if (!there.empty())
             line += " To the start: " + there + ".";
         line += " Locked: " + locked + ". Wind the " + passKindName(p.kind) + " from " +
@@ -169,7 +174,7 @@ Section operationsSection(const SheetCtx& c) {
             line += " Then back the cross-slide out to " + back + ".";
         numbered.push_back(line);
         passes.rows.push_back({std::to_string(stepNo), std::to_string(k + 1),
-                               d.stage == 0 ? "A" : "B", passKindName(p.kind),
+                               twoStages ? stage : "", passKindName(p.kind),
                                mC ? "moves" : dialCell(su.cross, p.crossMm + cOff, u),
                                mP ? "moves" : dialCell(su.compound, p.compoundMm, u),
                                mS ? "moves" : dialCell(su.saddle, p.saddleMm + sOff, u),
