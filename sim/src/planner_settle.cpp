@@ -76,6 +76,65 @@ Eigen::Vector2d startTip(const Setup& su, const Pass& p) {
     return tipFromTravels(su, crossTravelFromReading(su, c), cp, s);
 }
 
+// Takes pass `at` out of the plan, renumbering the steps that name later passes.
+void erasePass(ConePlan& out, int at) {
+    auto& passes = out.scene.plan.passes;
+    passes.erase(passes.begin() + at);
+    out.display.erase(out.display.begin() + at);
+    for (std::size_t i = 0; i < out.steps.size();) {
+        PlanStep& st = out.steps[i];
+        if (st.kind == PlanStep::Kind::Pass && st.pass == at) {
+            out.steps.erase(out.steps.begin() + static_cast<std::ptrdiff_t>(i));
+            continue;
+        }
+        if (st.kind == PlanStep::Kind::Pass && st.pass > at)
+            --st.pass;
+        ++i;
+    }
+    if (out.finishPass > at)
+        --out.finishPass;
+    for (int& p : out.halfDivisionPasses)
+        if (p > at)
+            --p;
+}
+
+// Cone roughing passes that a relief left with nothing to cut are dropped, and the rest
+// renumbered ("cone roughing pass 2 of 3").
+void dropAirPasses(ConePlan& out) {
+    const Exact e = evaluate(out.scene);
+    const std::vector<ToolMove> moves = planMoves(out.scene);
+    std::vector<double> removed(out.scene.plan.passes.size(), 0.0);
+    for (std::size_t k = 0; k < moves.size() && k < e.sweep.cuts.size(); ++k)
+        if (moves[k].pass >= 0)
+            removed[static_cast<std::size_t>(moves[k].pass)] = std::max(
+                removed[static_cast<std::size_t>(moves[k].pass)], e.sweep.cuts[k].maxRemovedMm);
+    for (int k = static_cast<int>(removed.size()) - 1; k >= 0; --k)
+        if (out.display[static_cast<std::size_t>(k)].coneRough &&
+            out.scene.plan.passes[static_cast<std::size_t>(k)].kind == PassKind::Compound &&
+            removed[static_cast<std::size_t>(k)] < kAirCutMm)
+            erasePass(out, k);
+    const std::string head = "cone roughing pass ";
+    int n = 0, i = 0;
+    for (std::size_t k = 0; k < out.scene.plan.passes.size(); ++k)
+        if (out.display[k].coneRough && out.scene.plan.passes[k].note.rfind(head, 0) == 0 &&
+            out.display[k].setting == 0)
+            ++n;
+    for (std::size_t k = 0; k < out.scene.plan.passes.size(); ++k) {
+        std::string& note = out.scene.plan.passes[k].note;
+        if (!out.display[k].coneRough || note.rfind(head, 0) != 0)
+            continue;
+        if (out.display[k].setting == 0)
+            ++i;
+        const std::size_t rest = note.find(',');
+        note = head + std::to_string(i) + " of " + std::to_string(n) +
+               (rest == std::string::npos ? "" : note.substr(rest));
+    }
+    for (PlanStep& st : out.steps)
+        if (st.kind == PlanStep::Kind::Pass)
+            st.text = out.scene.plan.passes[static_cast<std::size_t>(st.pass)].note;
+    out.roughingPasses = n;
+}
+
 } // namespace
 
 void settleFinishReadings(ConePlan& out, const std::vector<PlanBuilder::FinishReading>& finishes) {
@@ -188,7 +247,18 @@ void reliefWhereBuried(ConePlan& out, const std::string& why) {
         PassDisplay d;
         d.stage = 1;
         insertPass(out, at, r, d);
+        const double depth =
+            (r.toMm - r.fromMm) * crossTravelFromReading(sc.setup, 1.0) - 0.5; // below the bar
+        if (depth > sc.planning.maxDepthMm)
+            out.cautions.push_back(
+                "the relief at the start of the cone passes plunges " +
+                formatLength(depth, sc.units) +
+                " into the bar, deeper than a roughing pass: feed it in slowly. A compound "
+                "winding the other way along the axis would start the passes at the cone's "
+                "other end");
     }
+    if (!reliefs.empty())
+        dropAirPasses(out);
 }
 
 void chooseRetracts(ConePlan& out) {
