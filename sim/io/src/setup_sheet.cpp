@@ -135,7 +135,7 @@ Section compoundSection(const Ctx& c) {
 Section readingsSection(const Ctx& c) {
     Section refs{"References and readings", {}};
     refs.blocks.push_back(paragraph(
-        "Readings are dial readings in " + std::string(unitName(c.u)) +
+        "Readings are dial readings in " + std::string(c.u == Units::Inch ? "inches" : "mm") +
         "; in the table, [n t + d] means n whole turns from zero (negative: back from zero), then "
         "division d on the dial, which wraps every turn. Approach every reading "
         "in its increasing direction (cross-slide: in toward the centre; compound: winding in, "
