@@ -102,6 +102,11 @@ ConePlan planCone(const Scene& scene) {
     Setup& setup = out.scene.setup;
     // The sheet has every reading set before a pass approached from below, taking up backlash.
     setup.approach = Approach::TakeUp;
+    // Wound back far enough to take up the backlash: quarter turns, more if a slide needs it.
+    while (setup.windBackTurns < 10 &&
+           (setup.windBackTurns * turnMm(setup.compound) <= setup.compound.backlashMm ||
+            setup.windBackTurns * turnMm(setup.saddle) <= setup.saddle.backlashMm))
+        setup.windBackTurns += 0.25;
     if (auto other = otherScaleNote(scene.setup, f))
         out.cautions.push_back("as the scene gives it, " + *other + " The plan sets it right.");
     setup.compoundReadingRad = compoundScaleReadingRad(th, setup.compoundScale);

@@ -492,3 +492,14 @@ TEST_CASE("readings go on whole divisions, half a division only when none holds"
         CHECK(simulate(plan.scene).withinTolerance);
     }
 }
+
+TEST_CASE("the plan winds back far enough to take up the backlash", "[planner]") {
+    // derived: a quarter turn of a 0.02 × 100 compound dial is 0.5 mm, less than 0.6 mm of
+    // backlash; half a turn (1.0 mm) takes it up.
+    Job j = cases()[0];
+    j.compBacklash = 0.6;
+    const ConePlan plan = planCone(makeScene(j));
+    REQUIRE(plan.planned);
+    CHECK(plan.scene.setup.windBackTurns == Approx(0.5));
+    CHECK_NOTHROW(plan.scene.validate());
+}
