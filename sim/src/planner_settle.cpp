@@ -154,9 +154,9 @@ void settleFinishReadings(ConePlan& out, const std::vector<PlanBuilder::FinishRe
         auto apply = [&](int which) {
             for (const auto& f : group) {
                 // On the dial as the sheet shows it.
-                const double e = f.exactMm + f.shownOffsetMm;
-                const double lo = std::floor(e / div + 1e-9) * div;
-                const double near = roundToDivision(cross, e);
+                const double shown = f.exactMm + f.shownOffsetMm;
+                const double lo = std::floor(shown / div + 1e-9) * div;
+                const double near = roundToDivision(cross, shown);
                 const double other = std::fabs(near - lo) < 1e-12 ? lo + div : lo;
                 passes[static_cast<std::size_t>(f.pass)].crossMm = (which == 0   ? near
                                                                     : which == 1 ? other

@@ -239,12 +239,12 @@ void Scene::validate() const {
           setup.windBackTurns, "expected more than 0 and at most 10 turns");
     if (setup.approach == Approach::TakeUp) {
         // Winding back less than the backlash would not take it up.
-        for (const auto& [name, sl] :
+        for (const auto& [slideName, sl] :
              {std::pair<const char*, const Slide*>{"compound", &setup.compound},
               {"saddle", &setup.saddle}})
             c.num(setup.windBackTurns * sl->mmPerDivision * sl->divisionsPerTurn > sl->backlashMm,
                   uw, "setup.wind_back", setup.windBackTurns,
-                  std::string("expected a wind-back longer than the ") + name +
+                  std::string("expected a wind-back longer than the ") + slideName +
                       "'s backlash, or it is not taken up");
     }
 
