@@ -29,16 +29,18 @@ const char* findingKindName(FindingKind kind) {
         return "corner_fillet";
     case FindingKind::CoarseFinish:
         return "coarse_finish";
+    case FindingKind::CutBetweenPasses:
+        return "cut_between_passes";
     }
     return "unknown";
 }
 
 const std::vector<FindingKind>& allFindingKinds() {
     static const std::vector<FindingKind> kinds = {
-        FindingKind::LeftOn,      FindingKind::Overcut,   FindingKind::Rubbing,
-        FindingKind::JawCrash,    FindingKind::PastStock, FindingKind::CompoundTravel,
-        FindingKind::DepthOfCut,  FindingKind::AirCut,    FindingKind::CornerFillet,
-        FindingKind::CoarseFinish};
+        FindingKind::LeftOn,       FindingKind::Overcut,         FindingKind::Rubbing,
+        FindingKind::JawCrash,     FindingKind::PastStock,       FindingKind::CompoundTravel,
+        FindingKind::DepthOfCut,   FindingKind::AirCut,          FindingKind::CornerFillet,
+        FindingKind::CoarseFinish, FindingKind::CutBetweenPasses};
     return kinds;
 }
 
@@ -71,6 +73,8 @@ const char* findingLabel(FindingKind kind) {
         return "nose fillet in a corner";
     case FindingKind::CoarseFinish:
         return "coarse finishing feed";
+    case FindingKind::CutBetweenPasses:
+        return "cuts between passes";
     }
     return "?";
 }

@@ -1,8 +1,10 @@
 // The cutting kernel's entry points: profileUpTo and simulate (planMoves is in machine.cpp).
 #include "swarf/sim/kernel.h"
 
+#include "swarf/sim/between_passes.h"
 #include "swarf/sim/compare.h"
 #include "swarf/sim/findings.h"
+#include "swarf/sim/machine.h"
 #include "swarf/sim/surface_roughness.h"
 #include "swarf/sim/sweep.h"
 #include "swarf/sim/tool_outline.h"
@@ -176,6 +178,12 @@ CutResult simulate(const Scene& scene, const ProgressFn& progress) {
                                    res.deviationMm, res.crestDeviationMm, mask);
     for (Finding& f : cornerFilletFindings(scene, res.asCut, sw.finalMove, res.moves, res.features))
         res.findings.push_back(std::move(f));
+    // The moves between passes should cut nothing (between_passes.h).
+    res.between = betweenPassMoves(scene);
+    for (Finding& f : findCutsBetweenPasses(scene, outline, res.between, sw))
+        res.findings.push_back(std::move(f));
+    std::stable_sort(res.findings.begin(), res.findings.end(),
+                     [](const Finding& a, const Finding& b) { return a.pass < b.pass; });
     report(0.80);
 
     int fm = -1;

@@ -1,8 +1,8 @@
 // Planning a cone: references, straight-turning passes, cone roughing and finishing passes.
 //
 // Geometry (derived from the machine model in scenes/README.md): with the compound at the cone's
-// half angle θ, advancing toward the tailstock when the cone widens toward the chuck (and the
-// other way round), winding the compound moves the imaginary tip parallel to the cone line. With
+// half angle θ and its sense (as the scene gives it) matching the way the cone widens
+// (compound_sense.h), winding the compound moves the imaginary tip parallel to the cone line. With
 // the saddle locked at s and the cross-slide at c, the tip line passes through the point
 // (zeroZ + s, zeroD/2 − k c), so c = (zeroD/2 − X(zeroZ + s)) / k, where X(z) is the wanted tip
 // line: the cone radius, plus the nose-radius offset (references R1, taken from the insert
@@ -23,7 +23,7 @@ PlanBuilder::PlanBuilder(const Scene& scene, ConePlan& out, const Feature& featu
     th_ = cone_.halfAngleRad;
     g_ = cone_.growthSign();
     lead_ = scene.tool.hand == Hand::L ? -1.0 : 1.0;
-    a_ = -g_;
+    a_ = scene.setup.compoundAdvanceToward == Widens::TowardChuck ? 1.0 : -1.0;
     k_ = scene.setup.crossDial == DialMode::Diameter ? 0.5 : 1.0;
     rs_ = scene.stock.diameterMm / 2.0;
     z0_ = scene.stock.freeEndZMm();
@@ -130,7 +130,7 @@ void PlanBuilder::addPass(Pass pass, PassDisplay display) {
 }
 
 void PlanBuilder::turnCylinder(double radiusMm, double zEndMm, bool endAtShoulder,
-                               const std::string& what, int stage) {
+                               const std::string& what, int stage, int featureIndex) {
     const Slide& cross = sc_.setup.cross;
     const Slide& saddle = sc_.setup.saddle;
     const double top = std::min(rs_, currentR(zEndMm));
@@ -157,7 +157,10 @@ void PlanBuilder::turnCylinder(double radiusMm, double zEndMm, bool endAtShoulde
                                 : radiusMm + allowance + roughDepth * (n - 1 - i) / n;
         Pass p;
         p.kind = PassKind::Saddle;
-        p.crossMm = roundToDivision(cross, crossFor(x), 2);
+        // Whole divisions as the person reads the dial in this stage (stage A counts from the
+        // bar, the scene from the references: they differ by the stage's offset).
+        const double off = stage == 0 ? out_.stage0CrossOffsetMm : 0.0;
+        p.crossMm = roundToDivision(cross, crossFor(x) + off) - off;
         p.compoundMm = 0;
         p.fromMm = sFrom;
         p.toMm = sTo;
@@ -168,6 +171,9 @@ void PlanBuilder::turnCylinder(double radiusMm, double zEndMm, bool endAtShoulde
         PassDisplay d;
         d.stage = stage;
         addPass(p, d);
+        if (finish && featureIndex >= 0)
+            finishes_.push_back({static_cast<int>(out_.scene.plan.passes.size()) - 1, crossFor(x),
+                                 featureIndex, off});
     }
     turned_.push_back({zEndMm, radiusMm});
 }
@@ -241,7 +247,8 @@ bool PlanBuilder::compoundPass(double normalLeftMm, bool finish, const std::stri
         Pass p;
         p.kind = PassKind::Compound;
         p.saddleMm = st.saddleMm;
-        p.crossMm = roundToDivision(sc_.setup.cross, crossFor(tipLine(base, normalLeftMm)), 2);
+        const double exact = crossFor(tipLine(base, normalLeftMm));
+        p.crossMm = roundToDivision(sc_.setup.cross, exact);
         p.fromMm = pFrom;
         p.toMm = pTo;
         p.feedMmPerRev = finish ? sc_.planning.finishFeedMmPerRev : sc_.planning.roughFeedMmPerRev;
@@ -258,6 +265,9 @@ bool PlanBuilder::compoundPass(double normalLeftMm, bool finish, const std::stri
         d.coneRough = !finish;
         d.setting = static_cast<int>(k);
         addPass(p, d);
+        if (finish)
+            finishes_.push_back(
+                {static_cast<int>(out_.scene.plan.passes.size()) - 1, exact, featureIndex_});
         any = true;
     }
     return any;
@@ -280,7 +290,7 @@ void PlanBuilder::saddleSteps() {
     int made = 0;
     for (int j = 1; j < n; ++j) {
         const double x = top - (top - bottom) * j / n;
-        const double xSet = roundToDivision(sc_.setup.cross, crossFor(x), 2);
+        const double xSet = roundToDivision(sc_.setup.cross, crossFor(x));
         const double xTip = zeroD_ / 2.0 - k_ * xSet;
         // Where the tip line for the allowance reaches this radius.
         const double zCorner = cone_.gaugeZMm + (xTip - (cone_.gaugeDiameterMm / 2.0 + noseRadial_ +

@@ -10,6 +10,19 @@
 
 namespace swarf::detail {
 
+/// The shop's steps in words (planner_steps.cpp): face to length; tool on centre height; measure
+/// the bar (and, with `touchOff`, touch off on it: crossK is ½ for a diameter dial, 1 for
+/// radius); set the compound (after fillIndicator).
+std::string faceText(const Scene& sc);
+std::string centreHeightText(const Scene& sc);
+std::string measureBarText(const Scene& sc, double crossK, bool touchOff);
+void fillIndicator(ConePlan& out, const Scene& sc);
+std::string setCompoundText(const ConePlan& out, const Scene& sc);
+
+/// Fills the checks of a plan (check plane and diameters, rolls, sine bar, roughness) for the
+/// feature being planned (planner_checks.cpp).
+void fillChecks(ConePlan& out, const Scene& sc, const Feature& f);
+
 /// Builds the passes of one cone plan into a ConePlan. Lengths mm, angles rad.
 class PlanBuilder {
   public:
@@ -20,9 +33,10 @@ class PlanBuilder {
         zeroD_ = zeroDiameterMm;
         zeroZ_ = zeroZMm;
     }
-    /// Straight-turning passes (saddle) from the bar's free end to zEndMm at radiusMm.
+    /// Straight-turning passes (saddle) from the bar's free end to zEndMm at radiusMm; the
+    /// finishing pass is recorded against featureIndex (−1: none, e.g. a reference diameter).
     void turnCylinder(double radiusMm, double zEndMm, bool endAtShoulder, const std::string& what,
-                      int stage);
+                      int stage, int featureIndex = -1);
     /// Splits the compound's run into saddle settings that its travel can reach.
     void planSettings();
     /// One compound pass at normalLeftMm outside the cone (0: finishing), in every setting.
@@ -49,6 +63,18 @@ class PlanBuilder {
     double heightCorrMm() const { return heightCorr_; }
     double growth() const { return g_; }
     double crossK() const { return k_; }
+    /// The cone's index in the drawing, for its finishing readings.
+    void setFeatureIndex(int index) { featureIndex_ = index; }
+
+    /// A finishing pass's cross-slide reading before rounding to the dial, and the feature whose
+    /// tolerance it holds.
+    struct FinishReading {
+        int pass = -1;
+        double exactMm = 0;
+        int feature = -1;
+        double shownOffsetMm = 0; ///< added to the reading as the sheet shows it (stage A)
+    };
+    const std::vector<FinishReading>& finishReadings() const { return finishes_; }
 
   private:
     struct Turned {
@@ -69,8 +95,22 @@ class PlanBuilder {
            r_ = 0;
     double noseRadial_ = 0, tipAheadZ_ = 0, heightCorr_ = 0;
     double zeroD_ = 0, zeroZ_ = 0;
+    int featureIndex_ = -1;
+    std::vector<FinishReading> finishes_;
     std::vector<Turned> turned_;
     std::vector<Setting> settings_;
 };
+
+/// Keeps the finishing readings on whole divisions where the simulated plan holds each feature's
+/// tolerance; tries the other whole division, then half a division (said in the cautions).
+void settleFinishReadings(ConePlan& out, const std::vector<PlanBuilder::FinishReading>& finishes);
+
+/// Where compound passes would start in metal, a plunge with the cross-slide down to the deepest
+/// of them first, so that each starts in the groove it leaves; `why` says why in the note.
+void reliefWhereBuried(ConePlan& out, const std::string& why);
+
+/// Each pass's retract_to: whole turns of the cross-slide out, as few as keep the way back to
+/// the next start clear of the metal.
+void chooseRetracts(ConePlan& out);
 
 } // namespace swarf::detail

@@ -1,11 +1,10 @@
 // planCone: choose the references, order the operations, plan the passes, work out the checks.
 #include "planner_build.h"
 
+#include "swarf/sim/compound_sense.h"
 #include "swarf/sim/compound_setting.h"
+#include "swarf/sim/machine.h"
 #include "swarf/sim/nose_offset.h"
-#include "swarf/sim/roll_check.h"
-#include "swarf/sim/roughness.h"
-#include "swarf/sim/sine_bar.h"
 
 #include <algorithm>
 #include <cmath>
@@ -37,107 +36,26 @@ const Feature* coneToPlan(const Part& part, int& index) {
     return f;
 }
 
-// A roll diameter about a fifth of the cone's length, from sizes commonly kept.
-double chooseRollMm(double coneLengthMm, Units u) {
-    const double mm[] = {1, 1.5, 2, 3, 4, 5, 6, 8, 10, 12, 16, 20, 25};
-    const double in[] = {0.0625, 0.125, 0.1875, 0.25, 0.375, 0.5, 0.75, 1.0};
-    double best = u == Units::Inch ? in[0] * kMmPerInch : mm[0];
-    if (u == Units::Inch) {
-        for (double d : in)
-            if (d * kMmPerInch <= 0.2 * coneLengthMm)
-                best = d * kMmPerInch;
-    } else {
-        for (double d : mm)
-            if (d <= 0.2 * coneLengthMm)
-                best = d;
-    }
-    return best;
-}
-
-// A length rounded down to a whole mm, or a tenth of an inch.
-double roundStackMm(double mm, Units u) {
-    const double q = u == Units::Inch ? 0.1 * kMmPerInch : 1.0;
-    return std::max(0.0, std::floor(mm / q + 1e-9) * q);
-}
-
-void fillChecks(ConePlan& out, const Scene& sc, const Feature& f) {
-    const Cone& cone = f.cone;
-    const double th = cone.halfAngleRad;
-    const double allowance = sc.planning.finishAllowanceMm;
-    const Units u = sc.units;
-    const double len = f.zEndMm - f.zStartMm;
-    // Diameter at a reference plane: the gauge plane, kept a little inside the cone.
-    const double inset = std::min(1.0, len / 4.0);
-    out.checkZMm = std::clamp(cone.gaugeZMm, f.zStartMm + inset, f.zEndMm - inset);
-    out.checkDiameterFinishedMm = cone.diameterAt(out.checkZMm);
-    out.checkDiameterRoughMm = out.checkDiameterFinishedMm + 2.0 * allowance / std::cos(th);
-
-    // Over two rolls, the cone standing on its small end.
-    const double g = cone.growthSign();
-    const double zSmall = g > 0 ? f.zStartMm : f.zEndMm;
-    const double d =
-        sc.planning.rollDiameterMm > 0 ? sc.planning.rollDiameterMm : chooseRollMm(len, u);
-    const double stack1 = roundStackMm(0.2 * len - d / 2.0, u);
-    const double stack2 =
-        std::max(stack1 + (u == Units::Inch ? 2.54 : 1.0), roundStackMm(0.75 * len - d / 2.0, u));
-    const RollReadings rr = rollReadingsForCone(cone.diameterAt(zSmall), th, d, stack1, stack2);
-    out.rolls.rollDiameterMm = d;
-    out.rolls.height1Mm = rr.centreHeight1Mm;
-    out.rolls.height2Mm = rr.centreHeight2Mm;
-    out.rolls.z1Mm = zSmall + g * rr.centreHeight1Mm;
-    out.rolls.z2Mm = zSmall + g * rr.centreHeight2Mm;
-    out.rolls.reading1Mm = rr.reading1Mm;
-    out.rolls.reading2Mm = rr.reading2Mm;
-    out.rolls.roughExtraMm = 2.0 * allowance / std::cos(th);
-
-    // Sine bar that sets the compound at θ from the spindle axis.
-    const auto bars = commonSineBars();
-    const std::string want = u == Units::Inch ? "5 in" : "100 mm";
-    SineBar bar = bars.front();
-    for (const SineBar& b : bars)
-        if (b.name == want)
-            bar = b;
-    out.sineBar.barLengthMm = bar.lengthMm;
-    out.sineBar.angleRad = th;
-    out.sineBar.stackMm = sineBarStackMm(bar.lengthMm, th);
-    GaugeBlockSet set = u == Units::Inch ? commonInchBlockSet() : commonMetricBlockSet();
-    if (!sc.gaugeBlocksMm.empty()) {
-        set.name = "the scene's gauge blocks";
-        set.sizes.clear();
-        for (double b : sc.gaugeBlocksMm)
-            set.sizes.push_back(fromMm(b, u));
-        set.units = u;
-    }
-    const GaugeStack gs = combineGaugeBlocks(out.sineBar.stackMm, set);
-    if (gs.found) {
-        for (double b : gs.blocks)
-            out.sineBar.blocksMm.push_back(toMm(b, set.units));
-    } else {
-        // Too short a stack to build (small angles): raise both rolls on stacks that differ by it.
-        const double step = u == Units::Inch ? 0.5 * kMmPerInch : 10.0;
-        for (int i = 1; i <= 6 && out.sineBar.blocksMm.empty(); ++i) {
-            const GaugeStack lo = combineGaugeBlocks(i * step, set);
-            const GaugeStack hi = combineGaugeBlocks(i * step + out.sineBar.stackMm, set);
-            if (!lo.found || !hi.found)
-                continue;
-            bool shared = false; // each block of the set exists once
-            for (double a : lo.blocks)
-                for (double c : hi.blocks)
-                    shared = shared || std::fabs(a - c) < 1e-9;
-            if (shared)
-                continue;
-            for (double b : hi.blocks)
-                out.sineBar.blocksMm.push_back(toMm(b, set.units));
-            for (double b : lo.blocks)
-                out.sineBar.baseBlocksMm.push_back(toMm(b, set.units));
+// The cone's finishing pass nearest the check plane: its reading, and where its line pivots.
+void noteFinishPass(ConePlan& out) {
+    const auto& passes = out.scene.plan.passes;
+    const Setup& su = out.scene.setup;
+    double best = 1e300;
+    for (std::size_t k = 0; k < passes.size(); ++k) {
+        if (!out.display[k].coneFinish)
+            continue;
+        const Pass& p = passes[k];
+        const double zFrom = tipFromTravels(su, 0, p.fromMm, p.saddleMm).x();
+        const double zTo = tipFromTravels(su, 0, p.toMm, p.saddleMm).x();
+        const double d = out.checkZMm < std::min(zFrom, zTo)   ? std::min(zFrom, zTo) - out.checkZMm
+                         : out.checkZMm > std::max(zFrom, zTo) ? out.checkZMm - std::max(zFrom, zTo)
+                                                               : 0.0;
+        if (d < best) {
+            best = d;
+            out.finishPass = static_cast<int>(k);
+            out.finishCrossMm = p.crossMm;
+            out.finishPivotZMm = tipFromTravels(su, 0, 0, p.saddleMm).x();
         }
-    }
-
-    // Theoretical roughness of the finishing pass (references R2).
-    const double feed = sc.planning.finishFeedMmPerRev, r = sc.tool.noseRadiusMm;
-    if (feed > 0 && feed < 2.0 * r) {
-        out.rtMm = rtExactMm(feed, r);
-        out.raMm = raExactMm(feed, r);
     }
 }
 
@@ -174,12 +92,28 @@ ConePlan planCone(const Scene& scene) {
         return out;
     }
 
+    // The compound as the scene describes it: its sense is the lathe's, never rewritten.
+    const CompoundFit fit = compoundFitForCone(scene.setup, scene.tool, cone);
+    if (!fit.parallel) {
+        out.problems.push_back("the compound cannot cut this cone: " + fit.message +
+                               " Nothing was planned.");
+        return out;
+    }
     Setup& setup = out.scene.setup;
     // The sheet has every reading set before a pass approached from below, taking up backlash.
     setup.approach = Approach::TakeUp;
+    // Wound back far enough to take up the backlash: quarter turns, more if a slide needs it.
+    while (setup.windBackTurns < 10 &&
+           (setup.windBackTurns * turnMm(setup.compound) <= setup.compound.backlashMm ||
+            setup.windBackTurns * turnMm(setup.saddle) <= setup.saddle.backlashMm))
+        setup.windBackTurns += 0.25;
+    if (auto other = otherScaleNote(scene.setup, f))
+        out.cautions.push_back("as the scene gives it, " + *other + " The plan sets it right.");
     setup.compoundReadingRad = compoundScaleReadingRad(th, setup.compoundScale);
-    setup.compoundAdvanceToward = g > 0 ? Widens::TowardTailstock : Widens::TowardChuck;
     out.compoundReadingRad = setup.compoundReadingRad;
+    out.trailingEdge = fit.trailingEdge;
+    if (fit.trailingEdge)
+        out.cautions.push_back("the cone is cut with the trailing edge: " + fit.message);
 
     const TipSide side = scene.tool.hand == Hand::L ? TipSide::TailstockSide : TipSide::ChuckSide;
     const NoseOffsets no = noseRadiusOffsets(scene.tool.noseRadiusMm, th, cone.widens, side);
@@ -187,6 +121,7 @@ ConePlan planCone(const Scene& scene) {
     out.noseOffsetAxialMm = no.zShiftSign * no.dzMm;
 
     detail::PlanBuilder b(scene, out, f);
+    b.setFeatureIndex(index);
     out.noseOffsetRadialMm = b.noseRadialMm();
     const double stockD = scene.stock.diameterMm;
     const double z0 = scene.stock.freeEndZMm();
@@ -266,32 +201,24 @@ ConePlan planCone(const Scene& scene) {
     out.stage0CrossOffsetMm = (stockD - setup.zeroDiameterMm) / (2.0 * b.crossK());
     out.stage0SaddleOffsetMm = setup.zeroZMm - z0;
 
-    // 1. The compound.
-    step(out, PlanStep::Kind::SetCompound,
-         std::string("Swing the compound to ") + formatDms(setup.compoundReadingRad, 0) +
-             (setup.compoundScale == CompoundScale::FromAxis
-                  ? " on its scale (read from the spindle axis)"
-                  : " on its scale (read from the cross-slide)") +
-             ", so that winding it in moves the tool toward the " +
-             (g > 0 ? "tailstock" : "chuck") + " and in toward the axis: half angle θ = " +
-             formatDms(th, 1) + ". Set it exactly with the sine bar (see the checks), lock it.");
-    if (z0 < -1e-9)
-        out.cautions.push_back("the bar stands " + L(-z0) +
-                               " beyond the datum face: face it to length first (not planned)");
-
-    // 2. Touch off on the bar and its end.
+    // The order of the shop: the datum face, centre height, the bar measured (and touched off
+    // on, when straight passes come first), the compound set, then the passes.
+    detail::fillChecks(out, scene, f);
+    detail::fillIndicator(out, scene);
+    step(out, PlanStep::Kind::Face, detail::faceText(scene));
+    step(out, PlanStep::Kind::CentreHeight, detail::centreHeightText(scene));
     const bool stage0 =
         !cylinders.empty() || placing == PlanningOptions::Placing::ReferenceShoulder;
-    step(out, PlanStep::Kind::TouchOff,
-         "With the compound at 0: touch the tool on the bar (Ø" + L(stockD) +
-             ", measure it) and zero the cross-slide dial; touch the end face and zero the saddle "
-             "dial. Approach every reading from below (wind back past it, then forward to it).");
+    step(out, PlanStep::Kind::TouchOff, detail::measureBarText(scene, b.crossK(), stage0));
+    if (!stage0)
+        step(out, PlanStep::Kind::SetCompound, detail::setCompoundText(out, scene));
 
     for (const Feature* c : cylinders) {
         const auto after = scene.part.nominalRadiusAt(c->zEndMm + 0.01);
         const bool shoulder = after && *after > c->diameterMm / 2.0 + 1e-6;
         b.turnCylinder(c->diameterMm / 2.0, c->zEndMm, shoulder,
-                       "turn '" + c->name + "' to Ø" + L(c->diameterMm), 0);
+                       "turn '" + c->name + "' to Ø" + L(c->diameterMm), 0,
+                       static_cast<int>(c - scene.part.features.data()));
     }
     if (placing == PlanningOptions::Placing::ReferenceShoulder) {
         b.turnCylinder(out.referenceDiameterMm / 2.0, out.referenceZMm, true,
@@ -299,8 +226,10 @@ ConePlan planCone(const Scene& scene) {
                            " up to a shoulder at " + L(out.referenceZMm),
                        0);
         step(out, PlanStep::Kind::Measure,
-             "Measure the reference diameter with a micrometer: Ø" + L(out.referenceDiameterMm) +
-                 ". Check the shoulder stands " + L(out.referenceZMm) + " from the datum face.");
+             "Stop the spindle. Measure the reference diameter with a micrometer: Ø" +
+                 L(out.referenceDiameterMm) + ". Check the shoulder stands " + L(out.referenceZMm) +
+                 " from the datum face.");
+        step(out, PlanStep::Kind::SetCompound, detail::setCompoundText(out, scene));
         step(out, PlanStep::Kind::TouchOff,
              "Work from the reference: touch the tool on the reference diameter and set the "
              "cross-slide dial to 0 (if it measured Ø d instead, set the dial to read (" +
@@ -308,8 +237,9 @@ ConePlan planCone(const Scene& scene) {
                  "); touch the shoulder face and zero the saddle dial.");
     } else if (stage0) {
         step(out, PlanStep::Kind::Measure,
-             "Measure the finished diameter with a micrometer: Ø" + L(out.referenceDiameterMm) +
-                 ".");
+             "Stop the spindle. Measure the finished diameter with a micrometer: Ø" +
+                 L(out.referenceDiameterMm) + ".");
+        step(out, PlanStep::Kind::SetCompound, detail::setCompoundText(out, scene));
         step(out, PlanStep::Kind::TouchOff,
              "Work from the finished diameter: touch the tool on it and set the cross-slide dial "
              "to 0 (if it measured Ø d instead, set the dial to read (" +
@@ -317,7 +247,14 @@ ConePlan planCone(const Scene& scene) {
                  "); the saddle stays zeroed on the datum face.");
     }
 
-    // 3. Roughing.
+    if (!stage0)
+        step(out, PlanStep::Kind::TouchOff,
+             "Touch off with the compound at 0: touch the tool on the turning bar and set the "
+             "cross-slide dial to 0 (or from the bar's measured diameter, as above); touch the "
+             "end face and zero the saddle dial. Approach every reading from below (wind back "
+             "past it, then forward to it).");
+
+    // Roughing.
     const double allowance = scene.planning.finishAllowanceMm;
     if (scene.planning.roughing == PlanningOptions::Roughing::SaddleSteps) {
         if (g > 0) {
@@ -350,14 +287,13 @@ ConePlan planCone(const Scene& scene) {
     }
     out.roughingPasses = made;
 
-    // 4. Checks before the finishing pass, then the finish.
-    fillChecks(out, scene, f);
+    // Checks before the finishing pass, then the finish.
     step(out, PlanStep::Kind::Measure,
-         "Before finishing, check the diameter at " + L(out.checkZMm) + " from the datum face: Ø" +
-             L(out.checkDiameterRoughMm) + " now (Ø" + L(out.checkDiameterFinishedMm) +
-             " when finished).");
+         "Stop the spindle. Before finishing, check the diameter at " + L(out.checkZMm) +
+             " from the datum face: Ø" + L(out.checkDiameterRoughMm) + " now (Ø" +
+             L(out.checkDiameterFinishedMm) + " when finished).");
     step(out, PlanStep::Kind::Measure,
-         "Check the angle over two Ø" + L(out.rolls.rollDiameterMm) +
+         "With the spindle stopped, check the angle over two Ø" + L(out.rolls.rollDiameterMm) +
              " rolls with their centres at " + L(out.rolls.z1Mm) + " and " + L(out.rolls.z2Mm) +
              " from the datum face (" + L(out.rolls.height1Mm) + " and " + L(out.rolls.height2Mm) +
              " from the cone's small end): the readings must differ by " +
@@ -368,8 +304,8 @@ ConePlan planCone(const Scene& scene) {
              "). If the difference is off, correct the compound's angle before finishing.");
     b.compoundPass(0.0, true, "cone finishing pass (nose-radius offset applied)", 1, 1);
     step(out, PlanStep::Kind::Measure,
-         "Measure the finished cone: Ø" + L(out.checkDiameterFinishedMm) + " at " +
-             L(out.checkZMm) + ", over the rolls " + L(out.rolls.reading1Mm) + " and " +
+         "Stop the spindle. Measure the finished cone: Ø" + L(out.checkDiameterFinishedMm) +
+             " at " + L(out.checkZMm) + ", over the rolls " + L(out.rolls.reading1Mm) + " and " +
              L(out.rolls.reading2Mm) + ".");
 
     if (!scene.stock.tailstockSupport && scene.stock.stickOutMm > 3.0 * stockD)
@@ -388,6 +324,16 @@ ConePlan planCone(const Scene& scene) {
             break;
         }
     out.planned = !out.scene.plan.passes.empty();
+    if (out.planned) {
+        // Readings a person can set, checked by sweeping the plan; starts clear of the metal;
+        // back-outs that keep the way back clear.
+        detail::settleFinishReadings(out, b.finishReadings());
+        detail::reliefWhereBuried(out, fit.trailingEdge
+                                           ? "they start at the end where the metal stands"
+                                           : "they start against metal");
+        detail::chooseRetracts(out);
+        noteFinishPass(out);
+    }
     // What the plan claims; `swarf run` on the planned scene checks it.
     out.scene.expect = Expect{};
     out.scene.expect.withinTolerance = true;

@@ -4,6 +4,7 @@
 #include <algorithm>
 #include <cmath>
 #include <cstdio>
+#include <utility>
 
 namespace swarf {
 
@@ -234,6 +235,18 @@ void Scene::validate() const {
     checkSlide(c, uw, "setup.saddle", setup.saddle);
     c.len(setup.zeroDiameterMm >= 0, uw, "setup.cross.zero_diameter", setup.zeroDiameterMm,
           "expected 0 or more");
+    c.num(setup.windBackTurns > 0 && setup.windBackTurns <= 10, uw, "setup.wind_back",
+          setup.windBackTurns, "expected more than 0 and at most 10 turns");
+    if (setup.approach == Approach::TakeUp) {
+        // Winding back less than the backlash would not take it up.
+        for (const auto& [slideName, sl] :
+             {std::pair<const char*, const Slide*>{"compound", &setup.compound},
+              {"saddle", &setup.saddle}})
+            c.num(setup.windBackTurns * sl->mmPerDivision * sl->divisionsPerTurn > sl->backlashMm,
+                  uw, "setup.wind_back", setup.windBackTurns,
+                  std::string("expected a wind-back longer than the ") + slideName +
+                      "'s backlash, or it is not taken up");
+    }
 
     for (std::size_t i = 0; i < plan.passes.size(); ++i) {
         const Pass& p = plan.passes[i];
@@ -247,6 +260,20 @@ void Scene::validate() const {
         } else {
             c.len(p.toMm != p.fromMm, p.where, k + ".to", p.toMm,
                   "expected a reading other than from");
+            if (p.retractToMm) {
+                // Backed out: no further in than the pass ended or the next pass starts.
+                double limit = p.kind == PassKind::CrossSlide ? p.toMm : p.crossMm;
+                if (i + 1 < plan.passes.size() && plan.passes[i + 1].kind != PassKind::Path) {
+                    const Pass& n = plan.passes[i + 1];
+                    limit = std::min(limit, n.kind == PassKind::CrossSlide ? n.fromMm : n.crossMm);
+                }
+                char buf[64];
+                std::snprintf(buf, sizeof buf, "%.6g", fromMm(limit, units));
+                c.len(*p.retractToMm <= limit + 1e-9, p.where, k + ".retract_to", *p.retractToMm,
+                      std::string("expected a cross-slide reading out from this pass's end and "
+                                  "the next pass's start: at most ") +
+                          buf + " " + u);
+            }
         }
     }
 

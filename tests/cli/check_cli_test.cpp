@@ -8,6 +8,8 @@
 #include <string>
 #include <sys/wait.h>
 #include <unistd.h>
+#include <utility>
+#include <vector>
 
 namespace {
 
@@ -102,4 +104,82 @@ TEST_CASE("swarf check notes a long stick-out but still accepts the scene", "[cl
     CHECK(r.exitCode == 0);
     // common practice: about three diameters of stick-out for work in a chuck alone
     CHECK(r.out.find("note: stick-out is 4.7 bar diameters") != std::string::npos);
+}
+
+namespace {
+
+// A scene from scenes/ with some of its lines replaced, checked from a temporary file.
+Run checkEdited(const std::string& scene,
+                const std::vector<std::pair<std::string, std::string>>& edits,
+                const std::string& file) {
+    std::string text = slurp(std::string(SWARF_SCENES_DIR) + "/" + scene);
+    for (const auto& [from, to] : edits) {
+        const auto at = text.find(from);
+        REQUIRE(at != std::string::npos);
+        text.replace(at, from.size(), to);
+    }
+    {
+        std::ofstream out(file);
+        out << text;
+    }
+    const Run r = runSwarf("check " + file);
+    std::remove(file.c_str());
+    return r;
+}
+
+} // namespace
+
+TEST_CASE("swarf check notes a compound angle read off the other scale, with or without passes",
+          "[cli][check][compound]") {
+    // The demo's 1:10 cone: half angle 2°51′44.7″ (Source: references R3, ISO 1119). A scale
+    // graduated from the cross-slide reads 90° − θ (Source: references R5): 87°08′15″, which
+    // set on a scale from the axis is the other scale's reading.
+    for (bool passes : {true, false}) {
+        INFO((passes ? "with passes" : "without passes"));
+        std::string text = slurp(std::string(SWARF_SCENES_DIR) + "/fixture-arbor.toml");
+        text.replace(text.find("angle = 2.8624"), 14, "angle = 87.1376");
+        if (!passes) {
+            const auto a = text.find("[[plan.pass]]"), b = text.find("[planning]");
+            REQUIRE(a != std::string::npos);
+            REQUIRE(b != std::string::npos);
+            text.erase(a, b - a);
+        }
+        const std::string file = "check_cli_test_other_scale.toml";
+        {
+            std::ofstream out(file);
+            out << text;
+        }
+        const Run r = runSwarf("check " + file);
+        std::remove(file.c_str());
+        INFO(r.out << r.err);
+        CHECK(r.exitCode == 0);
+        CHECK(r.out.find("plan: " + std::string(passes ? "4" : "0") + " pass(es)") !=
+              std::string::npos);
+        CHECK(r.out.find("looks read off the other scale") != std::string::npos);
+        CHECK(r.out.find("scale = \"cross_slide\"") != std::string::npos);
+    }
+    // Set right, no such note.
+    const Run ok = runSwarf(std::string("check '") + SWARF_SCENES_DIR + "/fixture-arbor.toml'");
+    CHECK(ok.out.find("other scale") == std::string::npos);
+}
+
+TEST_CASE("swarf check says when the compound cannot cut the cone, or only with the trailing "
+          "edge, and what to change",
+          "[cli][check][compound]") {
+    // derived (compound_sense.h): the demo's cone widens toward the chuck.
+    const Run trailing =
+        runSwarf(std::string("check '") + SWARF_SCENES_DIR + "/fixture-arbor.toml'");
+    CHECK(trailing.out.find("is cut with the trailing edge") != std::string::npos);
+    CHECK(trailing.out.find("advance = \"chuck\", across = \"out\"") != std::string::npos);
+    const Run main =
+        runSwarf(std::string("check '") + SWARF_SCENES_DIR + "/plan-1-20-chuck-out.toml'");
+    CHECK(main.exitCode == 0);
+    CHECK(main.out.find("toward the chuck and out") != std::string::npos);
+    CHECK(main.out.find("trailing edge") == std::string::npos);
+    const Run across =
+        checkEdited("fixture-arbor.toml", {{"advance = \"tailstock\"", "advance = \"chuck\""}},
+                    "check_cli_test_wrong_sense.toml");
+    INFO(across.out << across.err);
+    CHECK(across.exitCode == 0); // a note, not an error
+    CHECK(across.out.find("the compound cannot cut the cone") != std::string::npos);
 }

@@ -80,12 +80,14 @@ thickness = 4.76
 [setup]
 spindle_rpm = 900
 approach = "take_up"
+wind_back = 0.5
 
 [setup.compound]
 angle = 87.0
 scale = "cross_slide"
 error = 0.01
 advance = "chuck"
+across = "out"
 per_division = 0.025
 divisions = 80
 backlash = 0.03
@@ -114,6 +116,7 @@ compound = 0.0
 from = 0.0
 to = 10.0
 feed = 0.12
+retract_to = 8.0
 
 [[plan.pass]]
 kind = "cross"
@@ -262,6 +265,8 @@ TEST_CASE("every key of the scene format is read", "[io][scene]") {
     CHECK(s.setup.compoundScale == CompoundScale::FromCrossSlide);
     CHECK(s.setup.compoundErrorRad == Approx(degToRad(0.01)));
     CHECK(s.setup.compoundAdvanceToward == Widens::TowardChuck);
+    CHECK(s.setup.compoundAdvanceAcross == Across::Out);
+    CHECK(s.setup.windBackTurns == 0.5);
     // Source: references R5 (a scale graduated from the cross-slide reads 90° − θ)
     CHECK(s.setup.compoundAxisAngleRad() == Approx(degToRad(3.01)));
     CHECK(s.setup.compound.mmPerDivision == 0.025);
@@ -289,6 +294,8 @@ TEST_CASE("every key of the scene format is read", "[io][scene]") {
     CHECK(p0.fromMm == 0);
     CHECK(p0.toMm == 10);
     CHECK(p0.feedMmPerRev == 0.12);
+    CHECK(p0.retractToMm == std::optional<double>(8.0));
+    CHECK_FALSE(s.plan.passes[1].retractToMm.has_value());
     CHECK(s.plan.passes[1].kind == PassKind::CrossSlide);
     CHECK(s.plan.passes[1].saddleMm == 10);
     CHECK(s.plan.passes[2].kind == PassKind::Compound);
@@ -341,6 +348,9 @@ TEST_CASE("defaults of an omitted key", "[io][scene]") {
     CHECK(s.setup.cross.backlashMm == 0);
     CHECK(s.setup.zeroZMm == 0);
     CHECK(s.setup.approach == Approach::InOrder);
+    CHECK(s.setup.windBackTurns == 0.25);
+    // A scene written before `across` existed: the compound goes in as its reading grows.
+    CHECK(s.setup.compoundAdvanceAcross == Across::In);
     CHECK(s.plan.passes.empty());
     CHECK(s.planning.maxDepthMm == 1.0);
     CHECK(s.sim.profileStepMm == 0.002);
@@ -543,6 +553,38 @@ TEST_CASE("setup approach: in_order or take_up, written back, anything else refu
         CHECK(e.expected().find("in_order") != std::string::npos);
         CHECK(e.expected().find("take_up") != std::string::npos);
     }
+}
+
+TEST_CASE("the compound's sense across, the wind-back and the back-out: read, refused when wrong",
+          "[io][scene]") {
+    const Scene out = io::readSceneText(
+        replaced(kMinimal, "advance = \"tailstock\"", "advance = \"chuck\"\nacross = \"out\""),
+        "o.toml");
+    CHECK(out.setup.compoundAdvanceToward == Widens::TowardChuck);
+    CHECK(out.setup.compoundAdvanceAcross == Across::Out);
+    CHECK(io::readSceneText(io::sceneToToml(out), "w.toml").setup.compoundAdvanceAcross ==
+          Across::Out);
+    auto refused = [](const std::string& text, const std::string& key, const std::string& part) {
+        try {
+            io::readSceneText(text, "bad.toml");
+            FAIL("accepted: " << key);
+        } catch (const InputError& e) {
+            CHECK(e.key() == key);
+            CHECK(e.expected().find(part) != std::string::npos);
+        }
+    };
+    refused(
+        replaced(kMinimal, "advance = \"tailstock\"", "advance = \"tailstock\"\nacross = \"up\""),
+        "setup.compound.across", "in");
+    // A wind-back of a tenth of a turn (0.2 mm) does not take up 0.3 mm of backlash.
+    refused(replaced(kMinimal, "[setup.compound]",
+                     "[setup]\napproach = \"take_up\"\nwind_back = 0.1\n\n[setup.compound]\n"
+                     "backlash = 0.3"),
+            "setup.wind_back", "backlash");
+    // Backed out to 1.0 after a pass at 0.5: that is further in, not out.
+    const std::string pass = "\n[[plan.pass]]\nkind = \"compound\"\ncross = 0.5\nfrom = 0\n"
+                             "to = 10\nfeed = 0.1\nretract_to = 1.0\n";
+    refused(std::string(kMinimal) + pass, "plan.pass[1].retract_to", "at most 0.5");
 }
 
 TEST_CASE("every form of a cone gives the same cone", "[io][scene][cone]") {

@@ -72,24 +72,26 @@ TEST_CASE("backlash: a slide that reverses lags by its backlash", "[machine]") {
     Scene s = compoundScene();
     s.setup.cross.backlashMm = 0.05;
     s.setup.compound.backlashMm = 0.04;
-    // Second pass backs the cross-slide out (reading decreasing): it stays 0.05 further in.
+    // The second pass's cross-slide reading is lower (1.0 after 2.0). Between the passes the
+    // cross-slide is backed out one turn past the lower of the two (to -1.0) and fed in to 1.0:
+    // it comes to 1.0 increasing and sits exactly there (scenes/README.md, between passes).
     Pass p2 = s.plan.passes[0];
     p2.crossMm = 1.0;
     s.plan.passes.push_back(p2);
     const auto m = planMoves(s);
     REQUIRE(m.size() == 2);
-    // Cross travel 0.5 (diameter dial); the slide lags: 0.55 in. The compound was wound back
-    // from 20 to 0: its slide lags 0.04, so the pass starts 0.04 along the compound (the slack
-    // is taken up first, with the tool standing still).
+    // Cross travel 0.5 (diameter dial), exactly. The compound was wound back from 20 to 0 (in
+    // order: dialled straight there): its slide lags 0.04, so the pass starts 0.04 along the
+    // compound (the slack is taken up first, with the tool standing still).
     const double a = degToRad(10);
-    CHECK(m[1].tipFrom.y() == Approx(15.0 - 0.55 - 0.04 * std::sin(a)).margin(1e-12));
+    CHECK(m[1].tipFrom.y() == Approx(15.0 - 0.5 - 0.04 * std::sin(a)).margin(1e-12));
     CHECK(m[1].tipFrom.x() == Approx(40.0 - 0.04 * std::cos(a)));
     CHECK(m[1].tipTo.x() == Approx(40.0 - 20 * std::cos(a)));
 }
 
 TEST_CASE("approach: readings taken up from below sit exactly; in order they lag", "[machine]") {
     // The gap model (derived): the same three passes with and without backlash. The second pass
-    // backs the cross-slide out (2.0 → 1.0 on diameter) and sets the saddle lower (40 → 39.5);
+    // sets the cross-slide lower (2.0 → 1.0 on diameter) and the saddle lower (40 → 39.5);
     // the third winds the compound from 20 back down to 5 while it cuts.
     Scene s = compoundScene();
     Pass p2 = s.plan.passes[0];
@@ -123,17 +125,17 @@ TEST_CASE("approach: readings taken up from below sit exactly; in order they lag
         CHECK(m[2].tipTo.x() == Approx(exact[2].tipTo.x() - 0.04 * std::cos(a)));
         CHECK(m[2].tipTo.y() == Approx(exact[2].tipTo.y() - 0.04 * std::sin(a)));
     }
-    SECTION("in_order: the reversed cross-slide and saddle lag by their backlash") {
+    SECTION("in_order: the reversed saddle and compound lag by their backlash") {
         b.setup.approach = Approach::InOrder;
         const auto m = planMoves(b);
         REQUIRE(m.size() == 3);
         CHECK((m[0].tipFrom - exact[0].tipFrom).norm() < 1e-12); // all increasing from zero
-        // Pass 2: cross 0.05 further in, saddle 0.1 further toward the chuck, compound 0.04
-        // along its travel after winding back from 20 to 0 (derived).
-        CHECK(m[1].tipFrom.y() ==
-              Approx(exact[1].tipFrom.y() - 0.05 - 0.04 * std::sin(a)).margin(1e-12));
+        // Pass 2: saddle 0.1 further toward the chuck, compound 0.04 along its travel after
+        // winding back from 20 to 0 (derived); the cross-slide, backed out and fed in again,
+        // sits at its reading.
+        CHECK(m[1].tipFrom.y() == Approx(exact[1].tipFrom.y() - 0.04 * std::sin(a)).margin(1e-12));
         CHECK(m[1].tipFrom.x() == Approx(exact[1].tipFrom.x() + 0.1 - 0.04 * std::cos(a)));
-        CHECK(m[1].tipTo.y() == Approx(exact[1].tipTo.y() - 0.05).margin(1e-12));
+        CHECK(m[1].tipTo.y() == Approx(exact[1].tipTo.y()).margin(1e-12));
         CHECK(m[1].tipTo.x() == Approx(exact[1].tipTo.x() + 0.1));
     }
 }

@@ -1,6 +1,7 @@
 // The cone planner: every planned cone, run through the kernel, is within tolerance with no
 // finding; a hand-checked case matches a worked calculation; a cone the insert cannot follow is
 // refused with suggestions. Scenes are built in code (made-up scenarios, like those in scenes/).
+#include "swarf/sim/compound_sense.h"
 #include "swarf/sim/kernel.h"
 #include "swarf/sim/planner.h"
 
@@ -30,6 +31,9 @@ struct Job {
     DialMode dial = DialMode::Diameter;
     double crossDiv = 0.02, compDiv = 0.02, saddleDiv = 0.1, compTravel = 90, compBacklash = 0.04;
     CompoundScale scale = CompoundScale::FromAxis;
+    // The compound's sense as the reading increases (the lathe's; the planner keeps it).
+    Widens advance = Widens::TowardTailstock;
+    Across across = Across::In;
     PlanningOptions::Placing placing = PlanningOptions::Placing::ZeroOnDiameter;
     PlanningOptions::Roughing roughing = PlanningOptions::Roughing::Compound;
     double maxDepth = 1.0, allowance = 0.1, roughFeed = 0.12, finishFeed = 0.05;
@@ -74,6 +78,8 @@ Scene makeScene(const Job& j) {
     s.tool.edgeLengthMm = mm(j.edge);
     s.tool.hand = j.hand;
     s.setup.compoundScale = j.scale;
+    s.setup.compoundAdvanceToward = j.advance;
+    s.setup.compoundAdvanceAcross = j.across;
     s.setup.compoundReadingRad = j.scale == CompoundScale::FromAxis ? 0.0 : kPi / 2;
     s.setup.compound = Slide{mm(j.compDiv), 100, mm(j.compBacklash), mm(j.compTravel)};
     s.setup.cross = Slide{mm(j.crossDiv), j.dial == DialMode::Diameter ? 100 : 200, 0, mm(150)};
@@ -154,7 +160,7 @@ std::vector<Job> cases() {
         Job j; // 10° flare narrowing toward the chuck: compound advances toward the chuck
         j.name = "10° flare";
         j.stockD = 25, j.stickOut = 50, j.to = 20, j.gaugeZ = 0, j.gaugeD = 24, j.halfAngleDeg = 10;
-        j.tol = 0.05, j.widens = Widens::TowardTailstock;
+        j.tol = 0.05, j.widens = Widens::TowardTailstock, j.advance = Widens::TowardChuck;
         v.push_back(j);
     }
     {
@@ -247,11 +253,12 @@ TEST_CASE("hand-checked readings: 60/20/80 mm cone, r = 0.8, diameter dial", "[p
     //   run-in of r + 0.5 = 1.3 (no compound backlash here): z = 80 + 0.6059715 + 1.3 = 81.9060,
     //   so the saddle is locked at the next 0.1 division up, 82.0.
     //   Tip at compound 0: z = 82.0, x = 30 + 0.25·2 − 0.1753789 = 30.3246211.
-    //   Cross reading (diameter dial): c = 2 (30 − 30.3246211) = −0.6492422 → −0.65 to the
-    //   nearest half division of 0.02.
+    //   Cross reading (diameter dial): c = 2 (30 − 30.3246211) = −0.6492422 → −0.64 to the
+    //   nearest whole division of 0.02 (0.0092 mm on diameter from the exact reading, within
+    //   the ±0.05 tolerance).
     //   Compound from p = (82.0 − 81.9060)/cosθ = 0.0969 → 0.08 (whole division below) to
     //   p = (82.0 − (0 + 0.6059715 − 1.3))/cosθ = 85.2389 → 85.24 (whole division above).
-    //   On the dial: −0.65 is −1 turn + 67.5 divisions (100 divisions of 0.02 a turn).
+    //   On the dial: −0.64 is −1 turn + 68 divisions (100 divisions of 0.02 a turn).
     Job j;
     j.name = "hand check";
     j.stockD = 60, j.stickOut = 120, j.to = 80, j.gaugeZ = 80, j.gaugeD = 60;
@@ -267,12 +274,12 @@ TEST_CASE("hand-checked readings: 60/20/80 mm cone, r = 0.8, diameter dial", "[p
     const Pass& fin = plan.scene.plan.passes.back();
     CHECK(fin.kind == PassKind::Compound);
     CHECK(fin.saddleMm == Approx(82.0)); // derived above
-    CHECK(fin.crossMm == Approx(-0.65)); // derived above
+    CHECK(fin.crossMm == Approx(-0.64)); // derived above
     CHECK(fin.fromMm == Approx(0.08));   // derived above
     CHECK(fin.toMm == Approx(85.24));    // derived above
     const DialSetting d = dialSetting(plan.scene.setup.cross, fin.crossMm);
-    CHECK(d.turns == -1);              // derived above
-    CHECK(d.division == Approx(67.5)); // derived above
+    CHECK(d.turns == -1);            // derived above
+    CHECK(d.division == Approx(68)); // derived above
     // And the kernel agrees it cuts the drawn cone.
     const CutResult r = simulate(plan.scene);
     CHECK(r.findings.empty());
@@ -343,4 +350,158 @@ TEST_CASE("the sine bar stack is built from the block set, on a base when too sh
     REQUIRE(centre.sineBar.blocksMm.size() == 1);
     CHECK(centre.sineBar.blocksMm[0] == Approx(50.0));
     CHECK(centre.sineBar.baseBlocksMm.empty());
+}
+
+TEST_CASE("hand-checked readings: 1:10 cone cut toward the chuck and out", "[planner]") {
+    // Worked by hand (derived), from references R3, references R1 and the machine model in
+    // scenes/README.md. A 1:10 cone from z = 0 to 50, Ø30 at its large end (z = 50), on a Ø32
+    // bar held 80 out; r = 0.4 (D insert, J holder, hand R); compound winding toward the chuck
+    // and out (advance = "chuck", across = "out"), no backlash; dials zeroed on the Ø32 bar and
+    // the datum face; a diameter dial of 0.02 a division.
+    //   tan θ = 1/20 = 0.05, θ = 2°51′44.7″ (Source: references R3, ISO 1119 1:10 →
+    //   5°43′29.3176″ included); the compound is set to θ on a scale from the axis.
+    //   Winding in moves the tip along (cos θ, + sin θ): up the cone's line toward the chuck,
+    //   feeding toward a right-hand tool's leading side: main edge cutting.
+    //   Nose offset: the tip line lies r(1 + tan θ − sec θ) = 0.4 (1 + 0.05 − 1.0012492)
+    //   = 0.0195003 inside the drawn line (Source: references R1).
+    //   The pass starts in the air before the free end: the tip is ahead of the nose's contact
+    //   point by r(1 − sin θ) = 0.4 (1 − 0.0499376) = 0.3800250, and runs in r + 0.5 = 0.9:
+    //   z = 0 + 0.3800250 − 0.9 = −0.5199750; the saddle is locked a whole division below,
+    //   at −0.6, where the compound reads 0.
+    //   Tip line at z = −0.6: the cone's radius 15 − 0.05 (50 + 0.6) = 12.47, less 0.0195003:
+    //   x = 12.4504997. Cross reading (diameter dial): c = 2 (16 − 12.4504997) = 7.0990006 →
+    //   7.10 to the nearest whole division (0.001 on diameter off, within ±0.02).
+    //   Compound from p = (−0.5199750 + 0.6)/cos θ = 0.0801250 → 0.08 (a whole division below)
+    //   to the far end: the tip past the large end by 0.3800250 + 0.9, z = 51.2800250,
+    //   p = (51.2800250 + 0.6)/cos θ = 51.9448298 → 51.96 (a whole division above).
+    //   On the dial: 7.10 is 3 turns + 55 divisions (100 divisions of 0.02 a turn).
+    Job j;
+    j.name = "1:10 toward the chuck and out";
+    j.stockD = 32, j.stickOut = 80, j.to = 50, j.gaugeZ = 50, j.gaugeD = 30;
+    j.halfAngleDeg = radToDeg(std::atan(0.05)), j.tol = 0.02;
+    j.compBacklash = 0, j.compTravel = 100;
+    j.advance = Widens::TowardChuck, j.across = Across::Out;
+    const ConePlan plan = planCone(makeScene(j));
+    for (const std::string& p : plan.problems)
+        INFO(p);
+    REQUIRE(plan.planned);
+    // The planner keeps the compound as the scene gives it.
+    CHECK(plan.scene.setup.compoundAdvanceToward == Widens::TowardChuck);
+    CHECK(plan.scene.setup.compoundAdvanceAcross == Across::Out);
+    CHECK_FALSE(plan.trailingEdge);
+    // Source: references R3 (ISO 1119 1:10: 5°43′29.3176″ included, half of it)
+    CHECK(radToDeg(plan.compoundReadingRad) * 3600 ==
+          Approx((5 * 3600 + 43 * 60 + 29.3176) / 2).margin(0.01));
+    // Source: references R1 (ΔX = r(1 + tanθ − secθ)), derived for r = 0.4, tanθ = 0.05
+    CHECK(plan.noseOffsetRadialMm == Approx(-0.0195003).margin(1e-6));
+    const Pass& fin = plan.scene.plan.passes.back();
+    REQUIRE(fin.kind == PassKind::Compound);
+    CHECK(passFeedDirection(plan.scene, fin).edge == FeedDirection::Edge::Main);
+    CHECK(fin.saddleMm == Approx(-0.6)); // derived above
+    CHECK(fin.crossMm == Approx(7.10));  // derived above
+    CHECK(fin.fromMm == Approx(0.08));   // derived above
+    CHECK(fin.toMm == Approx(51.96));    // derived above
+    const DialSetting d = dialSetting(plan.scene.setup.cross, fin.crossMm);
+    CHECK(d.turns == 3);             // derived above
+    CHECK(d.division == Approx(55)); // derived above
+    // And the kernel agrees, the moves between passes included.
+    const CutResult r = simulate(plan.scene);
+    for (const Finding& f : r.findings)
+        UNSCOPED_INFO(f.message);
+    CHECK(r.findings.empty());
+    CHECK(r.withinTolerance);
+    // The cross reading 0.001 off on diameter (derived above).
+    CHECK(r.gaugeAsCutDiameterMm == Approx(30.0 + 2 * (7.0990006 - 7.10) / 2).margin(0.002));
+}
+
+TEST_CASE("the planner keeps the compound's sense, and refuses one that cannot cut", "[planner]") {
+    // derived (compound_sense.h): on a cone widening toward the chuck the compound follows the
+    // line winding toward the chuck and out or toward the tailstock and in; the other two
+    // senses run across it.
+    const Widens alongs[] = {Widens::TowardChuck, Widens::TowardTailstock};
+    const Across acrosses[] = {Across::In, Across::Out};
+    for (Widens widens : alongs)
+        for (Widens along : alongs)
+            for (Across across : acrosses) {
+                Job j = cases()[6]; // the 10° flare, Ø25 bar
+                if (widens == Widens::TowardChuck) {
+                    j.widens = widens;
+                    j.gaugeZ = 20; // Ø24 at its large end, toward the chuck now
+                }
+                j.advance = along, j.across = across;
+                const Scene scene = makeScene(j);
+                const ConePlan plan = planCone(scene);
+                const bool fits = (along == Widens::TowardChuck) == (across == Across::Out) ==
+                                  (widens == Widens::TowardChuck);
+                INFO("widens toward " << (widens == Widens::TowardChuck ? "chuck" : "tailstock")
+                                      << ", compound " << compoundSenseWords(scene.setup));
+                CHECK(plan.planned == fits);
+                if (fits) {
+                    CHECK(plan.scene.setup.compoundAdvanceToward == along);
+                    CHECK(plan.scene.setup.compoundAdvanceAcross == across);
+                    // Toward the tailstock, a right-hand tool cuts with its trailing edge: said.
+                    const bool trailing = along == Widens::TowardTailstock;
+                    CHECK(plan.trailingEdge == trailing);
+                    bool said = false;
+                    for (const std::string& c : plan.cautions)
+                        said = said || c.find("trailing edge") != std::string::npos;
+                    CHECK(said == trailing);
+                    const CutResult r = simulate(plan.scene);
+                    for (const Finding& f : r.findings)
+                        UNSCOPED_INFO(f.message);
+                    CHECK(r.findings.empty());
+                    CHECK(r.withinTolerance);
+                } else {
+                    REQUIRE_FALSE(plan.problems.empty());
+                    CHECK(plan.problems.front().find("cannot cut this cone") != std::string::npos);
+                    CHECK(plan.problems.front().find("across = ") != std::string::npos);
+                    CHECK(plan.scene.plan.passes.empty());
+                }
+            }
+}
+
+TEST_CASE("readings go on whole divisions, half a division only when none holds", "[planner]") {
+    // The 1:10 cone of the hand check above, its gauge diameter nudged so that the exact
+    // finishing reading falls on a half division (derived: a diameter dial's reading moves the
+    // diameter by as much, so +0.0090006 on the drawing moves 7.0990006 to 7.0900000).
+    Job j;
+    j.name = "1:10, tight";
+    j.stockD = 32, j.stickOut = 80, j.to = 50, j.gaugeZ = 50, j.gaugeD = 30.0090006;
+    j.halfAngleDeg = radToDeg(std::atan(0.05));
+    j.compBacklash = 0, j.compTravel = 100;
+    j.advance = Widens::TowardChuck, j.across = Across::Out;
+    SECTION("±0.02: a whole division (0.01 off on diameter) holds it") {
+        j.tol = 0.02;
+        const ConePlan plan = planCone(makeScene(j));
+        REQUIRE(plan.planned);
+        CHECK(plan.halfDivisionPasses.empty());
+        const double divs = plan.scene.plan.passes.back().crossMm / 0.02;
+        CHECK(divs == Approx(std::round(divs)).margin(1e-9));
+        CHECK(simulate(plan.scene).withinTolerance);
+    }
+    SECTION("±0.006: neither whole division does; half a division, and the plan says so") {
+        j.tol = 0.006; // a band of ±0.003 normal to the cone: 0.005 on radius is outside it
+        const ConePlan plan = planCone(makeScene(j));
+        REQUIRE(plan.planned);
+        REQUIRE(plan.halfDivisionPasses.size() == 1);
+        const Pass& fin =
+            plan.scene.plan.passes[static_cast<std::size_t>(plan.halfDivisionPasses.front())];
+        CHECK(fin.crossMm == Approx(7.09).margin(1e-9));
+        bool said = false;
+        for (const std::string& c : plan.cautions)
+            said = said || c.find("half a division") != std::string::npos;
+        CHECK(said);
+        CHECK(simulate(plan.scene).withinTolerance);
+    }
+}
+
+TEST_CASE("the plan winds back far enough to take up the backlash", "[planner]") {
+    // derived: a quarter turn of a 0.02 × 100 compound dial is 0.5 mm, less than 0.6 mm of
+    // backlash; half a turn (1.0 mm) takes it up.
+    Job j = cases()[0];
+    j.compBacklash = 0.6;
+    const ConePlan plan = planCone(makeScene(j));
+    REQUIRE(plan.planned);
+    CHECK(plan.scene.setup.windBackTurns == Approx(0.5));
+    CHECK_NOTHROW(plan.scene.validate());
 }

@@ -2,6 +2,7 @@
 // units. Exit 0 on a good scene; a bad one throws InputError (exit 2, message on stderr).
 #include "commands.h"
 #include "swarf/io/scene_reader.h"
+#include "swarf/sim/compound_sense.h"
 #include "swarf/sim/error.h"
 #include "swarf/sim/iso2768.h"
 
@@ -71,6 +72,25 @@ void printNotes(const Scene& s) {
     for (const Pass& p : s.plan.passes)
         compoundPasses = compoundPasses || p.kind == PassKind::Compound;
     const Feature* cone = s.part.mainCone();
+    if (cone) {
+        // The compound's sense against the cone, whether or not there are passes yet: winding
+        // in as it cuts, unless the scene's compound passes wind it out.
+        bool windingIn = true;
+        for (const Pass& p : s.plan.passes)
+            if (p.kind == PassKind::Compound) {
+                windingIn = p.toMm > p.fromMm;
+                break;
+            }
+        const CompoundFit fit = compoundFitForCone(s.setup, s.tool, cone->cone, windingIn);
+        if (!fit.parallel)
+            notes.push_back("the compound cannot cut the cone '" + cone->name +
+                            "': " + fit.message);
+        else if (fit.trailingEdge)
+            notes.push_back("the cone '" + cone->name +
+                            "' is cut with the trailing edge: " + fit.message);
+        if (auto other = otherScaleNote(s.setup, *cone))
+            notes.push_back(*other);
+    }
     if (cone && compoundPasses) {
         const double alpha = s.setup.compoundAxisAngleRad();
         const double diff = alpha - cone->cone.halfAngleRad;
@@ -161,9 +181,8 @@ void printScene(const Scene& s) {
     if (const Feature* cone = s.part.mainCone())
         fmt::print("       compound true angle minus the main cone's half angle: {:+.1f}″\n",
                    radToDeg(su.compoundAxisAngleRad() - cone->cone.halfAngleRad) * 3600.0);
-    fmt::print("       compound advances toward the {}: {}\n",
-               su.compoundAdvanceToward == Widens::TowardChuck ? "chuck" : "tailstock",
-               slideText(su.compound, u));
+    fmt::print("       winding the compound in (reading increasing) moves the tool {}: {}\n",
+               compoundSenseWords(su), slideText(su.compound, u));
     fmt::print("       cross-slide: {} dial, reads 0 at diameter {}; {}\n",
                su.crossDial == DialMode::Diameter ? "diameter" : "radius",
                len(su.zeroDiameterMm, u), slideText(su.cross, u));

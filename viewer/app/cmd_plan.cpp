@@ -8,6 +8,7 @@
 #include "swarf/io/scene_writer.h"
 #include "swarf/io/setup_sheet.h"
 #include "swarf/sim/caution.h"
+#include "swarf/sim/compound_sense.h"
 #include "swarf/sim/error.h"
 #include "swarf/sim/kernel.h"
 #include "swarf/sim/planner.h"
@@ -77,8 +78,10 @@ int runPlan(const PlanArgs& a) {
     fmt::print("{}: {} passes ({} cone roughing, {} stepped saddle, compound in {} setting{})\n",
                scene.name, plan.scene.plan.passes.size(), plan.roughingPasses,
                plan.saddleStepPasses, plan.compoundSettings, plan.compoundSettings == 1 ? "" : "s");
-    fmt::print("  compound {} on its scale; finishing pass offset {} on radius for the nose\n",
-               formatDms(plan.compoundReadingRad, 0), formatLength(plan.noseOffsetRadialMm, u));
+    fmt::print("  compound {} on its scale, winding in moves the tool {}; finishing pass offset {} "
+               "on radius for the nose\n",
+               formatDms(plan.compoundReadingRad, 0), compoundSenseWords(plan.scene.setup),
+               formatLength(plan.noseOffsetRadialMm, u));
     for (const std::string& c : plan.cautions)
         fmt::print("  note: {}\n", c);
     fmt::print("simulated: {}\n", result.withinTolerance ? "WITHIN TOLERANCE" : "OUT OF TOLERANCE");

@@ -2,10 +2,12 @@
 #include "panel_text.h"
 
 #include "swarf/sim/compare.h"
+#include "swarf/sim/compound_sense.h"
 #include "swarf/sim/result_figures.h"
 
 #include <fmt/format.h>
 
+#include <cctype>
 #include <cmath>
 
 namespace swarf::viewer::detail {
@@ -23,6 +25,12 @@ std::string momentPanelText(const Scene& scene, const CutResult& result, const M
                          m.passFraction >= 1 ? "done" : fmt::format("{}% through", pct));
         if (!m.passNote.empty())
             s += m.passNote + "\n";
+        // Which way the tool feeds and which edge cuts (compound_sense.h).
+        const Pass& pass = scene.plan.passes[static_cast<std::size_t>(m.pass)];
+        std::string dir = feedDirectionWords(passFeedDirection(scene, pass));
+        if (!dir.empty())
+            dir[0] = static_cast<char>(std::toupper(static_cast<unsigned char>(dir[0])));
+        s += dir + "\n";
         s += fmt::format("Feed {}/rev\n", formatLength(m.feedMmPerRev, u));
     }
     const bool diamDial = scene.setup.crossDial == DialMode::Diameter;

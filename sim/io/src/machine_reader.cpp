@@ -3,6 +3,7 @@
 
 #include "swarf/io/insert_codes.h"
 
+#include <algorithm>
 #include <cctype>
 #include <cmath>
 #include <cstdio>
@@ -12,11 +13,11 @@ namespace swarf::io::detail {
 namespace {
 
 const std::vector<std::string_view> kCompoundPassKeys = {"kind", "note", "cross", "saddle",
-                                                         "from", "to",   "feed"};
+                                                         "from", "to",   "feed",  "retract_to"};
 const std::vector<std::string_view> kSaddlePassKeys = {"kind", "note", "cross", "compound",
-                                                       "from", "to",   "feed"};
+                                                       "from", "to",   "feed",  "retract_to"};
 const std::vector<std::string_view> kCrossPassKeys = {"kind", "note", "compound", "saddle",
-                                                      "from", "to",   "feed"};
+                                                      "from", "to",   "feed",     "retract_to"};
 
 std::string fmtNum(double v) {
     char buf[64];
@@ -36,6 +37,22 @@ void readSlide(const Fields& f, Slide& s, double defaultPerDivisionMm, double de
     requirePositive(f, "backlash", s.backlashMm, true);
     s.travelMm = f.length("travel", "usable travel from zero").value_or(defaultTravelMm);
     requirePositive(f, "travel", s.travelMm);
+}
+
+// With approach = "take_up" a slide is wound back past a reading by wind_back turns: that must
+// be more than its backlash, or the slack is never taken up. Said at wind_back if the scene
+// gives it, else at the slide's backlash.
+void windBackTakesUp(const Fields& setup, const Fields& slideFields, const Setup& s,
+                     const Slide& slide, const char* name) {
+    if (s.approach != Approach::TakeUp ||
+        s.windBackTurns * slide.mmPerDivision * slide.divisionsPerTurn > slide.backlashMm)
+        return;
+    const std::string why = std::string("expected a wind-back longer than the ") + name +
+                            "'s backlash, or it is not taken up";
+    if (setup.has("wind_back"))
+        setup.fail("wind_back", why);
+    slideFields.fail("backlash", "expected less than the wind-back of " + fmtNum(s.windBackTurns) +
+                                     " turn (setup.wind_back): " + why);
 }
 
 } // namespace
@@ -174,7 +191,7 @@ Setup readSetup(const Fields& root) {
     if (!t)
         root.missing("setup", "a [setup] table with [setup.compound] and [setup.cross]");
     Fields f(*t, "setup", root.context(),
-             {"compound", "cross", "saddle", "spindle_rpm", "approach"});
+             {"compound", "cross", "saddle", "spindle_rpm", "approach", "wind_back"});
     const bool inch = root.context().units == Units::Inch;
     Setup s;
     s.where = f.where();
@@ -184,13 +201,17 @@ Setup readSetup(const Fields& root) {
     }
     auto approach = f.choice("approach", {"in_order", "take_up"});
     s.approach = approach && *approach == "take_up" ? Approach::TakeUp : Approach::InOrder;
+    if (auto w = f.number("wind_back", "turns of a handwheel wound back past a reading")) {
+        f.require(*w > 0 && *w <= 10, "wind_back", "expected more than 0 and at most 10 turns");
+        s.windBackTurns = *w;
+    }
 
     const toml::table* ct = f.subtable("compound");
     if (!ct)
         f.missing("compound", "a [setup.compound] table: the compound's angle and dial");
-    Fields c(
-        *ct, "setup.compound", root.context(),
-        {"angle", "scale", "error", "advance", "per_division", "divisions", "backlash", "travel"});
+    Fields c(*ct, "setup.compound", root.context(),
+             {"angle", "scale", "error", "advance", "across", "per_division", "divisions",
+              "backlash", "travel"});
     s.compoundReadingRad = c.requiredAngle("angle", "the compound angle as read on its scale");
     auto scale = c.choice("scale", {"axis", "cross_slide"});
     s.compoundScale =
@@ -215,7 +236,10 @@ Setup readSetup(const Fields& root) {
         c.missing("advance",
                   "\"chuck\" or \"tailstock\": where the tool goes as the reading grows");
     s.compoundAdvanceToward = *adv == "chuck" ? Widens::TowardChuck : Widens::TowardTailstock;
+    auto across = c.choice("across", {"in", "out"});
+    s.compoundAdvanceAcross = across && *across == "out" ? Across::Out : Across::In;
     readSlide(c, s.compound, inch ? 0.001 * kMmPerInch : 0.02, inch ? 4 * kMmPerInch : 100);
+    windBackTakesUp(f, c, s, s.compound, "compound");
 
     const toml::table* xt = f.subtable("cross");
     if (!xt)
@@ -235,6 +259,7 @@ Setup readSetup(const Fields& root) {
                   {"zero_z", "per_division", "divisions", "backlash", "travel"});
         s.zeroZMm = sd.length("zero_z", "z at which the saddle reads 0").value_or(0.0);
         readSlide(sd, s.saddle, s.saddle.mmPerDivision, 1e9);
+        windBackTakesUp(f, sd, s, s.saddle, "saddle");
     }
     return s;
 }
@@ -250,6 +275,12 @@ Plan readPlan(const Fields& root) {
     if (!arr)
         return plan;
     const Units u = root.context().units;
+    struct Retract {
+        std::size_t index;
+        SourceLoc where;
+        std::string value;
+    };
+    std::vector<Retract> retracts;
     int index = 0;
     for (const toml::node& n : *arr) {
         ++index;
@@ -259,7 +290,8 @@ Plan readPlan(const Fields& root) {
             throw InputError(locOf(n.source(), root.context().file), path, valueText(n),
                              "expected a table: write passes as [[plan.pass]]");
         Fields any(*pt, path, root.context(),
-                   {"kind", "note", "cross", "compound", "saddle", "from", "to", "feed", "points"});
+                   {"kind", "note", "cross", "compound", "saddle", "from", "to", "feed", "points",
+                    "retract_to"});
         auto kind = any.choice("kind", {"compound", "saddle", "cross", "path"});
         if (!kind)
             any.missing("kind", "\"compound\", \"saddle\", \"cross\" or \"path\"");
@@ -323,7 +355,28 @@ Plan readPlan(const Fields& root) {
                    "expected a reading other than from: the pass must move");
         p.feedMmPerRev = pf.requiredLength("feed", "feed per revolution");
         requirePositive(pf, "feed", p.feedMmPerRev);
+        p.retractToMm = pf.length("retract_to", "the cross-slide reading backed out to after "
+                                                "the pass");
+        if (p.retractToMm)
+            retracts.push_back(
+                {plan.passes.size(), pf.where("retract_to"), valueText(*pt->get("retract_to"))});
         plan.passes.push_back(std::move(p));
+    }
+    // Backed out: no further in than the pass ends or the next pass starts (at the key itself;
+    // Scene::validate checks the same for scenes built in code).
+    for (const auto& r : retracts) {
+        const Pass& p = plan.passes[r.index];
+        double limit = p.kind == PassKind::CrossSlide ? p.toMm : p.crossMm;
+        if (r.index + 1 < plan.passes.size() && plan.passes[r.index + 1].kind != PassKind::Path) {
+            const Pass& n = plan.passes[r.index + 1];
+            limit = std::min(limit, n.kind == PassKind::CrossSlide ? n.fromMm : n.crossMm);
+        }
+        if (*p.retractToMm > limit + 1e-9)
+            throw InputError(r.where, "plan.pass[" + std::to_string(r.index + 1) + "].retract_to",
+                             r.value,
+                             "expected a cross-slide reading out from this pass's end and the "
+                             "next pass's start: at most " +
+                                 fmtNum(fromMm(limit, u)) + " " + unitName(u));
     }
     return plan;
 }

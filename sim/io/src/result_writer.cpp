@@ -2,6 +2,7 @@
 #include "swarf/io/result_writer.h"
 
 #include "swarf/io/output_file.h"
+#include "swarf/sim/between_passes.h"
 #include "swarf/sim/iso2768.h"
 
 #include <nlohmann/json.hpp>
@@ -145,6 +146,24 @@ std::string resultJson(const Scene& scene, const CutResult& r) {
         passes.push_back(o);
     }
     j["passes"] = passes;
+    ordered_json between = ordered_json::array();
+    for (const BetweenMove& b : r.between) {
+        const ToolMove& m = b.move;
+        between.push_back({{"after_pass", b.afterPass},
+                           {"before_pass", b.beforePass},
+                           {"step", returnStepKey(b.step)},
+                           {"slide", slideKey(b.slide)},
+                           {"tip_from", point(m.tipFrom)},
+                           {"tip_to", point(m.tipTo)},
+                           {"cross_from_mm", m.crossFrom},
+                           {"cross_to_mm", m.crossTo},
+                           {"compound_from_mm", m.compoundFrom},
+                           {"compound_to_mm", m.compoundTo},
+                           {"saddle_from_mm", m.saddleFrom},
+                           {"saddle_to_mm", m.saddleTo},
+                           {"cuts_mm", num(b.cutsMm)}});
+    }
+    j["between_passes"] = between;
     j["profile"] = {{"samples", r.asCut.radiusMm.size()},
                     {"z0_mm", num(r.asCut.z0Mm)},
                     {"step_mm", r.asCut.dzMm}};

@@ -170,6 +170,8 @@ void writePass(Out& o, const Pass& p) {
         o.len("to", p.toMm);
     }
     o.len("feed", p.feedMmPerRev);
+    if (p.retractToMm && p.kind != PassKind::Path)
+        o.len("retract_to", *p.retractToMm);
 }
 
 } // namespace
@@ -221,12 +223,14 @@ std::string sceneToToml(const Scene& sc, const std::vector<std::string>& headerC
     if (s.spindleRpm)
         o.raw("spindle_rpm", num(*s.spindleRpm));
     o.str("approach", s.approach == Approach::TakeUp ? "take_up" : "in_order");
+    o.raw("wind_back", num(s.windBackTurns));
     o.line("");
     o.line("[setup.compound]");
     o.deg("angle", s.compoundReadingRad);
     o.str("scale", s.compoundScale == CompoundScale::FromAxis ? "axis" : "cross_slide");
     o.deg("error", s.compoundErrorRad);
     o.str("advance", s.compoundAdvanceToward == Widens::TowardChuck ? "chuck" : "tailstock");
+    o.str("across", s.compoundAdvanceAcross == Across::In ? "in" : "out");
     o.slide(s.compound, true);
     o.line("");
     o.line("[setup.cross]");

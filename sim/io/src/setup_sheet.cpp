@@ -3,7 +3,9 @@
 #include "swarf/io/setup_sheet.h"
 
 #include "sheet_document.h"
+#include "sheet_sections.h"
 #include "swarf/sim/caution.h"
+#include "swarf/sim/compound_sense.h"
 
 #include <cmath>
 #include <cstdio>
@@ -20,31 +22,10 @@ using detail::paragraph;
 using detail::Section;
 using detail::Table;
 
-// What every section builder needs: the plan, its scene, and lengths in the scene's units.
-struct Ctx {
-    const ConePlan& plan;
-    const Scene& sc;
-    Units u;
-    const Setup& su;
-    std::string L(double mm, Precision p = Precision::Normal) const {
-        return formatLength(mm, u, p);
-    }
-    std::string feed(double mmPerRev) const { return formatLengthNumber(mmPerRev, u); }
-};
+using Ctx = detail::SheetCtx;
 
 const char* towardName(Widens w) {
     return w == Widens::TowardChuck ? "chuck" : "tailstock";
-}
-
-// A compact table cell: "-13.950 [-7 t + 2.5]" (value in the scene's units, turns, division).
-std::string cell(const Slide& slide, double readingMm, Units u) {
-    const DialSetting d = dialSetting(slide, readingMm);
-    const double frac = d.division - std::floor(d.division);
-    char buf[96];
-    std::snprintf(buf, sizeof buf, "%s\u00a0[%ld\u00a0t\u00a0+\u00a0%.*f]",
-                  formatLengthNumber(readingMm, u).c_str(), d.turns,
-                  frac < 1e-6 || frac > 1 - 1e-6 ? 0 : 1, d.division);
-    return buf;
 }
 
 Section safetySection() {
@@ -132,9 +113,13 @@ Section compoundSection(const Ctx& c) {
                  (c.su.compoundScale == CompoundScale::FromAxis
                       ? " (scale read from the spindle axis)"
                       : " (scale read from the cross-slide: 90° − θ)") +
-                 "; winding it in moves the tool toward the " +
-                 towardName(c.su.compoundAdvanceToward) + ".");
+                 "; winding it in (the reading increasing) moves the tool " +
+                 compoundSenseWords(c.su) + ".");
     cl.push_back(sineBarLine(c));
+    cl.push_back("Or with an indicator on a test bar parallel to the spindle axis: over " +
+                 c.L(plan.indicatorTravelMm) +
+                 " of compound travel the indicator moves L·sin θ = " +
+                 c.L(plan.indicatorMoveMm, Precision::Fine) + ".");
     cl.push_back(
         "Nose-radius offset (plane geometry): a tip placed on the drawn cone line would leave " +
         formatSmallLength(plan.noseNormalErrorMm, c.u) +
@@ -142,77 +127,35 @@ Section compoundSection(const Ctx& c) {
         c.L(std::fabs(plan.noseOffsetRadialMm), Precision::Fine) + " on radius " +
         (plan.noseOffsetRadialMm < 0 ? "inside" : "outside") + " the drawn line, the same as " +
         c.L(std::fabs(plan.noseOffsetAxialMm), Precision::Fine) + " along the axis).");
+    if (plan.trailingEdge)
+        cl.push_back("The trailing edge cuts the cone (see the notes for this job).");
     return {"Compound and nose-radius offset", {listBlock(cl)}};
 }
 
 Section readingsSection(const Ctx& c) {
     Section refs{"References and readings", {}};
     refs.blocks.push_back(paragraph(
-        "Readings are dial readings in " + std::string(unitName(c.u)) +
+        "Readings are dial readings in " + std::string(c.u == Units::Inch ? "inches" : "mm") +
         "; in the table, [n t + d] means n whole turns from zero (negative: back from zero), then "
         "division d on the dial, which wraps every turn. Approach every reading "
-        "in its increasing direction (cross-slide: in toward the centre; compound: in; saddle: "
-        "toward the chuck): wind back past it, then forward to it. The readings then need no "
-        "backlash correction. Lock the slides that do not move during a pass."));
+        "in its increasing direction (cross-slide: in toward the centre; compound: winding in, "
+        "which moves the tool " +
+        compoundSenseWords(c.su) +
+        "; saddle: toward the chuck): wind back past it, then forward to it. The readings then "
+        "need no backlash correction. Lock the slides that do not move during a pass. Between "
+        "passes, back the cross-slide out before the tool goes back: each pass says where to."));
+    bool twoStages = false;
+    for (const PassDisplay& d : c.plan.display)
+        twoStages = twoStages || d.stage == 0;
+    const std::string zero = "the cross-slide reads 0 at Ø" + c.L(c.su.zeroDiameterMm) +
+                             ", the saddle reads 0 with the tip at " + c.L(c.su.zeroZMm) +
+                             " from the datum face.";
     refs.blocks.push_back(paragraph(
-        "Stage A readings count from the first touch-off on the bar (Ø" +
-        c.L(c.sc.stock.diameterMm) +
-        ") and its end face. Stage B readings count from the references: the cross-slide reads 0 "
-        "at Ø" +
-        c.L(c.su.zeroDiameterMm) + ", the saddle reads 0 with the tip at " + c.L(c.su.zeroZMm) +
-        " from the datum face."));
+        twoStages ? "Stage A readings count from the first touch-off on the bar (Ø" +
+                        c.L(c.sc.stock.diameterMm) +
+                        ") and its end face. Stage B readings count from the references: " + zero
+                  : "Readings count from the touch-off: " + zero));
     return refs;
-}
-
-Section operationsSection(const Ctx& c) {
-    const ConePlan& plan = c.plan;
-    const Setup& su = c.su;
-    const Units u = c.u;
-    std::vector<std::string> numbered;
-    Table passes;
-    const std::string un = unitName(u);
-    passes.head = {"step",           "pass",         "stage", "moves", "cross-slide " + un,
-                   "compound " + un, "saddle " + un, "from",  "to",    "feed " + un + "/rev"};
-    int stepNo = 0;
-    for (const PlanStep& st : plan.steps) {
-        ++stepNo;
-        if (st.kind != PlanStep::Kind::Pass) {
-            numbered.push_back(std::to_string(stepNo) + ". " + st.text);
-            continue;
-        }
-        const Pass& p = c.sc.plan.passes[st.pass];
-        const PassDisplay& d = plan.display[st.pass];
-        const double cOff = d.stage == 0 ? plan.stage0CrossOffsetMm : 0.0;
-        const double sOff = d.stage == 0 ? plan.stage0SaddleOffsetMm : 0.0;
-        const bool mC = p.kind == PassKind::CrossSlide, mP = p.kind == PassKind::Compound,
-                   mS = p.kind == PassKind::Saddle;
-        const Slide& moving = mC ? su.cross : mP ? su.compound : su.saddle;
-        const double off = mC ? cOff : mS ? sOff : 0.0;
-        // The readings in words too, so the line can be followed without the table.
-        std::string locked;
-        if (!mC)
-            locked += "cross-slide " + cell(su.cross, p.crossMm + cOff, u);
-        if (!mP)
-            locked += std::string(locked.empty() ? "" : ", ") + "compound " +
-                      cell(su.compound, p.compoundMm, u);
-        if (!mS)
-            locked += std::string(locked.empty() ? "" : ", ") + "saddle " +
-                      cell(su.saddle, p.saddleMm + sOff, u);
-        numbered.push_back(std::to_string(stepNo) + ". Pass " + std::to_string(st.pass + 1) +
-                           " (stage " + (d.stage == 0 ? "A" : "B") + "): " + p.note + ". Set " +
-                           locked + "; wind the " + passKindName(p.kind) + " from " +
-                           cell(moving, p.fromMm + off, u) + " to " +
-                           cell(moving, p.toMm + off, u) + " at " + c.feed(p.feedMmPerRev) + " " +
-                           unitName(u) + "/rev.");
-        passes.rows.push_back(
-            {std::to_string(stepNo), std::to_string(st.pass + 1), d.stage == 0 ? "A" : "B",
-             passKindName(p.kind), mC ? "moves" : cell(su.cross, p.crossMm + cOff, u),
-             mP ? "moves" : cell(su.compound, p.compoundMm, u),
-             mS ? "moves" : cell(su.saddle, p.saddleMm + sOff, u), cell(moving, p.fromMm + off, u),
-             cell(moving, p.toMm + off, u), c.feed(p.feedMmPerRev)});
-    }
-    return {"Order of operations",
-            {listBlock(numbered, Block::Kind::Numbered), detail::tableBlock(passes)}};
 }
 
 Section checksSection(const Ctx& c) {
@@ -274,8 +217,9 @@ Document buildSheet(const ConePlan& plan, const CutResult* proof) {
     sh.sections.push_back(jobSection(c));
     sh.sections.push_back(compoundSection(c));
     sh.sections.push_back(readingsSection(c));
-    sh.sections.push_back(operationsSection(c));
+    sh.sections.push_back(detail::operationsSection(c));
     sh.sections.push_back(checksSection(c));
+    sh.sections.push_back(detail::mattersSection(c));
     sh.sections.push_back(finishSection(c));
     if (!plan.cautions.empty())
         sh.sections.push_back(
@@ -286,6 +230,20 @@ Document buildSheet(const ConePlan& plan, const CutResult* proof) {
 }
 
 } // namespace
+
+namespace detail {
+
+std::string dialCell(const Slide& slide, double readingMm, Units u) {
+    const DialSetting d = dialSetting(slide, readingMm);
+    const double frac = d.division - std::floor(d.division);
+    char buf[96];
+    std::snprintf(buf, sizeof buf, "%s\u00a0[%ld\u00a0t\u00a0+\u00a0%.*f]",
+                  formatLengthNumber(readingMm, u).c_str(), d.turns,
+                  frac < 1e-6 || frac > 1 - 1e-6 ? 0 : 1, d.division);
+    return buf;
+}
+
+} // namespace detail
 
 std::string dialReadingText(const Slide& slide, double readingMm, Units units) {
     const DialSetting d = dialSetting(slide, readingMm);

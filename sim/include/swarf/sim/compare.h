@@ -26,7 +26,7 @@ Profile nominalOnGrid(const Part& part, const Profile& grid);
 std::vector<double> normalDeviation(const Part& part, const Profile& nominal, const Profile& asCut);
 
 /// Signed deviation normal to the drawing of a surface point at (z, radius), mm: + left on,
-/// − overcut; NaN off the drawing. For colouring the 3D surface (HeightMap) point by point.
+/// − overcut; NaN off the drawing. For colouring the 3D surface (FeedMarkSurface) point by point.
 double normalDeviationAt(const Part& part, double zMm, double radiusMm);
 
 /// Half-width of a feature's tolerance band normal to its surface, mm: (t/2)·cos θ (for a face

@@ -24,6 +24,31 @@ struct ToolMove {
            saddleTo = 0;
 };
 
+/// What a move between two passes does: the tool going back from one pass's end to the next
+/// pass's start (scenes/README.md, "Between passes"). None of them should cut.
+enum class ReturnStep {
+    BackOut,  ///< the cross-slide backed out, reading decreasing
+    WindBack, ///< a slide wound back past the reading it is set to next (approach = take_up)
+    BringUp,  ///< a slide brought forward, reading increasing, to its next reading
+    Dial,     ///< a slide dialled straight to its next reading (approach = in_order)
+    FeedIn,   ///< the cross-slide fed in to the next pass's reading
+};
+
+/// The three handwheel slides.
+enum class SlideName { Cross, Compound, Saddle };
+
+/// One move of the tool between two passes, as the machine model makes it.
+struct BetweenMove {
+    int afterPass = -1;  ///< the pass just ended (−1: the tool comes to the first pass)
+    int beforePass = -1; ///< the pass it leads to (−1: the last back-out, after the last pass)
+    ReturnStep step = ReturnStep::BackOut;
+    SlideName slide = SlideName::Cross;
+    /// The tip and all three readings at its ends; feed 0; `pass` is beforePass, or afterPass
+    /// for the last back-out.
+    ToolMove move;
+    double cutsMm = 0; ///< radius of metal it would cut (0: none); filled by the kernel's check
+};
+
 /// A radius sampled along the axis: radiusMm[i] at z = z0Mm + i·dzMm.
 struct Profile {
     double z0Mm = 0;
@@ -40,16 +65,17 @@ struct Profile {
 
 /// Kinds of finding about the cut. These are results, not errors.
 enum class FindingKind {
-    LeftOn,         ///< metal left on after the last pass, beyond tolerance
-    Overcut,        ///< cut below the drawing, beyond tolerance: scrap
-    Rubbing,        ///< trailing edge or flank rubs: the cone is steeper than the tool can follow
-    JawCrash,       ///< the tool reaches the chuck jaws
-    PastStock,      ///< the move runs past the stock's free end or through the centre
-    CompoundTravel, ///< a compound reading beyond its travel
-    DepthOfCut,     ///< depth of cut beyond the cutting edge length
-    AirCut,         ///< the pass cuts nothing
-    CornerFillet,   ///< the nose leaves a fillet in an internal corner the drawing has sharp
-    CoarseFinish,   ///< the finishing feed is more than a nose radius finishes well (f > r/2)
+    LeftOn,           ///< metal left on after the last pass, beyond tolerance
+    Overcut,          ///< cut below the drawing, beyond tolerance: scrap
+    Rubbing,          ///< trailing edge or flank rubs: the cone is steeper than the tool can follow
+    JawCrash,         ///< the tool reaches the chuck jaws
+    PastStock,        ///< the move runs past the stock's free end or through the centre
+    CompoundTravel,   ///< a compound reading beyond its travel
+    DepthOfCut,       ///< depth of cut beyond the cutting edge length
+    AirCut,           ///< the pass cuts nothing
+    CornerFillet,     ///< the nose leaves a fillet in an internal corner the drawing has sharp
+    CoarseFinish,     ///< the finishing feed is more than a nose radius finishes well (f > r/2)
+    CutBetweenPasses, ///< a move between passes (back-out, wind-back, feed-in) cuts metal
 };
 
 /// Every finding kind, in the order above.
@@ -87,13 +113,14 @@ struct FeatureReport {
 
 /// Everything the kernel found.
 struct CutResult {
-    std::vector<ToolMove> moves;
-    Profile stock;                   ///< stock radius on the same samples as asCut
-    Profile nominal;                 ///< drawing radius (NaN where the drawing says nothing)
-    Profile asCut;                   ///< exact axisymmetric as-cut profile (the marks' valleys)
-    Profile crest;                   ///< the feed marks' crests on the same samples (≥ asCut)
-    std::vector<Profile> afterPass;  ///< as-cut profile after each pass
-    std::vector<double> deviationMm; ///< signed normal deviation per asCut sample; NaN off-feature
+    std::vector<ToolMove> moves;      ///< the passes' cutting moves
+    std::vector<BetweenMove> between; ///< the moves between passes, in order (not cut)
+    Profile stock;                    ///< stock radius on the same samples as asCut
+    Profile nominal;                  ///< drawing radius (NaN where the drawing says nothing)
+    Profile asCut;                    ///< exact axisymmetric as-cut profile (the marks' valleys)
+    Profile crest;                    ///< the feed marks' crests on the same samples (≥ asCut)
+    std::vector<Profile> afterPass;   ///< as-cut profile after each pass
+    std::vector<double> deviationMm;  ///< signed normal deviation per asCut sample; NaN off-feature
     std::vector<double> crestDeviationMm; ///< the same for the crests: what a gauge touches
     FeedMarkSurface surface;              ///< 3D surface with feed marks R(z, φ)
     std::vector<FeatureReport> features;

@@ -25,14 +25,21 @@ DialSetting dialSetting(const Slide& slide, double readingMm);
 /// The reading (mm of dial) rounded to the nearest 1/stepsPerDivision of a division.
 double roundToDivision(const Slide& slide, double readingMm, int stepsPerDivision = 1);
 
+/// How fast to turn the handwheel of a pass's moving slide, by hand, for its feed at the
+/// scene's spindle speed: feed × rev/min ÷ travel per turn, turns a minute; 0 without a spindle
+/// speed or for a CNC path.
+double handwheelTurnsPerMinute(const Setup& setup, const Pass& pass);
+
 /// One step of the order of operations, in words (lengths in the scene's units).
 struct PlanStep {
     enum class Kind {
-        SetCompound, ///< swing and set the compound
-        TouchOff,    ///< touch the tool on a surface and zero dials
-        Pass,        ///< one pass of the plan (see `pass`)
-        Measure,     ///< measure something, compare with the expected value
-        Note,        ///< anything else the person must know at this point
+        Face,         ///< face the end to length: the datum face
+        CentreHeight, ///< set the tool's tip on centre height
+        SetCompound,  ///< swing and set the compound
+        TouchOff,     ///< touch the tool on a surface and zero dials
+        Pass,         ///< one pass of the plan (see `pass`)
+        Measure,      ///< measure something, compare with the expected value
+        Note,         ///< anything else the person must know at this point
     } kind = Kind::Note;
     std::string text; ///< what to do
     int pass = -1;    ///< Pass: index into the planned scene's plan.passes
@@ -100,6 +107,20 @@ struct ConePlan {
     RollCheck rolls;
     SineBarCheck sineBar;
     double rtMm = 0, raMm = 0; ///< theoretical roughness of the finishing pass
+
+    /// The compound winds toward the tool's trailing side: the trailing edge cuts (said in
+    /// cautions, with what to change).
+    bool trailingEdge = false;
+    /// Setting the compound with an indicator on a test bar parallel to the axis: over this
+    /// much compound travel the indicator moves indicatorMoveMm = L·sin θ (references R10).
+    double indicatorTravelMm = 0, indicatorMoveMm = 0;
+    /// The cone's finishing pass nearest the check plane: its cross-slide reading and the z
+    /// where its compound reads 0 (the cut pivots there if the compound's angle is off).
+    int finishPass = -1;
+    double finishCrossMm = 0, finishPivotZMm = 0;
+    /// Passes whose finishing reading had to be set on half a division (no whole division keeps
+    /// the tolerance); empty when every reading is a whole division.
+    std::vector<int> halfDivisionPasses;
 };
 
 /// Least angle (rad) kept between the path and the insert's trailing or leading edge: a

@@ -113,6 +113,12 @@ enum class Approach {
     TakeUp,  ///< wound back past each reading and brought up to it: the slide sits at it
 };
 
+/// Which way across the axis the compound moves the tool as its reading increases.
+enum class Across {
+    In,  ///< toward the spindle axis
+    Out, ///< away from the spindle axis
+};
+
 /// One handwheel slide.
 struct Slide {
     double mmPerDivision = 0.02; ///< one dial division, mm (on diameter for a diameter dial)
@@ -127,7 +133,11 @@ struct Setup {
     double compoundReadingRad = 0; ///< the compound angle read on its scale
     CompoundScale compoundScale = CompoundScale::FromAxis;
     double compoundErrorRad = 0; ///< true angle from the axis minus the intended one
-    Widens compoundAdvanceToward = Widens::TowardTailstock; ///< TowardChuck: advancing moves +z
+    /// Which way along the axis the compound moves the tool as its reading increases
+    /// (TowardChuck: +z).
+    Widens compoundAdvanceToward = Widens::TowardTailstock;
+    /// Which way across the axis the compound moves the tool as its reading increases.
+    Across compoundAdvanceAcross = Across::In;
     Slide compound{0.02, 100, 0, 100};
     Slide cross{0.02, 100, 0, 150};
     DialMode crossDial = DialMode::Diameter;
@@ -136,6 +146,9 @@ struct Setup {
     double zeroZMm = 0;                    ///< z at which the saddle reads zero
     std::optional<double> spindleRpm;      ///< for the sheet only
     Approach approach = Approach::InOrder; ///< how slides are set before each pass
+    /// How far past a reading a slide is wound back before it is brought up to it (take_up),
+    /// in turns of its handwheel; the travel must exceed the slide's backlash.
+    double windBackTurns = 0.25;
     SourceLoc where;
 
     /// The compound's true angle from the spindle axis, rad (reading converted, error added).
@@ -167,6 +180,10 @@ struct Pass {
     double fromMm = 0, toMm = 0; ///< the moving slide's readings
     double feedMmPerRev = 0.1;
     std::vector<std::pair<double, double>> pathZX; ///< Path: (z, x radius) of the imaginary tip
+    /// The cross-slide reading (mm of dial) the tool is backed out to after this pass, before it
+    /// goes back to the next start; empty: one turn of the cross-slide dial out from the
+    /// smaller of this pass's last and the next pass's first cross-slide reading.
+    std::optional<double> retractToMm;
     SourceLoc where;
 };
 
