@@ -181,8 +181,8 @@ void Scene::validate() const {
         if (i > 0)
             c.len(f.zStartMm >= part.features[i - 1].zEndMm - 1e-9, w, k + ".from", f.zStartMm,
                   "expected features in order along the axis, not overlapping");
-        c.len(f.zEndMm <= stock.jawZMm() + 1e-9, w, k + ".to", f.zEndMm,
-              "expected the part to end outside the jaws");
+        c.len(f.zEndMm <= stock.jawZMm() + 1e-9, sw, "stock.stick_out", stock.stickOutMm,
+              "expected the part to end outside the jaws: " + k + " ends past them");
         c.len(f.toleranceMm > 0, w, k + ".tolerance", f.toleranceMm, "expected more than 0");
         if (f.kind == FeatureKind::Cone || f.kind == FeatureKind::Chamfer) {
             const Cone& cone = f.cone;
@@ -235,6 +235,11 @@ void Scene::validate() const {
     c.len(setup.zeroDiameterMm >= 0, uw, "setup.cross.zero_diameter", setup.zeroDiameterMm,
           "expected 0 or more");
 
+    if (plan.passes.size() > kMaxPasses)
+        throw InputError(
+            plan.passes[kMaxPasses].where, "plan.pass[" + std::to_string(kMaxPasses + 1) + "]", "",
+            "expected at most " + std::to_string(kMaxPasses) + " passes in a plan (this one has " +
+                std::to_string(plan.passes.size()) + "): split the job into scenes");
     for (std::size_t i = 0; i < plan.passes.size(); ++i) {
         const Pass& p = plan.passes[i];
         const std::string k = "plan.pass[" + std::to_string(i + 1) + "]";
@@ -242,6 +247,11 @@ void Scene::validate() const {
         if (p.kind == PassKind::Path) {
             c.num(p.pathZX.size() >= 2, p.where, k + ".points",
                   static_cast<double>(p.pathZX.size()), "expected at least two points");
+            if (p.pathZX.size() > kMaxPathPoints)
+                throw InputError(p.where, k + ".points", "",
+                                 "expected at most " + std::to_string(kMaxPathPoints) +
+                                     " points in a path pass (this one has " +
+                                     std::to_string(p.pathZX.size()) + "): split it into passes");
             for (const auto& [z, x] : p.pathZX)
                 c.len(x >= 0, p.where, k + ".points", 2 * x, "expected diameters of 0 or more");
         } else {

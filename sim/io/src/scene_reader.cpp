@@ -2,6 +2,7 @@
 #include "swarf/io/scene_reader.h"
 
 #include "scene_sections.h"
+#include "scene_text.h"
 #include "swarf/io/did_you_mean.h"
 
 #include <cmath>
@@ -149,18 +150,35 @@ std::vector<double> readGaugeBlocks(const Fields& root) {
             v = static_cast<double>(i->get());
         if (auto d = n.as_floating_point())
             v = d->get();
-        if (!v || !(*v > 0))
+        if (!v || !(*v > 0) || !(toMm(*v, root.context().units) <= detail::kMaxLengthMm))
             throw InputError(detail::locOf(n.source(), root.context().file), "gauge_blocks.sizes",
                              detail::valueText(n),
-                             "expected a block size, a length more than 0 in " + f.unit());
+                             "expected a block size, a length more than 0 and at most 10 m in " +
+                                 f.unit());
         sizes.push_back(toMm(*v, root.context().units));
     }
     return sizes;
 }
 
+// Tables written at the top level that belong inside another: "did you mean [[part.feature]]?".
+void rejectMisplacedTables(const toml::table& doc, const std::string& fileName) {
+    static const std::pair<const char*, const char*> kNested[] = {
+        {"feature", "[[part.feature]]"},  {"features", "[[part.feature]]"},
+        {"pass", "[[plan.pass]]"},        {"passes", "[[plan.pass]]"},
+        {"compound", "[setup.compound]"}, {"cross", "[setup.cross]"},
+        {"saddle", "[setup.saddle]"}};
+    for (auto&& [k, v] : doc)
+        for (const auto& [name, header] : kNested)
+            if (k.str() == name)
+                throw InputError(detail::locOf(k.source(), fileName), std::string(k.str()), "",
+                                 std::string("unknown key at the top level: did you mean ") +
+                                     header + "?");
+}
+
 } // namespace
 
 Scene readSceneText(const std::string& text, const std::string& fileName) {
+    detail::checkSceneText(text, fileName);
     toml::table doc;
     try {
         doc = toml::parse(text, fileName);
@@ -169,6 +187,7 @@ Scene readSceneText(const std::string& text, const std::string& fileName) {
         throw InputError({fileName, static_cast<int>(b.line), static_cast<int>(b.column)}, "", "",
                          "not valid TOML: " + std::string(e.description()));
     }
+    rejectMisplacedTables(doc, fileName);
     detail::ReadContext ctx{fileName, Units::Mm};
     Fields root(doc, "", ctx,
                 {"name", "description", "units", "stock", "part", "tool", "setup", "plan",

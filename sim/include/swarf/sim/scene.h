@@ -15,6 +15,7 @@
 #include "swarf/sim/error.h"
 #include "swarf/sim/units.h"
 
+#include <cstddef>
 #include <optional>
 #include <string>
 #include <vector>
@@ -170,6 +171,12 @@ struct Pass {
     SourceLoc where;
 };
 
+/// The most passes a plan may hold: more is a slip (a script gone wrong, a depth of cut in the
+/// wrong unit), and each pass costs the simulation a sweep of the whole surface.
+inline constexpr std::size_t kMaxPasses = 200;
+/// The most points a path pass may hold.
+inline constexpr std::size_t kMaxPathPoints = 2000;
+
 /// The pass plan.
 struct Plan {
     std::vector<Pass> passes;
@@ -222,7 +229,8 @@ struct Scene {
     std::vector<double>
         gaugeBlocksMm; ///< the gauge block set for sine bar stacks (empty: built-in)
 
-    /// Checks ranges and consistency; throws InputError naming the key and its location.
+    /// Checks ranges and consistency, and the size of the plan (kMaxPasses, kMaxPathPoints);
+    /// throws InputError naming the key and its location.
     void validate() const;
 };
 
