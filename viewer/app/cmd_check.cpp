@@ -4,12 +4,12 @@
 #include "swarf/io/scene_reader.h"
 #include "swarf/sim/error.h"
 #include "swarf/sim/iso2768.h"
+#include "swarf/sim/scene_notes.h"
 
 #include <fmt/core.h>
 
 #include <cmath>
 #include <string>
-#include <vector>
 
 namespace swarf::app {
 
@@ -56,36 +56,9 @@ void printCone(const Feature& f, Units u, Iso2768 cls) {
     fmt::print("      given as: {}\n", f.coneGivenAs);
 }
 
-// Things worth a second look that are not errors: the scene is still valid.
+// Things worth a second look that are not errors (sim/scene_notes.h): the scene is still valid.
 void printNotes(const Scene& s) {
-    const Units u = s.units;
-    std::vector<std::string> notes;
-    const Stock& st = s.stock;
-    // Common practice: work held in a chuck alone sticks out about three diameters or less.
-    if (!st.tailstockSupport && st.stickOutMm > 3 * st.diameterMm)
-        notes.push_back(fmt::format("stick-out is {:.1f} bar diameters with no tailstock support; "
-                                    "about 3 or less is usual for work held in a chuck alone",
-                                    st.stickOutMm / st.diameterMm));
-    // The compound notes matter only when the plan cuts with the compound.
-    bool compoundPasses = false;
-    for (const Pass& p : s.plan.passes)
-        compoundPasses = compoundPasses || p.kind == PassKind::Compound;
-    const Feature* cone = s.part.mainCone();
-    if (cone && compoundPasses) {
-        const double alpha = s.setup.compoundAxisAngleRad();
-        const double diff = alpha - cone->cone.halfAngleRad;
-        if (std::fabs(diff) > cone->angleToleranceRad)
-            notes.push_back(fmt::format("the compound's true angle differs from the cone's half "
-                                        "angle by {}, more than the angle tolerance ± {}",
-                                        formatDms(diff), formatDms(cone->angleToleranceRad)));
-        const double length = cone->zEndMm - cone->zStartMm;
-        if (alpha < kPi / 2 && length / std::cos(alpha) > s.setup.compound.travelMm)
-            notes.push_back(fmt::format("the cone is {} long: the compound needs {} of travel to "
-                                        "cut it in one stroke but has {}",
-                                        len(length, u), len(length / std::cos(alpha), u),
-                                        len(s.setup.compound.travelMm, u)));
-    }
-    for (const auto& n : notes)
+    for (const auto& n : sceneNotes(s))
         fmt::print("note: {}\n", n);
 }
 
