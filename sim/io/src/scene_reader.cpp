@@ -6,8 +6,8 @@
 #include "swarf/io/did_you_mean.h"
 
 #include <cmath>
+#include <filesystem>
 #include <fstream>
-#include <sstream>
 
 namespace swarf::io {
 
@@ -216,12 +216,18 @@ Scene readSceneText(const std::string& text, const std::string& fileName) {
 }
 
 Scene readScene(const std::string& path) {
+    std::error_code ec;
+    if (std::filesystem::is_directory(path, ec))
+        throw InputError({path, 0, 0}, "", "", "cannot open the scene file: it is a folder");
     std::ifstream in(path, std::ios::binary);
     if (!in)
         throw InputError({path, 0, 0}, "", "", "cannot open the scene file");
-    std::ostringstream ss;
-    ss << in.rdbuf();
-    return readSceneText(ss.str(), path);
+    // Read no more than one byte past the limit: a huge file, /dev/zero or a pipe that never
+    // ends is refused by checkSceneText without filling the memory.
+    std::string text(detail::kMaxSceneBytes + 1, '\0');
+    in.read(text.data(), static_cast<std::streamsize>(text.size()));
+    text.resize(static_cast<std::size_t>(in.gcount()));
+    return readSceneText(text, path);
 }
 
 } // namespace swarf::io

@@ -62,9 +62,11 @@ void checkSceneText(std::string_view text, const std::string& fileName) {
     if (text.size() > kMaxSceneBytes) {
         char size[64];
         std::snprintf(size, sizeof size, "%.1f MB", static_cast<double>(text.size()) / (1 << 20));
-        throw InputError({fileName, 1, 1}, "", "",
-                         std::string("expected a scene file of at most 1 MB; this one is ") + size +
-                             ": is it the right file?");
+        throw InputError(
+            {fileName, 1, 1}, "", "",
+            std::string("expected a scene file of at most 1 MB; this one is ") +
+                (text.size() == kMaxSceneBytes + 1 ? std::string("larger") : std::string(size)) +
+                ": is it the right file?");
     }
     const Utf8Fault f = findUtf8Fault(text);
     if (f.line > 0) {
