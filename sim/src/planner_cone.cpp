@@ -388,6 +388,19 @@ ConePlan planCone(const Scene& scene) {
             break;
         }
     out.planned = !out.scene.plan.passes.empty();
+    if (out.scene.plan.passes.size() > kMaxPasses) {
+        // A scene holds at most kMaxPasses: say which setting makes the plan so long.
+        out.problems.push_back("the plan needs " + std::to_string(out.scene.plan.passes.size()) +
+                               " passes, more than the " + std::to_string(kMaxPasses) +
+                               " a scene may hold: take deeper cuts (planning.max_depth = " +
+                               L(scene.planning.maxDepthMm) +
+                               " now) or start from a bar closer to size");
+        out.planned = false;
+        out.scene.plan.passes.clear();
+        out.display.clear();
+        out.steps.clear();
+        return out;
+    }
     // What the plan claims; `swarf run` on the planned scene checks it.
     out.scene.expect = Expect{};
     out.scene.expect.withinTolerance = true;

@@ -261,8 +261,8 @@ void Scene::validate() const {
     }
 
     const SourceLoc& pw = planning.where;
-    c.len(planning.maxDepthMm > 0, pw, "planning.max_depth", planning.maxDepthMm,
-          "expected more than 0");
+    c.len(planning.maxDepthMm >= kMinMaxDepthMm - 1e-12, pw, "planning.max_depth",
+          planning.maxDepthMm, "expected at least 0.01 mm");
     c.len(planning.finishAllowanceMm >= 0 && planning.finishAllowanceMm < planning.maxDepthMm, pw,
           "planning.finish_allowance", planning.finishAllowanceMm,
           "expected 0 or more, less than max_depth");

@@ -62,7 +62,11 @@ PlanningOptions readPlanning(const Fields& root) {
               "roll_diameter"});
     p.where = f.where();
     p.maxDepthMm = f.length("max_depth", "largest depth per roughing pass").value_or(p.maxDepthMm);
-    detail::requirePositive(f, "max_depth", p.maxDepthMm);
+    // Common practice: a depth of cut is dialled in hundredths of a mm or more; finer would
+    // plan thousands of passes.
+    f.require(p.maxDepthMm >= kMinMaxDepthMm - 1e-12, "max_depth",
+              "expected at least 0.01 mm (0.0004 in): a roughing depth finer than that would take "
+              "thousands of passes");
     p.finishAllowanceMm =
         f.length("finish_allowance", "left for finishing").value_or(p.finishAllowanceMm);
     detail::requirePositive(f, "finish_allowance", p.finishAllowanceMm, true);

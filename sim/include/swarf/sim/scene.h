@@ -183,6 +183,9 @@ struct Plan {
     SourceLoc where;
 };
 
+/// The least planning.max_depth a scene may ask for, mm.
+inline constexpr double kMinMaxDepthMm = 0.01;
+
 /// How the planner should plan (scene section [planning]); lengths mm.
 struct PlanningOptions {
     double maxDepthMm = 1.0;        ///< largest depth of cut per roughing pass, normal to the cone
