@@ -1,9 +1,9 @@
 // libFuzzer target: any bytes into the scene reader. The reader either gives a Scene whose
 // numbers are all finite and that the kernel's cheap first steps accept (the insert's outline,
-// the machine model's moves, the notes `swarf check` prints, the planner), or refuses with an InputError
-// that names this file and a line, and exits 2. Anything else is a bug: another exception (the
-// CLI would exit 70), a non-finite value let through, a sanitizer report, an assert, a hang or
-// running out of memory. Built by SWARF_FUZZ=ON; run by tests/fuzz/run.sh.
+// the machine model's moves, the notes `swarf check` prints, the planner), or refuses with an
+// InputError that names this file and a line, and exits 2. Anything else is a bug: another
+// exception (the CLI would exit 70), a non-finite value let through, a sanitizer report, an
+// assert, a hang or running out of memory. Built by SWARF_FUZZ=ON; run by tests/fuzz/run.sh.
 #include "swarf/io/scene_reader.h"
 #include "swarf/sim/error.h"
 #include "swarf/sim/kernel.h"
