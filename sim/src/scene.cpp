@@ -182,8 +182,8 @@ void Scene::validate() const {
         if (i > 0)
             c.len(f.zStartMm >= part.features[i - 1].zEndMm - 1e-9, w, k + ".from", f.zStartMm,
                   "expected features in order along the axis, not overlapping");
-        c.len(f.zEndMm <= stock.jawZMm() + 1e-9, w, k + ".to", f.zEndMm,
-              "expected the part to end outside the jaws");
+        c.len(f.zEndMm <= stock.jawZMm() + 1e-9, sw, "stock.stick_out", stock.stickOutMm,
+              "expected the part to end outside the jaws: " + k + " ends past them");
         c.len(f.toleranceMm > 0, w, k + ".tolerance", f.toleranceMm, "expected more than 0");
         if (f.kind == FeatureKind::Cone || f.kind == FeatureKind::Chamfer) {
             const Cone& cone = f.cone;
@@ -248,6 +248,11 @@ void Scene::validate() const {
                       "'s backlash, or it is not taken up");
     }
 
+    if (plan.passes.size() > kMaxPasses)
+        throw InputError(
+            plan.passes[kMaxPasses].where, "plan.pass[" + std::to_string(kMaxPasses + 1) + "]", "",
+            "expected at most " + std::to_string(kMaxPasses) + " passes in a plan (this one has " +
+                std::to_string(plan.passes.size()) + "): split the job into scenes");
     for (std::size_t i = 0; i < plan.passes.size(); ++i) {
         const Pass& p = plan.passes[i];
         const std::string k = "plan.pass[" + std::to_string(i + 1) + "]";
@@ -255,6 +260,11 @@ void Scene::validate() const {
         if (p.kind == PassKind::Path) {
             c.num(p.pathZX.size() >= 2, p.where, k + ".points",
                   static_cast<double>(p.pathZX.size()), "expected at least two points");
+            if (p.pathZX.size() > kMaxPathPoints)
+                throw InputError(p.where, k + ".points", "",
+                                 "expected at most " + std::to_string(kMaxPathPoints) +
+                                     " points in a path pass (this one has " +
+                                     std::to_string(p.pathZX.size()) + "): split it into passes");
             for (const auto& [z, x] : p.pathZX)
                 c.len(x >= 0, p.where, k + ".points", 2 * x, "expected diameters of 0 or more");
         } else {
@@ -278,8 +288,8 @@ void Scene::validate() const {
     }
 
     const SourceLoc& pw = planning.where;
-    c.len(planning.maxDepthMm > 0, pw, "planning.max_depth", planning.maxDepthMm,
-          "expected more than 0");
+    c.len(planning.maxDepthMm >= kMinMaxDepthMm - 1e-12, pw, "planning.max_depth",
+          planning.maxDepthMm, "expected at least 0.01 mm");
     c.len(planning.finishAllowanceMm >= 0 && planning.finishAllowanceMm < planning.maxDepthMm, pw,
           "planning.finish_allowance", planning.finishAllowanceMm,
           "expected 0 or more, less than max_depth");

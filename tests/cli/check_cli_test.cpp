@@ -183,3 +183,45 @@ TEST_CASE("swarf check says when the compound cannot cut the cone, or only with 
     CHECK(across.exitCode == 0); // a note, not an error
     CHECK(across.out.find("the compound cannot cut the cone") != std::string::npos);
 }
+
+TEST_CASE("swarf check notes numbers in a likely wrong unit, and still accepts the scene",
+          "[cli][check]") {
+    const Run r = checkEdited("fixture-arbor.toml",
+                              {{"tolerance = 0.02", "tolerance = 15"},
+                               {"rough_feed = 0.1", "rough_feed = 100"},
+                               {"feed = 0.05", "feed = 5"}},
+                              "check_cli_test_units.toml");
+    INFO(r.out << r.err);
+    CHECK(r.exitCode == 0);
+    CHECK(r.err.empty());
+    // derived: a tenth of the 29 mm gauge diameter is 2.9 mm
+    CHECK(r.out.find("note: part.feature[1].tolerance ± 15.000 mm is more than a tenth of its "
+                     "29.000 mm diameter") != std::string::npos);
+    CHECK(r.out.find("note: plan.pass[4].feed = 5.000 mm a revolution is more than 1.00 mm") !=
+          std::string::npos);
+    CHECK(r.out.find("note: planning.rough_feed = 100.000 mm a revolution") != std::string::npos);
+    CHECK(r.out.find("OK: the scene is valid.") != std::string::npos);
+}
+
+TEST_CASE("swarf check notes a stick-out that leaves the tool no room before the jaws",
+          "[cli][check]") {
+    // The drawing ends at z = 80 (the bar left as drawn); 80.5 leaves half a millimetre.
+    const Run r = checkEdited("fixture-arbor.toml", {{"stick_out = 85.0", "stick_out = 80.5"}},
+                              "check_cli_test_room.toml");
+    INFO(r.out << r.err);
+    CHECK(r.exitCode == 0);
+    CHECK(r.out.find("note: stick-out 80.500 mm leaves 0.500 mm between the part's end and the "
+                     "jaws") != std::string::npos);
+}
+
+TEST_CASE("swarf check refuses a stick-out shorter than the part, on stock.stick_out",
+          "[cli][check]") {
+    const Run r = checkEdited("fixture-arbor.toml", {{"stick_out = 85.0", "stick_out = 60.0"}},
+                              "check_cli_test_short.toml");
+    INFO(r.out << r.err);
+    CHECK(r.exitCode == 2);
+    CHECK(r.out.empty());
+    CHECK(r.err.find("check_cli_test_short.toml:33:13: stock.stick_out = 60.0: expected at least "
+                     "80 mm: the part must end outside the jaws, but feature 2 (\"bar (left as "
+                     "drawn)\") ends at z = 80 mm") != std::string::npos);
+}

@@ -5,12 +5,12 @@
 #include "swarf/sim/compound_sense.h"
 #include "swarf/sim/error.h"
 #include "swarf/sim/iso2768.h"
+#include "swarf/sim/scene_notes.h"
 
 #include <fmt/core.h>
 
 #include <cmath>
 #include <string>
-#include <vector>
 
 namespace swarf::app {
 
@@ -57,55 +57,9 @@ void printCone(const Feature& f, Units u, Iso2768 cls) {
     fmt::print("      given as: {}\n", f.coneGivenAs);
 }
 
-// Things worth a second look that are not errors: the scene is still valid.
+// Things worth a second look that are not errors (sim/scene_notes.h): the scene is still valid.
 void printNotes(const Scene& s) {
-    const Units u = s.units;
-    std::vector<std::string> notes;
-    const Stock& st = s.stock;
-    // Common practice: work held in a chuck alone sticks out about three diameters or less.
-    if (!st.tailstockSupport && st.stickOutMm > 3 * st.diameterMm)
-        notes.push_back(fmt::format("stick-out is {:.1f} bar diameters with no tailstock support; "
-                                    "about 3 or less is usual for work held in a chuck alone",
-                                    st.stickOutMm / st.diameterMm));
-    // The compound notes matter only when the plan cuts with the compound.
-    bool compoundPasses = false;
-    for (const Pass& p : s.plan.passes)
-        compoundPasses = compoundPasses || p.kind == PassKind::Compound;
-    const Feature* cone = s.part.mainCone();
-    if (cone) {
-        // The compound's sense against the cone, whether or not there are passes yet: winding
-        // in as it cuts, unless the scene's compound passes wind it out.
-        bool windingIn = true;
-        for (const Pass& p : s.plan.passes)
-            if (p.kind == PassKind::Compound) {
-                windingIn = p.toMm > p.fromMm;
-                break;
-            }
-        const CompoundFit fit = compoundFitForCone(s.setup, s.tool, cone->cone, windingIn);
-        if (!fit.parallel)
-            notes.push_back("the compound cannot cut the cone '" + cone->name +
-                            "': " + fit.message);
-        else if (fit.trailingEdge)
-            notes.push_back("the cone '" + cone->name +
-                            "' is cut with the trailing edge: " + fit.message);
-        if (auto other = otherScaleNote(s.setup, *cone))
-            notes.push_back(*other);
-    }
-    if (cone && compoundPasses) {
-        const double alpha = s.setup.compoundAxisAngleRad();
-        const double diff = alpha - cone->cone.halfAngleRad;
-        if (std::fabs(diff) > cone->angleToleranceRad)
-            notes.push_back(fmt::format("the compound's true angle differs from the cone's half "
-                                        "angle by {}, more than the angle tolerance ± {}",
-                                        formatDms(diff), formatDms(cone->angleToleranceRad)));
-        const double length = cone->zEndMm - cone->zStartMm;
-        if (alpha < kPi / 2 && length / std::cos(alpha) > s.setup.compound.travelMm)
-            notes.push_back(fmt::format("the cone is {} long: the compound needs {} of travel to "
-                                        "cut it in one stroke but has {}",
-                                        len(length, u), len(length / std::cos(alpha), u),
-                                        len(s.setup.compound.travelMm, u)));
-    }
-    for (const auto& n : notes)
+    for (const auto& n : sceneNotes(s))
         fmt::print("note: {}\n", n);
 }
 

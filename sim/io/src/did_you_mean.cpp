@@ -36,6 +36,10 @@ int editDistance(std::string_view a, std::string_view b) {
 }
 
 std::string closestMatch(std::string_view word, const std::vector<std::string>& candidates) {
+    // Nothing is close to a word far longer than every candidate; skip the quadratic work.
+    constexpr std::size_t kLongestWord = 64;
+    if (word.size() > kLongestWord)
+        return {};
     const std::string w = lowerCopy(word);
     std::string best;
     int bestDistance = 1 << 30;

@@ -196,7 +196,8 @@ Setup readSetup(const Fields& root) {
     Setup s;
     s.where = f.where();
     if (auto rpm = f.number("spindle_rpm", "spindle speed in rev/min")) {
-        requirePositive(f, "spindle_rpm", *rpm);
+        f.require(*rpm > 0 && *rpm <= 100000, "spindle_rpm",
+                  "expected more than 0 and at most 100000 rev/min");
         s.spindleRpm = *rpm;
     }
     auto approach = f.choice("approach", {"in_order", "take_up"});
@@ -322,11 +323,15 @@ Plan readPlan(const Fields& root) {
                     z = num(pair->get(0));
                     d = num(pair->get(1));
                 }
-                if (!z || !d || *d < 0)
+                auto inRange = [u](double v) {
+                    return std::isfinite(v) && std::fabs(toMm(v, u)) <= kMaxLengthMm;
+                };
+                if (!z || !d || *d < 0 || !inRange(*z) || !inRange(*d))
                     throw InputError(locOf(pn.source(), root.context().file), path + ".points",
                                      valueText(pn),
                                      "expected a point [z, diameter] of two numbers in " +
-                                         std::string(unitName(u)) + ", diameter 0 or more");
+                                         std::string(unitName(u)) +
+                                         ", diameter 0 or more, each at most 10 m either way");
                 p.pathZX.emplace_back(toMm(*z, u), toMm(*d, u) / 2.0);
             }
             p.feedMmPerRev = pf.requiredLength("feed", "feed per revolution");

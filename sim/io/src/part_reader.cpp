@@ -118,7 +118,8 @@ double readRatioK(const Fields& f) {
         const std::string& t = s->get();
         double a = 0, b = 0;
         char extra = 0;
-        if (std::sscanf(t.c_str(), " %lf : %lf %c", &a, &b, &extra) == 2 && a > 0 && b > 0)
+        if (std::sscanf(t.c_str(), " %lf : %lf %c", &a, &b, &extra) == 2 && a > 0 && b > 0 &&
+            std::isfinite(b / a) && b / a > 0)
             return b / a;
         f.fail("ratio", "expected k of a taper 1:k on diameter, as a number (10) or \"1:10\"");
     }
@@ -147,6 +148,8 @@ void readCone(const Fields& f, Feature& feat, Iso2768 cls) {
         if (first.empty())
             first = key;
     }
+    if (first == "second_diameter")
+        f.missing("second_plane", "the plane where second_diameter is, from the datum face");
     if (first.empty())
         f.missing("half_angle", "one way to give the taper: half_angle, included_angle, ratio, "
                                 "taper_per_foot, second_plane with second_diameter, or standard");
@@ -210,6 +213,15 @@ void readCone(const Fields& f, Feature& feat, Iso2768 cls) {
         f.require(z2 >= feat.zStartMm - 1e-9 && z2 <= feat.zEndMm + 1e-9, "second_plane",
                   "expected a plane within the cone, from " + fmtLen(feat.zStartMm, u) + " to " +
                       fmtLen(feat.zEndMm, u));
+    }
+    // However it was given, the taper must come out as a half angle strictly between 0 and 90°
+    // (a ratio of 1:1e-300 or a taper per foot of 1e300 does not).
+    if (!(cone.halfAngleRad > 0 && cone.halfAngleRad < degToRad(90) - 1e-12)) {
+        char here[64];
+        std::snprintf(here, sizeof here, "%.9g", radToDeg(cone.halfAngleRad));
+        f.fail(first, std::string("expected a taper with a half angle more than 0 and less than "
+                                  "90 degrees (here ") +
+                          here + ")");
     }
     if (first == "second_plane") {
         if (f.has("widens_toward") && readWidens(f) != cone.widens)
@@ -340,13 +352,22 @@ Part readPart(const Fields& root, const Stock& stock) {
                        "before ends at " +
                            fmtLen(prev.zEndMm, u));
         }
-        // Outside the jaws, and no larger than the bar.
-        const char* endKey =
-            feat.kind == FeatureKind::Face || feat.kind == FeatureKind::Chamfer ? "at" : "to";
-        ff.require(feat.zEndMm <= stock.jawZMm() + 1e-9, endKey,
-                   "expected the part to end outside the jaws, at most " +
-                       fmtLen(stock.jawZMm(), u) +
-                       " from the datum face (stick-out less face allowance)");
+        // Outside the jaws: if not, the bar does not stick out far enough (the stick-out is
+        // what to change, not the drawing).
+        if (feat.zEndMm > stock.jawZMm() + 1e-9) {
+            const toml::node* so = root.subtable("stock")->get("stick_out");
+            const std::string which = "feature " + std::to_string(index);
+            const std::string named =
+                feat.name == which ? which : which + " (\"" + feat.name + "\")";
+            throw InputError(locOf(so->source(), root.context().file), "stock.stick_out",
+                             valueText(*so),
+                             "expected at least " + fmtLen(feat.zEndMm + stock.faceAllowanceMm, u) +
+                                 ": the part must end outside the jaws, but " + named +
+                                 " ends at z = " + fmtLen(feat.zEndMm, u) +
+                                 " and the jaws' face is at z = " + fmtLen(stock.jawZMm(), u) +
+                                 " (stick-out less face allowance)");
+        }
+        // No larger than the bar.
         double largest = feat.diameterMm;
         if (feat.kind == FeatureKind::Cone)
             largest =

@@ -2,12 +2,13 @@
 #include "swarf/io/scene_reader.h"
 
 #include "scene_sections.h"
+#include "scene_text.h"
 #include "swarf/io/did_you_mean.h"
 #include "swarf/sim/cut.h"
 
 #include <cmath>
+#include <filesystem>
 #include <fstream>
-#include <sstream>
 
 namespace swarf::io {
 
@@ -62,7 +63,11 @@ PlanningOptions readPlanning(const Fields& root) {
               "roll_diameter"});
     p.where = f.where();
     p.maxDepthMm = f.length("max_depth", "largest depth per roughing pass").value_or(p.maxDepthMm);
-    detail::requirePositive(f, "max_depth", p.maxDepthMm);
+    // Common practice: a depth of cut is dialled in hundredths of a mm or more; finer would
+    // plan thousands of passes.
+    f.require(p.maxDepthMm >= kMinMaxDepthMm - 1e-12, "max_depth",
+              "expected at least 0.01 mm (0.0004 in): a roughing depth finer than that would take "
+              "thousands of passes");
     p.finishAllowanceMm =
         f.length("finish_allowance", "left for finishing").value_or(p.finishAllowanceMm);
     detail::requirePositive(f, "finish_allowance", p.finishAllowanceMm, true);
@@ -152,18 +157,35 @@ std::vector<double> readGaugeBlocks(const Fields& root) {
             v = static_cast<double>(i->get());
         if (auto d = n.as_floating_point())
             v = d->get();
-        if (!v || !(*v > 0))
+        if (!v || !(*v > 0) || !(toMm(*v, root.context().units) <= detail::kMaxLengthMm))
             throw InputError(detail::locOf(n.source(), root.context().file), "gauge_blocks.sizes",
                              detail::valueText(n),
-                             "expected a block size, a length more than 0 in " + f.unit());
+                             "expected a block size, a length more than 0 and at most 10 m in " +
+                                 f.unit());
         sizes.push_back(toMm(*v, root.context().units));
     }
     return sizes;
 }
 
+// Tables written at the top level that belong inside another: "did you mean [[part.feature]]?".
+void rejectMisplacedTables(const toml::table& doc, const std::string& fileName) {
+    static const std::pair<const char*, const char*> kNested[] = {
+        {"feature", "[[part.feature]]"},  {"features", "[[part.feature]]"},
+        {"pass", "[[plan.pass]]"},        {"passes", "[[plan.pass]]"},
+        {"compound", "[setup.compound]"}, {"cross", "[setup.cross]"},
+        {"saddle", "[setup.saddle]"}};
+    for (auto&& [k, v] : doc)
+        for (const auto& [name, header] : kNested)
+            if (k.str() == name)
+                throw InputError(detail::locOf(k.source(), fileName), std::string(k.str()), "",
+                                 std::string("unknown key at the top level: did you mean ") +
+                                     header + "?");
+}
+
 } // namespace
 
 Scene readSceneText(const std::string& text, const std::string& fileName) {
+    detail::checkSceneText(text, fileName);
     toml::table doc;
     try {
         doc = toml::parse(text, fileName);
@@ -172,6 +194,7 @@ Scene readSceneText(const std::string& text, const std::string& fileName) {
         throw InputError({fileName, static_cast<int>(b.line), static_cast<int>(b.column)}, "", "",
                          "not valid TOML: " + std::string(e.description()));
     }
+    rejectMisplacedTables(doc, fileName);
     detail::ReadContext ctx{fileName, Units::Mm};
     Fields root(doc, "", ctx,
                 {"name", "description", "units", "stock", "part", "tool", "setup", "plan",
@@ -200,12 +223,18 @@ Scene readSceneText(const std::string& text, const std::string& fileName) {
 }
 
 Scene readScene(const std::string& path) {
+    std::error_code ec;
+    if (std::filesystem::is_directory(path, ec))
+        throw InputError({path, 0, 0}, "", "", "cannot open the scene file: it is a folder");
     std::ifstream in(path, std::ios::binary);
     if (!in)
         throw InputError({path, 0, 0}, "", "", "cannot open the scene file");
-    std::ostringstream ss;
-    ss << in.rdbuf();
-    return readSceneText(ss.str(), path);
+    // Read no more than one byte past the limit: a huge file, /dev/zero or a pipe that never
+    // ends is refused by checkSceneText without filling the memory.
+    std::string text(detail::kMaxSceneBytes + 1, '\0');
+    in.read(text.data(), static_cast<std::streamsize>(text.size()));
+    text.resize(static_cast<std::size_t>(in.gcount()));
+    return readSceneText(text, path);
 }
 
 } // namespace swarf::io

@@ -14,9 +14,25 @@ SourceLoc locOf(const toml::source_region& region, const std::string& file) {
                      static_cast<int>(region.begin.column)};
 }
 
+namespace {
+
+// Long keys and strings are cut short in messages: the start, then how long they are.
+constexpr std::size_t kShownChars = 60;
+
+std::string shortened(const std::string& text) {
+    if (text.size() <= kShownChars)
+        return text;
+    std::size_t cut = kShownChars;
+    while (cut > 0 && (static_cast<unsigned char>(text[cut]) & 0xC0) == 0x80)
+        --cut; // not inside a UTF-8 sequence
+    return text.substr(0, cut) + "… (" + std::to_string(text.size()) + " bytes)";
+}
+
+} // namespace
+
 std::string valueText(const toml::node& n) {
     if (auto s = n.as_string())
-        return "\"" + s->get() + "\"";
+        return "\"" + shortened(s->get()) + "\"";
     if (auto i = n.as_integer())
         return std::to_string(i->get());
     if (auto f = n.as_floating_point()) {
@@ -34,6 +50,10 @@ std::string valueText(const toml::node& n) {
         for (std::size_t i = 0; i < a->size(); ++i) {
             if (i)
                 t += ", ";
+            if (t.size() > kShownChars) {
+                t += "… (" + std::to_string(a->size()) + " items)";
+                break;
+            }
             t += valueText(*a->get(i));
         }
         return t + "]";
@@ -101,7 +121,7 @@ Fields::Fields(const toml::table& table, std::string path, const ReadContext& ct
         if (known)
             continue;
         const std::string here = path_.empty() ? "at the top level" : "in [" + path_ + "]";
-        throw InputError(locOf(k.source(), ctx_.file), keyPath(k.str()), "",
+        throw InputError(locOf(k.source(), ctx_.file), keyPath(shortened(std::string(k.str()))), "",
                          "unknown key " + here + ": expected " + suggestion(k.str(), names));
     }
 }
@@ -156,9 +176,18 @@ double Fields::requiredNumber(std::string_view key, const std::string& what) con
 }
 
 std::optional<double> Fields::length(std::string_view key, const std::string& what) const {
-    if (auto v = number(key, what + ", in " + unit()))
-        return toMm(*v, ctx_.units);
-    return std::nullopt;
+    auto v = number(key, what + ", in " + unit());
+    if (!v)
+        return std::nullopt;
+    const double mm = toMm(*v, ctx_.units);
+    if (std::fabs(mm) > kMaxLengthMm) {
+        char limit[64];
+        std::snprintf(limit, sizeof limit, "%.6g %s", fromMm(kMaxLengthMm, ctx_.units),
+                      unit().c_str());
+        fail(key, "expected a length of at most " + std::string(limit) + " (10 m) either way (" +
+                      what + "): is the unit right?");
+    }
+    return mm;
 }
 
 double Fields::requiredLength(std::string_view key, const std::string& what) const {

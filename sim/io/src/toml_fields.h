@@ -21,9 +21,14 @@ struct ReadContext {
     Units units = Units::Mm;
 };
 
+/// The largest length a scene may give, either way (10 m): more is a wrong unit or a slip, and
+/// keeps every later product of lengths finite.
+inline constexpr double kMaxLengthMm = 10000.0;
+
 /// Location of a node (its first character), in `file`.
 SourceLoc locOf(const toml::source_region& region, const std::string& file);
-/// The value of a node as a person would write it: 2.5, "cone", [1, 2], a table.
+/// The value of a node as a person would write it: 2.5, "cone", [1, 2], a table. Long strings
+/// and arrays are cut short ("…") with their size.
 std::string valueText(const toml::node& n);
 /// Parses an angle written as degrees, minutes, seconds ("2°51′51″", "2d51m51s", "2 51 51.1")
 /// into degrees. Empty if the text is not such an angle.
@@ -61,7 +66,7 @@ class Fields {
     /// A number (integer or float); wrong type throws. `what` describes it for messages.
     std::optional<double> number(std::string_view key, const std::string& what) const;
     double requiredNumber(std::string_view key, const std::string& what) const;
-    /// A length in the scene's units, returned in mm.
+    /// A length in the scene's units, returned in mm; more than kMaxLengthMm either way throws.
     std::optional<double> length(std::string_view key, const std::string& what) const;
     double requiredLength(std::string_view key, const std::string& what) const;
     /// An angle in degrees (number, or a "d°m′s″" string), returned in radians.

@@ -15,6 +15,7 @@
 #include "swarf/sim/error.h"
 #include "swarf/sim/units.h"
 
+#include <cstddef>
 #include <optional>
 #include <string>
 #include <vector>
@@ -187,11 +188,20 @@ struct Pass {
     SourceLoc where;
 };
 
+/// The most passes a plan may hold: more is a slip (a script gone wrong, a depth of cut in the
+/// wrong unit), and each pass costs the simulation a sweep of the whole surface.
+inline constexpr std::size_t kMaxPasses = 200;
+/// The most points a path pass may hold.
+inline constexpr std::size_t kMaxPathPoints = 2000;
+
 /// The pass plan.
 struct Plan {
     std::vector<Pass> passes;
     SourceLoc where;
 };
+
+/// The least planning.max_depth a scene may ask for, mm.
+inline constexpr double kMinMaxDepthMm = 0.01;
 
 /// How the planner should plan (scene section [planning]); lengths mm.
 struct PlanningOptions {
@@ -240,7 +250,8 @@ struct Scene {
     std::vector<double>
         gaugeBlocksMm; ///< the gauge block set for sine bar stacks (empty: built-in)
 
-    /// Checks ranges and consistency; throws InputError naming the key and its location.
+    /// Checks ranges and consistency, and the size of the plan (kMaxPasses, kMaxPathPoints);
+    /// throws InputError naming the key and its location.
     void validate() const;
 };
 

@@ -12,7 +12,8 @@ int editDistance(std::string_view a, std::string_view b);
 
 /// The candidate closest to `word` by edit distance, if it is close enough to be a likely
 /// misspelling (distance at most a third of the longer word's length, and at least 2 allowed;
-/// a candidate that contains the word or is contained in it also counts). Empty string if none.
+/// a candidate that contains the word or is contained in it also counts). Empty string if none,
+/// and for a word longer than 64 characters.
 std::string closestMatch(std::string_view word, const std::vector<std::string>& candidates);
 
 /// The text to put after "expected ": "one of a, b, c; did you mean 'b'?" or, when nothing is
