@@ -92,13 +92,16 @@ Spread spreadOf(std::vector<double> v) {
     if (v.empty())
         return s;
     const double n = static_cast<double>(v.size());
+    // Sums about the first value: equal values give their value and a spread of exactly 0.
+    const double x0 = v.front();
     double sum = 0;
     for (double x : v)
-        sum += x;
-    s.mean = sum / n;
+        sum += x - x0;
+    const double d = sum / n;
+    s.mean = x0 + d;
     double ss = 0;
     for (double x : v)
-        ss += (x - s.mean) * (x - s.mean);
+        ss += (x - x0 - d) * (x - x0 - d);
     s.sd = v.size() > 1 ? std::sqrt(ss / (n - 1)) : 0.0;
     std::sort(v.begin(), v.end());
     auto at = [&](double q) {
