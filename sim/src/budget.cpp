@@ -205,6 +205,7 @@ Budget runBudget(const Scene& scene, const BudgetOptions& options, const Progres
     b.pGaugeInTolerance = static_cast<double>(gaugeIn) / b.samples;
 
     const double total = b.gaugeDiameterMm.sd * b.gaugeDiameterMm.sd;
+    const double totalAngle = b.halfAngleRad.sd * b.halfAngleRad.sd;
     for (BudgetSource src : active) {
         SourceShare s;
         s.source = src;
@@ -218,6 +219,7 @@ Budget runBudget(const Scene& scene, const BudgetOptions& options, const Progres
             s.halfAngleSdRad = b.halfAngleRad.sd;
         }
         s.share = total > 0 ? s.sdMm * s.sdMm / total : 0.0;
+        s.halfAngleShare = totalAngle > 0 ? s.halfAngleSdRad * s.halfAngleSdRad / totalAngle : 0.0;
         b.sources.push_back(s);
     }
     prog.done = prog.total;
@@ -244,20 +246,25 @@ std::string chanceInWords(double p) {
 
 std::string budgetSentence(const Budget& b) {
     std::string s = chanceInWords(b.pInTolerance) + " within tolerance";
-    const SourceShare* top = nullptr;
+    if (b.sources.empty())
+        return s + "; nothing in the set-up is stated as uncertain, so every part comes out the "
+                   "same";
+    // Which spread sends parts out of tolerance: the gauge diameter's, or (when most of the
+    // parts out have their gauge diameter within) the half angle's.
+    const double out = 1.0 - b.pInTolerance, outOnDiameter = 1.0 - b.pGaugeInTolerance;
+    const bool angle = out > 0 && outOnDiameter < 0.5 * out && b.halfAngleRad.sd > 0;
+    auto share = [&](const SourceShare& x) { return angle ? x.halfAngleShare : x.share; };
+    const SourceShare* top = &b.sources.front();
     for (const SourceShare& x : b.sources)
-        if (!top || x.share > top->share)
+        if (share(x) > share(*top))
             top = &x;
-    if (!top) {
-        s += "; nothing in the set-up is stated as uncertain, so every part comes out the same";
-    } else if (b.gaugeDiameterMm.sd > 0 && top->share > 0) {
-        const long pct = std::lround(100.0 * top->share);
-        s += "; " + std::string(budgetSourceName(top->source)) + " is " + std::to_string(pct) +
-             " % of the spread: " + budgetSourceAdvice(top->source);
-    } else if (b.gaugeDiameterMm.sd == 0) {
-        s += "; the stated uncertainties do not move the gauge diameter";
-    }
-    return s;
+    if (share(*top) <= 0)
+        return s + (b.gaugeDiameterMm.sd == 0 && b.halfAngleRad.sd == 0
+                        ? "; the stated uncertainties do not move the cone"
+                        : "");
+    const long pct = std::lround(100.0 * share(*top));
+    return s + "; " + budgetSourceName(top->source) + " is " + std::to_string(pct) + " % of the " +
+           (angle ? "half angle's spread: " : "spread: ") + budgetSourceAdvice(top->source);
 }
 
 } // namespace swarf

@@ -268,4 +268,13 @@ TEST_CASE("budget: the sentence names the chance and the largest source", "[budg
     CHECK(budgetSentence(b) ==
           "9 in 10 parts within tolerance; the compound setting is 70 % of the spread: set it "
           "with the sine bar");
+    // Parts out with their gauge diameter within: the half angle's spread is named.
+    b.pInTolerance = 0.3;
+    b.pGaugeInTolerance = 1.0;
+    b.halfAngleRad.sd = 0.0003;
+    b.sources[0].halfAngleShare = 0.02;
+    b.sources[1].halfAngleShare = 0.97;
+    b.sources[0].share = 0.9;
+    CHECK(budgetSentence(b) == "3 in 10 parts within tolerance; the compound setting is 97 % of "
+                               "the half angle's spread: set it with the sine bar");
 }

@@ -51,16 +51,16 @@ int runBudgetCommand(const BudgetArgs& a) {
             std::string why;
             for (const std::string& p : plan.problems)
                 why += (why.empty() ? "" : "; ") + p;
-            throw InputError(SourceLoc{scene.file, 0, 0}, "plan", "",
-                             "passes to budget: the scene has none and swarf plan cannot plan "
-                             "its cone (" +
+            throw InputError(SourceLoc{scene.file, 0, 0}, "", "",
+                             "nothing to budget: the scene has no passes and swarf plan cannot "
+                             "plan its cone (" +
                                  why + ")");
         }
         scene = plan.scene;
         planned = true;
     }
     if (const std::string why = budgetRefusal(scene); !why.empty())
-        throw InputError(SourceLoc{scene.file, 0, 0}, "", "", "something to budget: " + why);
+        throw InputError(SourceLoc{scene.file, 0, 0}, "", "", "nothing to budget: " + why);
 
     BudgetOptions opt;
     opt.samples = static_cast<int>(a.samples);

@@ -103,6 +103,7 @@ std::string budgetJson(const Scene& scene, const Budget& b, bool planned) {
                        {"share", s.share},
                        {"gauge_diameter_sd_mm", s.sdMm},
                        {"half_angle_sd_deg", radToDeg(s.halfAngleSdRad)},
+                       {"half_angle_share", s.halfAngleShare},
                        {"stated", sourceStated(scene, s.source)}});
         sum += s.share;
     }

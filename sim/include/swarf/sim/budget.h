@@ -47,6 +47,8 @@ struct SourceShare {
     double sdMm = 0;  ///< sd of the gauge diameter with this source alone, mm
     double share = 0; ///< its variance over the variance with every source on (0 when that is 0)
     double halfAngleSdRad = 0; ///< sd of the half angle with this source alone, rad
+    /// Its variance of the half angle over that with every source on (0 when that is 0).
+    double halfAngleShare = 0;
 };
 
 /// The budget.
@@ -91,7 +93,8 @@ std::string chanceInWords(double p);
 
 /// The sentence a machinist needs: the chance of a part within tolerance, and the largest
 /// source with what to do about it ("9 in 10 parts within tolerance; the compound setting is
-/// 70 % of the spread: set it with the sine bar").
+/// 70 % of the spread: set it with the sine bar"). The spread named is the gauge diameter's,
+/// or the half angle's when most parts out of tolerance have their gauge diameter within it.
 std::string budgetSentence(const Budget& budget);
 
 } // namespace swarf
