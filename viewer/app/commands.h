@@ -5,10 +5,11 @@
 
 namespace swarf::app {
 
-void registerCheck(CLI::App& app, int& exitCode); ///< swarf check SCENE
-void registerTaper(CLI::App& app, int& exitCode); ///< swarf taper ... (bench calculator)
-void registerRun(CLI::App& app, int& exitCode);   ///< swarf run SCENE --out DIR
-void registerView(CLI::App& app, int& exitCode);  ///< swarf view SCENE
-void registerPlan(CLI::App& app, int& exitCode);  ///< swarf plan SCENE --out DIR
+void registerCheck(CLI::App& app, int& exitCode);  ///< swarf check SCENE
+void registerTaper(CLI::App& app, int& exitCode);  ///< swarf taper ... (bench calculator)
+void registerRun(CLI::App& app, int& exitCode);    ///< swarf run SCENE --out DIR
+void registerView(CLI::App& app, int& exitCode);   ///< swarf view SCENE
+void registerPlan(CLI::App& app, int& exitCode);   ///< swarf plan SCENE --out DIR
+void registerBudget(CLI::App& app, int& exitCode); ///< swarf budget SCENE --out DIR
 
 } // namespace swarf::app

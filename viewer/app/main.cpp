@@ -16,6 +16,7 @@ int main(int argc, char** argv) {
     swarf::app::registerRun(app, exitCode);
     swarf::app::registerView(app, exitCode);
     swarf::app::registerPlan(app, exitCode);
+    swarf::app::registerBudget(app, exitCode);
     try {
         app.parse(argc, argv);
     } catch (const CLI::CallForHelp& e) {

@@ -89,6 +89,7 @@ std::optional<InsertCode> parseInsertCode(std::string_view code) {
     auto digit = [](char c) { return std::isdigit(static_cast<unsigned char>(c)) != 0; };
     InsertCode out;
     out.shape = s[0];
+    out.toleranceClass = s[2];
     // Size: two digits, whole mm of the edge length (for round inserts, the diameter): the
     // edge itself follows from the inscribed circle the code stands for.
     if (!digit(s[4]) || !digit(s[5]))
@@ -185,6 +186,38 @@ std::optional<double> edgeLengthFromInscribedCircleMm(char shape, double icMm) {
         return 2 * rho * cotDeg(67.5);
     case 'R':
         return icMm;
+    default:
+        return std::nullopt;
+    }
+}
+
+std::optional<double> iso1832CornerToleranceMm(char classLetter, double inscribedCircleMm) {
+    // From memory (see the header): the m tolerances of the classes; M, N and U grow with the
+    // inscribed circle.
+    const double ic = inscribedCircleMm - 1e-6; // 12.7 itself is in the step up to 12.7
+    const int step = ic <= 9.525 ? 0 : ic <= 12.7 ? 1 : ic <= 19.05 ? 2 : 3;
+    switch (std::toupper(static_cast<unsigned char>(classLetter))) {
+    case 'A':
+    case 'F':
+    case 'J':
+        return 0.005;
+    case 'C':
+    case 'H':
+    case 'K':
+        return 0.013;
+    case 'E':
+    case 'G':
+    case 'L':
+        return 0.025;
+    case 'M':
+    case 'N': {
+        static const double mn[] = {0.08, 0.13, 0.15, 0.18};
+        return mn[step];
+    }
+    case 'U': {
+        static const double u[] = {0.13, 0.2, 0.27, 0.38};
+        return u[step];
+    }
     default:
         return std::nullopt;
     }

@@ -198,7 +198,7 @@ Scene readSceneText(const std::string& text, const std::string& fileName) {
     detail::ReadContext ctx{fileName, Units::Mm};
     Fields root(doc, "", ctx,
                 {"name", "description", "units", "stock", "part", "tool", "setup", "plan",
-                 "planning", "sim", "expect", "gauge_blocks"});
+                 "planning", "sim", "expect", "gauge_blocks", "uncertainty"});
     Scene scene;
     scene.file = fileName;
     if (auto u = root.choice("units", {"mm", "inch"}))
@@ -218,6 +218,7 @@ Scene readSceneText(const std::string& text, const std::string& fileName) {
     scene.sim = readSim(root);
     scene.expect = readExpect(root);
     scene.gaugeBlocksMm = readGaugeBlocks(root);
+    scene.uncertainty = detail::readUncertainty(root, scene.tool, scene.setup);
     scene.validate();
     return scene;
 }

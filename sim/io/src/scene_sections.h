@@ -15,6 +15,9 @@ Setup readSetup(const Fields& root);
 /// [[plan.pass]] (the [plan] table may be absent: an empty plan).
 Plan readPlan(const Fields& root);
 
+/// [uncertainty] (every key optional: exact), with limits from the tool and the slides.
+Uncertainty readUncertainty(const Fields& root, const Tool& tool, const Setup& setup);
+
 /// Checks that a present number is > 0 (or ≥ 0 when zeroAllowed).
 void requirePositive(const Fields& f, std::string_view key, double value, bool zeroAllowed = false);
 

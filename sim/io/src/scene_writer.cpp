@@ -86,6 +86,41 @@ const char* widens(Widens w) {
     return w == Widens::TowardChuck ? "chuck" : "tailstock";
 }
 
+// [uncertainty], only the keys that are not exact. An insert's ISO class tolerance (±t,
+// uniform) is written as its standard deviation t/√3: the written scene names no insert code.
+void writeUncertainty(Out& o, const Uncertainty& u) {
+    if (u.exact())
+        return;
+    o.line("");
+    o.line("[uncertainty]");
+    if (u.compoundAngleSdRad > 0)
+        o.deg("compound_angle_sd", u.compoundAngleSdRad);
+    if (u.crossReadingMm > 0)
+        o.len("cross_reading", u.crossReadingMm);
+    if (u.compoundReadingMm > 0)
+        o.len("compound_reading", u.compoundReadingMm);
+    if (u.saddleReadingMm > 0)
+        o.len("saddle_reading", u.saddleReadingMm);
+    const auto backlash = [&](const char* key, BacklashKnowledge k) {
+        if (k == BacklashKnowledge::Unknown)
+            o.str(key, "unknown");
+    };
+    backlash("cross_backlash", u.crossBacklash);
+    backlash("compound_backlash", u.compoundBacklash);
+    backlash("saddle_backlash", u.saddleBacklash);
+    if (u.tipHeightSdMm > 0)
+        o.len("tip_height_sd", u.tipHeightSdMm);
+    if (u.noseRadiusToleranceMm > 0) {
+        o.line(std::string("# the insert's ISO 1832 class ") + u.noseRadiusClass + " (uniform, ± " +
+               num(u.noseRadiusToleranceMm) + " mm) as its sd");
+        o.len("nose_radius_sd", u.noseRadiusToleranceMm / std::sqrt(3.0));
+    } else if (u.noseRadiusSdMm > 0) {
+        o.len("nose_radius_sd", u.noseRadiusSdMm);
+    }
+    if (u.measuringSdMm > 0)
+        o.len("measuring_sd", u.measuringSdMm);
+}
+
 void writeFeature(Out& o, const Feature& f) {
     o.line("");
     o.line("[[part.feature]]");
@@ -286,6 +321,7 @@ std::string sceneToToml(const Scene& sc, const std::vector<std::string>& headerC
         if (e.noFindings)
             o.raw("no_findings", "true");
     }
+    writeUncertainty(o, sc.uncertainty);
     if (!sc.gaugeBlocksMm.empty()) {
         o.line("");
         o.line("[gauge_blocks]");

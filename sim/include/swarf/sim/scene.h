@@ -13,6 +13,7 @@
 //   lowest x and at the leading z meet. Dials are zeroed on that point.
 #include "swarf/sim/cone.h"
 #include "swarf/sim/error.h"
+#include "swarf/sim/uncertainty.h"
 #include "swarf/sim/units.h"
 
 #include <cstddef>
@@ -247,6 +248,7 @@ struct Scene {
     SimOptions sim;
     PlanningOptions planning;
     Expect expect;
+    Uncertainty uncertainty; ///< how sure the set-up is ([uncertainty]); exact by default
     std::vector<double>
         gaugeBlocksMm; ///< the gauge block set for sine bar stacks (empty: built-in)
 

@@ -19,7 +19,8 @@ std::optional<double> holderEnteringAngleDeg(char letter);
 
 /// What an ISO 1832 metric insert designation ("DCMT 11T304", "CNMG120408") says.
 struct InsertCode {
-    char shape = 0; ///< shape letter (first character)
+    char shape = 0;          ///< shape letter (first character)
+    char toleranceClass = 0; ///< tolerance class letter (third character: "DCMT" → 'M')
     /// The cutting edge length, mm: worked out from the inscribed circle and the shape (11.6 mm
     /// for "DCMT 11T304"); for a parallelogram (K), whose edge the circle does not fix, the
     /// size code's whole millimetres.
@@ -53,6 +54,14 @@ std::optional<double> inscribedCircleOfSizeCodeMm(char shape, int sizeCode);
 /// codes of two characters each, spaces ignored, anything after the radius code ignored (chip
 /// breaker suffixes). Empty if it is not one.
 std::optional<InsertCode> parseInsertCode(std::string_view code);
+
+/// Half-width (mm) of the tolerance an ISO 1832 tolerance class letter gives an insert's corner
+/// (its "m" dimension), taken as the tolerance of its nose radius, for an insert whose inscribed
+/// circle is `inscribedCircleMm`: A, F, J 0.005; C, H, K 0.013; E, G, L 0.025; M and N 0.08 up to
+/// 9.525 mm IC, 0.13 up to 12.7, 0.15 up to 19.05, 0.18 above; U 0.13, 0.2, 0.27, 0.38 over the
+/// same steps (from memory: the class table as tool makers' catalogues print it; ISO 1832 gives
+/// no separate nose-radius tolerance). Empty for a letter it does not know.
+std::optional<double> iso1832CornerToleranceMm(char classLetter, double inscribedCircleMm);
 
 /// Diameter of the insert's inscribed circle (mm) from its corner angle ε (rad) and cutting
 /// edge length (mm): the inverse of edgeLengthFromInscribedCircleMm for the shapes it knows

@@ -1,0 +1,124 @@
+// `swarf budget`: writes budget.json and report.html for the demo, the same file for the same
+// seed, one line per source and the sentence on the console; refuses bad options, bad scenes
+// and scenes with nothing to budget with exit 2 and nothing written.
+#include <catch2/catch.hpp>
+
+#include <nlohmann/json.hpp>
+
+#include <cstdio>
+#include <filesystem>
+#include <fstream>
+#include <sstream>
+#include <string>
+#include <sys/wait.h>
+#include <unistd.h>
+
+namespace fs = std::filesystem;
+
+namespace {
+
+struct Run {
+    int exitCode = -1;
+    std::string out, err;
+};
+
+std::string slurp(const std::string& path) {
+    std::ifstream in(path);
+    std::stringstream ss;
+    ss << in.rdbuf();
+    return ss.str();
+}
+
+Run runSwarf(const std::string& args) {
+    const std::string errFile = "budget_cli_test." + std::to_string(getpid()) + ".stderr.txt";
+    const std::string cmd = std::string("'") + SWARF_BINARY + "' " + args + " 2>" + errFile;
+    Run r;
+    FILE* p = popen(cmd.c_str(), "r");
+    REQUIRE(p != nullptr);
+    char buf[4096];
+    std::size_t n;
+    while ((n = std::fread(buf, 1, sizeof buf, p)) > 0)
+        r.out.append(buf, n);
+    const int status = pclose(p);
+    r.exitCode = WIFEXITED(status) ? WEXITSTATUS(status) : -1;
+    r.err = slurp(errFile);
+    std::remove(errFile.c_str());
+    return r;
+}
+
+std::string scene(const char* name) {
+    return std::string("'") + SWARF_SCENES_DIR + "/" + name + "'";
+}
+
+} // namespace
+
+TEST_CASE("swarf budget writes budget.json and the report for the demo", "[cli][budget]") {
+    const fs::path dir = fs::temp_directory_path() / "swarf-budget-cli-demo";
+    fs::remove_all(dir);
+    const Run r = runSwarf("budget " + scene("fixture-arbor.toml") + " --out '" + dir.string() +
+                           "' --samples 300 --seed 5 --no-pictures");
+    INFO(r.out << r.err);
+    REQUIRE(r.exitCode == 0);
+    CHECK(r.out.find("the compound setting (sd 1.5′)") != std::string::npos);
+    CHECK(r.out.find("% of the spread") != std::string::npos);
+    CHECK(r.out.find("parts within tolerance;") != std::string::npos);
+    const auto j = nlohmann::json::parse(slurp((dir / "budget.json").string()));
+    CHECK(j["format"] == "swarf budget");
+    CHECK(j["samples"] == 300);
+    CHECK(j["seed"] == 5);
+    for (const char* k : {"mean", "sd", "p2_5", "p97_5"}) {
+        CHECK(j["gauge_diameter_mm"][k].is_number());
+        CHECK(j["half_angle_deg"][k].is_number());
+    }
+    CHECK(j["gauge_diameter_mm"]["p2_5"] <= j["gauge_diameter_mm"]["p97_5"]);
+    CHECK(j["p_in_tolerance"] >= 0.0);
+    CHECK(j["p_in_tolerance"] <= 1.0);
+    // The demo states eight sources (scenes/fixture-arbor.toml, [uncertainty]).
+    REQUIRE(j["sources"].size() == 8);
+    CHECK(j["sources"][0]["name"] == "compound_angle");
+    CHECK(fs::exists(dir / "report.html"));
+    CHECK_FALSE(fs::exists(dir / "budget.png"));
+
+    // The same seed gives the same file.
+    const fs::path again = fs::temp_directory_path() / "swarf-budget-cli-again";
+    fs::remove_all(again);
+    REQUIRE(runSwarf("budget " + scene("fixture-arbor.toml") + " --out '" + again.string() +
+                     "' --samples 300 --seed 5 --no-pictures")
+                .exitCode == 0);
+    CHECK(slurp((again / "budget.json").string()) == slurp((dir / "budget.json").string()));
+    fs::remove_all(dir);
+    fs::remove_all(again);
+}
+
+TEST_CASE("swarf budget refuses bad input and scenes with nothing to budget, writing nothing",
+          "[cli][budget]") {
+    const fs::path dir = fs::temp_directory_path() / "swarf-budget-cli-refused";
+    fs::remove_all(dir);
+    const std::string out = " --out '" + dir.string() + "' --no-pictures";
+    Run r = runSwarf("budget " + scene("fixture-arbor.toml") + out + " --samples 1");
+    CHECK(r.exitCode == 2);
+    CHECK(r.err.find("--samples") != std::string::npos);
+    r = runSwarf("budget " + scene("plan-chamfer-45.toml") + out);
+    CHECK(r.exitCode == 2);
+    CHECK(r.err.find("nothing to budget: the drawing has no cone") != std::string::npos);
+    r = runSwarf(std::string("budget '") + SWARF_TEST_DATA_DIR +
+                 "/bad_scenes/uncertainty-backlash-unsure.toml'" + out);
+    CHECK(r.exitCode == 2);
+    CHECK(r.err.find("uncertainty.saddle_backlash") != std::string::npos);
+    CHECK(r.out.empty());
+    CHECK_FALSE(fs::exists(dir));
+}
+
+TEST_CASE("swarf budget plans a scene without passes first", "[cli][budget]") {
+    const fs::path dir = fs::temp_directory_path() / "swarf-budget-cli-planned";
+    fs::remove_all(dir);
+    const Run r = runSwarf("budget " + scene("plan-morse-3-inch.toml") + " --out '" + dir.string() +
+                           "' --samples 100 --no-pictures");
+    INFO(r.out << r.err);
+    REQUIRE(r.exitCode == 0);
+    CHECK(r.out.find("passes planned by swarf plan") != std::string::npos);
+    const auto j = nlohmann::json::parse(slurp((dir / "budget.json").string()));
+    CHECK(j["passes_planned"] == true);
+    CHECK(j["scene"]["units"] == "in");
+    fs::remove_all(dir);
+}
