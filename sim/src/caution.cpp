@@ -1,6 +1,7 @@
 // The safety cautions (see caution.h).
 #include "swarf/sim/caution.h"
 
+#include <cctype>
 #include <sstream>
 
 namespace swarf {
@@ -12,6 +13,9 @@ const std::vector<std::string>& safetyCautions() {
         "No gloves, loose sleeves, ties, jewellery or long loose hair near rotating work. Wear eye "
         "protection. Clear swarf with a brush or hook, never by hand, and only with the spindle "
         "stopped.",
+        "Before starting the spindle, turn the chuck by hand through a full turn with the tool at "
+        "its nearest point: swarf checks the insert against the jaws, not the holder, the tool "
+        "post or the swung compound.",
         "Keep the work's stick-out short (about three diameters or less in a chuck alone) or "
         "support it with the tailstock; check the work is held tight before starting.",
         "Take cutting speeds, feeds and depths of cut from the tooling supplier's data for this "
@@ -24,6 +28,24 @@ const std::vector<std::string>& safetyCautions() {
         "here.",
     };
     return kCautions;
+}
+
+std::optional<std::string> materialCaution(const std::string& material) {
+    // Free-cutting leaded steels (11SMnPb30, 12L14), leaded brasses (CuZn39Pb3) and bronzes:
+    // "Pb" in the designation, the word, or a common number for one (from memory: 1.0718 and
+    // 1.0737 for 11SMnPb30/37, CW614N and CW603N the EN numbers of leaded brasses, C36000 and
+    // CZ121 older ones). Common practice: lead on the hands and in the swarf.
+    std::string lower;
+    for (unsigned char c : material)
+        lower += static_cast<char>(std::tolower(c));
+    bool lead = material.find("Pb") != std::string::npos || lower.find("lead") != std::string::npos;
+    for (const char* code : {"12l14", "1.0718", "1.0737", "cw614n", "cw603n", "c36000", "cz121"})
+        lead = lead || lower.find(code) != std::string::npos;
+    if (!lead)
+        return std::nullopt;
+    return "This material contains lead: do not eat, drink or smoke at the machine, wash your "
+           "hands "
+           "before you do, and keep its swarf apart for disposal as the shop's rules say.";
 }
 
 const std::string& safetyCautionShort() {

@@ -7,6 +7,10 @@
 
 namespace swarf {
 
+const char* verdictWords(bool withinTolerance) {
+    return withinTolerance ? "within tolerance" : "out of tolerance";
+}
+
 const char* findingKindName(FindingKind kind) {
     switch (kind) {
     case FindingKind::LeftOn:

@@ -89,8 +89,8 @@ TEST_CASE("swarf run prints the figures of result.json, on every scene", "[cli][
         CHECK(contains(r.out, "diameter as cut " +
                                   formatLength(j["gauge"]["as_cut_diameter_mm"].get<double>(), u,
                                                Precision::Fine)));
-        CHECK(contains(r.out, j["verdict"] == "in_tolerance" ? "verdict: IN TOLERANCE"
-                                                             : "verdict: OUT OF TOLERANCE"));
+        CHECK(contains(r.out, j["verdict"] == "in_tolerance" ? "verdict: within tolerance"
+                                                             : "verdict: out of tolerance"));
         for (const auto& f : j["features"]) {
             INFO(f["name"].get<std::string>());
             CHECK(contains(r.out, f["name"].get<std::string>() + ": left on " +
@@ -124,4 +124,39 @@ TEST_CASE("swarf run refuses a finishing feed of twice the nose radius", "[cli][
     CHECK(contains(r.err, "twice the nose radius"));
     CHECK_FALSE(fs::exists(dir)); // nothing written
     fs::remove(scene);
+}
+
+TEST_CASE("swarf run names findings in words and says when a scene has no passes", "[cli][run]") {
+    const fs::path dir =
+        fs::temp_directory_path() / ("swarf-run-cli-words-" + std::to_string(getpid()));
+    fs::remove_all(dir);
+    // A plan scene has no passes yet.
+    const Run r =
+        runSwarf("run '" + std::string(SWARF_SCENES_DIR) + "/plan-lathe-centre.toml' --out '" +
+                 dir.string() + "' --no-pictures --no-step");
+    INFO(r.out << r.err);
+    CHECK(contains(r.out, "no passes: make them with `swarf plan"));
+    // The finding is named as people say it; its snake_case kind stays in result.json only.
+    CHECK(contains(r.out, "metal left on, the plan: "));
+    CHECK_FALSE(contains(r.out, "[left_on]"));
+    CHECK(contains(slurp(dir / "result.json"), "\"kind\": \"left_on\""));
+    fs::remove_all(dir);
+}
+
+TEST_CASE("swarf plan ends with the caution, planned or not", "[cli][plan]") {
+    for (const char* scene : {"plan-lathe-centre.toml", "plan-valve-seat-rub.toml"}) {
+        const fs::path dir =
+            fs::temp_directory_path() / ("swarf-plan-cli-caution-" + std::to_string(getpid()));
+        fs::remove_all(dir);
+        const Run r = runSwarf("plan '" + std::string(SWARF_SCENES_DIR) + "/" + scene +
+                               "' --out '" + dir.string() + "'");
+        INFO(scene << "\n" << r.out << r.err);
+        CHECK(r.exitCode == 0);
+        const auto at = r.out.rfind("CAUTION:");
+        REQUIRE(at != std::string::npos);
+        // Nothing after the caution but its own wrapped lines.
+        CHECK(r.out.find("wrote", at) == std::string::npos);
+        CHECK(contains(r.out.substr(at), "stop the spindle before measuring"));
+        fs::remove_all(dir);
+    }
 }

@@ -94,3 +94,16 @@ TEST_CASE("swarf taper: bad values exit 2 with the option, the value and what wa
         CHECK_FALSE(has(r.out, "Cone:")); // nothing half-printed
     }
 }
+
+TEST_CASE("swarf taper --at with a negative distance says it the other way, no double negative",
+          "[cli][taper]") {
+    // A 1:20 cone gauged at its large end (Ø30): 35 mm toward the large end, beyond the gauge
+    // plane, is Ø30 + 35/20 = Ø31.750 (derived).
+    const Run r = runSwarf("taper --ratio 1:20 --dia 30 --length 50 --at -35");
+    INFO(r.out);
+    CHECK(r.exitCode == 0);
+    CHECK(has(r.out, "35.000 mm from the gauge plane toward the large end: diameter 31.750 mm"));
+    CHECK_FALSE(has(r.out, "-35.000 mm"));
+    const Run s = runSwarf("taper --ratio 1:20 --dia 30 --length 50 --at 35");
+    CHECK(has(s.out, "35.000 mm from the gauge plane toward the small end: diameter 28.250 mm"));
+}

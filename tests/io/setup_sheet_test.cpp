@@ -55,7 +55,14 @@ TEST_CASE("the sheet carries the safety cautions", "[io][sheet]") {
         CHECK(has(text, "forces"));
         CHECK(has(text, "deflection"));
         CHECK(has(text, "chatter"));
+        CHECK(has(text, "turn the chuck by hand"));
+        // tool steel: no lead caution
+        CHECK_FALSE(has(text, "contains lead"));
     }
+    // A leaded free-cutting steel (11SMnPb30) gets the lead caution (common practice).
+    const ConePlan leaded = planOf("plan-1-20-chuck-out.toml");
+    REQUIRE(leaded.planned);
+    CHECK(has(io::setupSheetText(leaded), "This material contains lead"));
 }
 
 TEST_CASE("each pass's readings appear as turns and divisions", "[io][sheet]") {

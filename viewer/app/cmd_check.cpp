@@ -3,6 +3,7 @@
 #include "commands.h"
 #include "swarf/io/scene_reader.h"
 #include "swarf/sim/compound_sense.h"
+#include "swarf/sim/cut.h"
 #include "swarf/sim/error.h"
 #include "swarf/sim/iso2768.h"
 #include "swarf/sim/scene_notes.h"
@@ -153,9 +154,8 @@ void printScene(const Scene& s) {
                len(s.planning.maxDepthMm, u), len(s.planning.finishAllowanceMm, u),
                len(s.planning.roughFeedMmPerRev, u), len(s.planning.finishFeedMmPerRev, u));
     if (s.expect.withinTolerance || !s.expect.findings.empty() || s.expect.noFindings) {
-        std::string e = s.expect.withinTolerance
-                            ? (*s.expect.withinTolerance ? "in tolerance" : "out of tolerance")
-                            : "no verdict stated";
+        std::string e = s.expect.withinTolerance ? verdictWords(*s.expect.withinTolerance)
+                                                 : "no verdict stated";
         for (const auto& k : s.expect.findings)
             e += ", " + k;
         if (s.expect.noFindings)

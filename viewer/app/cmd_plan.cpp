@@ -64,6 +64,8 @@ int runPlan(const PlanArgs& a) {
         }
         fmt::print("wrote {} and {}\n", (dir / "setup-sheet.txt").string(),
                    (dir / "setup-sheet.html").string());
+        for (const std::string& line : wrapWords(safetyCautionShort(), 96))
+            fmt::print("{}\n", line);
         return kExitOk;
     }
 
@@ -84,7 +86,7 @@ int runPlan(const PlanArgs& a) {
                formatLength(plan.noseOffsetRadialMm, u));
     for (const std::string& c : plan.cautions)
         fmt::print("  note: {}\n", c);
-    fmt::print("simulated: {}\n", result.withinTolerance ? "WITHIN TOLERANCE" : "OUT OF TOLERANCE");
+    fmt::print("simulated: {}\n", verdictWords(result.withinTolerance));
     if (!result.withinTolerance || !result.findings.empty())
         fmt::print(
             "  WARNING: the plan does not prove itself; do not cut from it before the findings "
@@ -94,11 +96,14 @@ int runPlan(const PlanArgs& a) {
                formatLength(result.gaugeNominalDiameterMm, u),
                formatSmallLength(result.maxLeftOnMm, u), formatSmallLength(result.maxOvercutMm, u));
     for (const Finding& f : result.findings)
-        fmt::print("  finding {} (pass {}): {}\n", findingKindName(f.kind), f.pass + 1, f.message);
+        fmt::print("  finding: {}{}: {}\n", findingLabel(f.kind),
+                   f.pass >= 0 ? fmt::format(" (pass {})", f.pass + 1) : std::string(), f.message);
     if (result.findings.empty())
         fmt::print("  no findings\n");
     fmt::print("wrote {}, {}, {}\n", plannedPath, (dir / "setup-sheet.txt").string(),
                (dir / "setup-sheet.html").string());
+    for (const std::string& line : wrapWords(safetyCautionShort(), 96))
+        fmt::print("{}\n", line);
     return kExitOk;
 }
 

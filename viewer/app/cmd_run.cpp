@@ -42,7 +42,7 @@ void printSummary(const Scene& s, const CutResult& r) {
     // The figures as every other place shows them (result_figures.h).
     const ResultFigures fig = resultFigures(s, r);
     fmt::print("scene: {}\n", s.name);
-    fmt::print("verdict: {}\n", fig.within ? "IN TOLERANCE" : "OUT OF TOLERANCE");
+    fmt::print("verdict: {}\n", verdictWords(fig.within));
     fmt::print("gauge plane z = {}: diameter as cut {}, drawing {} ({})\n", fig.gaugePlane,
                fig.gaugeAsCut, fig.gaugeDrawing, fig.gaugeError);
     fmt::print("largest metal left on: {}   largest overcut: {}   (normal to the surface; left on "
@@ -61,7 +61,7 @@ void printSummary(const Scene& s, const CutResult& r) {
     } else {
         fmt::print("findings:\n");
         for (const Finding& f : r.findings)
-            fmt::print("  [{}] {}: {}\n", findingKindName(f.kind), passName(s, f.pass), f.message);
+            fmt::print("  {}, {}: {}\n", findingLabel(f.kind), passName(s, f.pass), f.message);
     }
 }
 
@@ -88,6 +88,11 @@ void registerRun(CLI::App& app, int& exitCode) {
         // Read first: a bad scene writes nothing; nor does one the machine cannot hold.
         const Scene s = io::readScene(*scene);
         requireFits(s, {true, !*noStep, !*noPictures}, availableMemoryBytes());
+        if (s.plan.passes.empty())
+            fmt::print(
+                "no passes: make them with `swarf plan {} --out DIR` (or write [[plan.pass]] "
+                "tables); what follows is the bar as it stands against the drawing\n",
+                *scene);
         CutResult result;
         {
             ProgressBar bar;

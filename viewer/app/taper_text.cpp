@@ -57,10 +57,13 @@ void printCone(Out& out, const TaperRequest& b) {
             u == Units::Inch ? "foot" : "100 mm");
     const Cone cone{0, b.gaugeDiaMm, t, Widens::TowardChuck};
     if (b.atMm) {
-        // Positive toward the cone's other end.
+        // Positive toward the cone's other end; a negative distance is said as a distance the
+        // other way (no double negative), and beyond the gauge plane's end if the gauge is at one.
         const double d = cone.diameterAt((b.gaugeAtLarge ? -1 : 1) * *b.atMm);
-        out.say("  at {} from the gauge plane toward the {} end: diameter {}\n",
-                formatLength(*b.atMm, u), b.gaugeAtLarge ? "small" : "large", formatLength(d, u));
+        const bool towardSmall = (*b.atMm >= 0) == b.gaugeAtLarge;
+        out.say("  {} from the gauge plane toward the {} end: diameter {}\n",
+                formatLength(std::fabs(*b.atMm), u), towardSmall ? "small" : "large",
+                formatLength(d, u));
     }
     if (b.toDiaMm) {
         const double d = *b.toDiaMm;

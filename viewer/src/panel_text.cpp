@@ -12,6 +12,23 @@
 
 namespace swarf::viewer::detail {
 
+namespace {
+
+// The band the colours and figures are judged against, said as what it is: ± normal to the
+// surface, beside the drawing's own ± on diameter (the main cone's, else the first feature's).
+std::string bandWords(const Scene& scene, const DeviationScale& scale) {
+    const Units u = scene.units;
+    const Feature* f = scene.part.mainCone();
+    if (!f && !scene.part.features.empty())
+        f = &scene.part.features.front();
+    std::string s = "band +/-" + formatSmallLength(scale.bandMm, u) + " normal to the surface";
+    if (f)
+        s += " (drawing +/-" + formatLength(f->toleranceMm, u) + " on diameter)";
+    return s;
+}
+
+} // namespace
+
 std::string momentPanelText(const Scene& scene, const CutResult& result, const MomentView& m,
                             const DeviationScale& scale) {
     const Units u = scene.units;
@@ -41,19 +58,20 @@ std::string momentPanelText(const Scene& scene, const CutResult& result, const M
         // The finished part: the result's own figures, as the terminal, result.json and the
         // report give them (crests of the feed marks in the left-on).
         const ResultFigures fig = resultFigures(scene, result);
-        s += fmt::format("Finished: most left on {}, most overcut {} (tolerance +/-{})\n",
-                         fig.leftOn, fig.overcut, formatSmallLength(scale.bandMm, u));
-        s += fmt::format("Feed marks Rt {}, Ra {}\nVerdict: {}", fig.rt, fig.ra,
-                         fig.within ? "within tolerance" : "OUT OF TOLERANCE");
+        s += fmt::format("Finished: most left on {}, most overcut {} ({})\n", fig.leftOn,
+                         fig.overcut, bandWords(scene, scale));
+        s += fmt::format("Feed marks Rt {}, Ra {}\nVerdict: {}\n", fig.rt, fig.ra,
+                         verdictWords(fig.within));
+        s += "The jaws are drawn to show where the bar is held, not to size.";
         return s;
     }
     // Part-way: the swept profile now, counted as the verdict counts it (not within a nose
     // radius of an inside corner, where the nose leaves its fillet).
     const DeviationExtremes now = deviationExtremes(
         m.deviationMm, verdictMask(scene.part, m.profile, scene.tool.noseRadiusMm));
-    s += fmt::format("Now: most left on {}, most overcut {} (tolerance +/-{})",
+    s += fmt::format("Now: most left on {}, most overcut {} ({})",
                      formatSmallLength(now.leftOnMm, u), formatSmallLength(now.overcutMm, u),
-                     formatSmallLength(scale.bandMm, u));
+                     bandWords(scene, scale));
     return s;
 }
 

@@ -53,8 +53,8 @@ std::string reportHtml(const Scene& scene, const CutResult& result,
 
     // Verdict.
     const ResultFigures fig = resultFigures(scene, result);
-    h += fig.within ? "<p class=\"ok\"><b>Verdict: within tolerance.</b>"
-                    : "<p class=\"bad\"><b>Verdict: out of tolerance.</b>";
+    h += std::string(fig.within ? "<p class=\"ok\">" : "<p class=\"bad\">") +
+         "<b>Verdict: " + verdictWords(fig.within) + ".</b>";
     h += fmt::format(" Most metal left on: {} (to the crests of the feed marks); most overcut: "
                      "{}.</p>\n",
                      esc(fig.leftOn), esc(fig.overcut));

@@ -71,7 +71,10 @@ std::string resultJson(const Scene& scene, const CutResult& r) {
     ordered_json findings = ordered_json::array();
     for (const Finding& f : r.findings) {
         ordered_json o = {
-            {"kind", findingKindName(f.kind)}, {"pass", f.pass}, {"message", f.message}};
+            {"kind", findingKindName(f.kind)},
+            {"pass", f.pass},
+            {"pass_number", f.pass >= 0 ? ordered_json(f.pass + 1) : ordered_json(nullptr)},
+            {"message", f.message}};
         // Each figure under its own key and unit; a figure the finding has not is left out.
         if (std::isfinite(f.zMm))
             o["z_mm"] = f.zMm;

@@ -28,8 +28,11 @@ const char* towardName(Widens w) {
     return w == Widens::TowardChuck ? "chuck" : "tailstock";
 }
 
-Section safetySection() {
-    return {"Safety first", {listBlock(safetyCautions(), Block::Kind::Warn)}};
+Section safetySection(const Scene& scene) {
+    std::vector<std::string> l = safetyCautions();
+    if (auto m = materialCaution(scene.stock.material))
+        l.push_back(*m);
+    return {"Safety first", {listBlock(l, Block::Kind::Warn)}};
 }
 
 Section noPlanSection(const ConePlan& plan) {
@@ -190,15 +193,15 @@ Section finishSection(const Ctx& c) {
 
 Section proofSection(const Ctx& c, const CutResult& proof) {
     std::vector<std::string> l;
-    l.push_back(std::string("Verdict: ") +
-                (proof.withinTolerance ? "within tolerance" : "OUT OF TOLERANCE") + ".");
+    l.push_back(std::string("Verdict: ") + verdictWords(proof.withinTolerance) + ".");
     l.push_back("Gauge diameter as cut Ø" + c.L(proof.gaugeAsCutDiameterMm) + " (drawing Ø" +
                 c.L(proof.gaugeNominalDiameterMm) + "); most metal left on " +
                 formatSmallLength(proof.maxLeftOnMm, c.u) + ", deepest overcut " +
                 formatSmallLength(proof.maxOvercutMm, c.u) + ".");
     for (const Finding& fd : proof.findings)
-        l.push_back(std::string(findingKindName(fd.kind)) + " (pass " +
-                    std::to_string(fd.pass + 1) + "): " + fd.message);
+        l.push_back(std::string(findingLabel(fd.kind)) +
+                    (fd.pass >= 0 ? " (pass " + std::to_string(fd.pass + 1) + ")" : std::string()) +
+                    ": " + fd.message);
     if (proof.findings.empty())
         l.push_back("No findings.");
     return {"The plan, simulated", {listBlock(l)}};
@@ -209,7 +212,7 @@ Document buildSheet(const ConePlan& plan, const CutResult* proof) {
     Document sh;
     sh.title = "Set-up sheet: " + c.sc.name;
     sh.subtitle = c.sc.description;
-    sh.sections.push_back(safetySection());
+    sh.sections.push_back(safetySection(c.sc));
     if (!plan.planned) {
         sh.sections.push_back(noPlanSection(plan));
         return sh;

@@ -81,6 +81,11 @@ enum class FindingKind {
 /// Every finding kind, in the order above.
 const std::vector<FindingKind>& allFindingKinds();
 
+/// The verdict as people read it, the same on every screen, sheet and report: "within
+/// tolerance" or "out of tolerance" (result.json keeps the keys in_tolerance and
+/// out_of_tolerance).
+const char* verdictWords(bool withinTolerance);
+
 /// "left_on", "overcut", ... as written in result.json.
 const char* findingKindName(FindingKind kind);
 
