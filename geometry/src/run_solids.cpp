@@ -75,8 +75,8 @@ RunSolidsReport writeRunSolids(const RunSolids& s, const CutResult& result,
         writeStep(r.files.back(), {{"nominal", s.nominal}});
     }
     if (options.writeLeftover && !s.leftover.empty()) {
-        r.files.push_back(file("leftover.step"));
-        writeStep(r.files.back(), {{"leftover", s.leftover}});
+        r.files.push_back(file("left-on.step"));
+        writeStep(r.files.back(), {{"left-on", s.leftover}});
     }
     if (options.writeOvercut && !s.overcut.empty()) {
         r.files.push_back(file("overcut.step"));

@@ -21,8 +21,8 @@ const char* findingKindName(FindingKind kind) {
         return "rubbing";
     case FindingKind::JawCrash:
         return "jaw_crash";
-    case FindingKind::PastStock:
-        return "past_stock";
+    case FindingKind::CrossesCentre:
+        return "crosses_centre";
     case FindingKind::CompoundTravel:
         return "compound_travel";
     case FindingKind::DepthOfCut:
@@ -42,7 +42,7 @@ const char* findingKindName(FindingKind kind) {
 const std::vector<FindingKind>& allFindingKinds() {
     static const std::vector<FindingKind> kinds = {
         FindingKind::LeftOn,       FindingKind::Overcut,         FindingKind::Rubbing,
-        FindingKind::JawCrash,     FindingKind::PastStock,       FindingKind::CompoundTravel,
+        FindingKind::JawCrash,     FindingKind::CrossesCentre,   FindingKind::CompoundTravel,
         FindingKind::DepthOfCut,   FindingKind::AirCut,          FindingKind::CornerFillet,
         FindingKind::CoarseFinish, FindingKind::CutBetweenPasses};
     return kinds;
@@ -65,8 +65,8 @@ const char* findingLabel(FindingKind kind) {
         return "rubbing";
     case FindingKind::JawCrash:
         return "tool reaches the jaws";
-    case FindingKind::PastStock:
-        return "past the stock";
+    case FindingKind::CrossesCentre:
+        return "tool crosses the centre in metal";
     case FindingKind::CompoundTravel:
         return "compound travel";
     case FindingKind::DepthOfCut:

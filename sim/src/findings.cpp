@@ -163,7 +163,7 @@ findCutFindings(const Scene& scene, const ToolOutline& outline, const std::vecto
                 s.zHiMm, s.zHiMm - jawZ);
         }
         if (c.minXOverStockMm < -1e-6) {
-            add(FindingKind::PastStock, p,
+            add(FindingKind::CrossesCentre, p,
                 "the tool goes " + formatLength(-c.minXOverStockMm, u) +
                     " past the centre where there is metal",
                 kNone, -c.minXOverStockMm);

@@ -149,7 +149,10 @@ void settleFinishReadings(ConePlan& out, const std::vector<PlanBuilder::FinishRe
         byFeature[f.feature].push_back(f);
     auto& passes = out.scene.plan.passes;
     Exact e = evaluate(out.scene);
-    for (const auto& [feature, group] : byFeature) {
+    for (const auto& entry : byFeature) {
+        // Not a structured binding: a lambda below uses the group (clang 14 cannot capture one).
+        const int feature = entry.first;
+        const std::vector<PlanBuilder::FinishReading>& group = entry.second;
         if (within(e, feature))
             continue;
         // The other whole division, then half a division, around each exact reading.

@@ -133,7 +133,7 @@ void unitNotes(const Scene& s, std::vector<std::string>& notes) {
 } // namespace
 
 std::vector<std::string> sceneNotes(const Scene& scene) {
-    std::vector<std::string> notes;
+    std::vector<std::string> notes = scene.readNotes;
     stickOutNotes(scene, notes);
     compoundNotes(scene, notes);
     unitNotes(scene, notes);

@@ -225,3 +225,14 @@ TEST_CASE("swarf check refuses a stick-out shorter than the part, on stock.stick
                      "80 mm: the part must end outside the jaws, but feature 2 (\"bar (left as "
                      "drawn)\") ends at z = 80 mm") != std::string::npos);
 }
+
+TEST_CASE("swarf check reads the old finding name past_stock as crosses_centre, with a note",
+          "[cli][check][names]") {
+    const Run r = checkEdited("finding-crosses-centre.toml",
+                              {{"findings = [\"crosses_centre\"]", "findings = [\"past_stock\"]"}},
+                              "check_cli_test_old_name.toml");
+    INFO(r.out << r.err);
+    CHECK(r.exitCode == 0);
+    CHECK(r.out.find("\"past_stock\" is now called \"crosses_centre\"") != std::string::npos);
+    CHECK(r.out.find("check_cli_test_old_name.toml:") != std::string::npos);
+}

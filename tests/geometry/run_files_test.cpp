@@ -1,5 +1,5 @@
 // `swarf run` on every scene: the volumes in result.json are those of the STEP solids it wrote,
-// read back by the solid modeller (as-cut, leftover, overcut), to 1e-6 relative.
+// read back by the solid modeller (as-cut, left-on, overcut), to 1e-6 relative.
 #include "swarf/geometry/step_file.h"
 #include "swarf/io/scene_reader.h"
 
@@ -57,7 +57,7 @@ TEST_CASE("result.json gives the volumes of the STEP solids written", "[geometry
         const double asCut = stepVolume(dir / "as-cut.step");
         CHECK_THAT(v.at("as_cut_mm3").get<double>(), WithinRel(asCut, 1e-6));
         // Leftover and overcut: the solids' own volumes (none written where there is none).
-        const double left = stepVolume(dir / "leftover.step");
+        const double left = stepVolume(dir / "left-on.step");
         const double over = stepVolume(dir / "overcut.step");
         CHECK_THAT(v.at("left_on_mm3").get<double>(), WithinRel(left, 1e-6) || WithinAbs(0, 1e-9));
         CHECK_THAT(v.at("overcut_mm3").get<double>(), WithinRel(over, 1e-6) || WithinAbs(0, 1e-9));

@@ -85,7 +85,7 @@ TEST_CASE("each finding from a plan made for it", "[findings]") {
     SECTION("past the centre") {
         Scene s = goodPlan();
         s.plan.passes.push_back(pathPass({{45, 16.0}, {45, -0.5}}, 0.05));
-        CHECK(has(simulate(s), FindingKind::PastStock));
+        CHECK(has(simulate(s), FindingKind::CrossesCentre));
     }
     SECTION("depth of cut") {
         Scene s = goodPlan();

@@ -28,8 +28,10 @@ TEST_CASE("deviation scale: centred on zero, band from the cone's tolerance", "[
     const auto sc = viewer::deviationScale(s, r);
     const double cosA = 1 / std::sqrt(1 + 0.05 * 0.05); // derived
     CHECK(sc.bandMm == Approx(0.025 * cosA));           // ±0.05 on diameter, derived
-    CHECK(sc.limitMm >= 2 * sc.bandMm);
-    CHECK(sc.limitMm >= 0.1 * cosA);
+    // Fixed by the band: two bands, whatever the deviations (here up to 0.1 mm, four bands).
+    CHECK(sc.limitMm == Approx(2 * sc.bandMm));
+    const CutResult small = test::syntheticResult(s, [](int) { return 1.0; });
+    CHECK(viewer::deviationScale(s, small).limitMm == sc.limitMm);
     CHECK(sc.mapPosition(0) == 0.5);
     CHECK(sc.mapPosition(sc.limitMm) == 1.0);
     CHECK(sc.mapPosition(-10) == 0.0);

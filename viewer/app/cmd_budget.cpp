@@ -121,14 +121,14 @@ int runBudgetCommand(const BudgetArgs& a) {
 void registerBudget(CLI::App& app, int& exitCode) {
     auto args = std::make_shared<BudgetArgs>();
     auto* cmd = app.add_subcommand(
-        "budget", "error budget of the set-up: how sure the gauge diameter is, from the scene's "
+        "budget", "Error budget of the set-up: how sure the gauge diameter is, from the scene's "
                   "[uncertainty], and which source matters most");
-    cmd->add_option("scene", args->scene, "the scene file (TOML)")->required();
-    cmd->add_option("--out,-o", args->outDir, "folder for budget.json, budget.png, report.html")
+    cmd->add_option("SCENE", args->scene, "Scene file (.toml)")->required();
+    cmd->add_option("--out,-o", args->outDir, "Folder for budget.json, budget.png and report.html")
         ->required();
-    cmd->add_option("--samples", args->samples, "parts to draw (default 2000)");
-    cmd->add_option("--seed", args->seed, "seed of the random numbers (default 1)");
-    cmd->add_flag("--no-pictures", args->noPictures, "do not render the histogram");
+    cmd->add_option("--samples", args->samples, "Parts to draw (default 2000)");
+    cmd->add_option("--seed", args->seed, "Seed of the random numbers (default 1)");
+    cmd->add_flag("--no-pictures", args->noPictures, "Do not render the histogram");
     cmd->callback([args, &exitCode] { exitCode = runBudgetCommand(*args); });
 }
 

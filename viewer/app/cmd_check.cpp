@@ -172,7 +172,7 @@ void registerCheck(CLI::App& app, int& exitCode) {
     auto* cmd =
         app.add_subcommand("check", "Validate a scene file and print what it says, in its units");
     auto scene = std::make_shared<std::string>();
-    cmd->add_option("SCENE", *scene, "scene file (.toml)")->required();
+    cmd->add_option("SCENE", *scene, "Scene file (.toml)")->required();
     cmd->callback([scene, &exitCode] {
         const Scene s = io::readScene(*scene); // throws InputError: exit 2, message on stderr
         printScene(s);

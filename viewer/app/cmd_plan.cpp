@@ -112,11 +112,11 @@ int runPlan(const PlanArgs& a) {
 void registerPlan(CLI::App& app, int& exitCode) {
     auto args = std::make_shared<PlanArgs>();
     auto* cmd = app.add_subcommand(
-        "plan", "plan the drawing's cone in handwheel readings, write the planned scene and the "
+        "plan", "Plan the drawing's cone in handwheel readings, write the planned scene and the "
                 "set-up sheet, and simulate the plan");
-    cmd->add_option("scene", args->scene, "the scene file (TOML) with drawing, stock, tool, set-up")
+    cmd->add_option("SCENE", args->scene, "Scene file (.toml) with drawing, stock, tool, set-up")
         ->required();
-    cmd->add_option("--out,-o", args->outDir, "folder for planned.toml and setup-sheet.txt/.html")
+    cmd->add_option("--out,-o", args->outDir, "Folder for planned.toml and setup-sheet.txt/.html")
         ->required();
     cmd->callback([args, &exitCode] { exitCode = runPlan(*args); });
 }

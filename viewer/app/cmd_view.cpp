@@ -26,14 +26,17 @@ void registerView(CLI::App& app, int& exitCode) {
         viewer::ViewerOptions options;
     };
     auto args = std::make_shared<Args>();
-    cmd->add_option("scene", args->scene, "Scene file (.toml)")->required();
+    cmd->add_option("SCENE", args->scene, "Scene file (.toml)")->required();
     cmd->add_option("--magnify", args->options.magnification,
                     "Magnification of the deviation in the section view")
         ->check(CLI::Range(1.0, 1e6))
         ->capture_default_str();
-    cmd->add_option("--at", args->options.startPosition,
+    cmd->add_option("--pass", args->options.startPosition,
                     "Open at this point of the plan: 0 before the first pass, k after pass k, "
                     "k.5 half way through pass k+1 (default: the finished part)");
+    // The old name, kept so existing commands work; not listed in the help (`swarf taper --at`
+    // is a distance: one word, one meaning).
+    cmd->add_option("--at", args->options.startPosition)->group("");
     cmd->add_option("--size", args->size,
                     "Window size in pixels, WIDTHxHEIGHT (default 1280x800; larger windows draw "
                     "more slowly with software OpenGL)")

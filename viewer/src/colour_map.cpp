@@ -71,11 +71,11 @@ DeviationScale deviationScale(const Scene& scene, const CutResult& result) {
         tolMm = scene.part.features.front().toleranceMm;
     // ± on diameter is ± half of it on radius; normal to a surface at α it is cos α of that.
     s.bandMm = tolMm > 0 ? 0.5 * tolMm * std::cos(halfAngle) : 0.01;
-    double worst = 0;
-    for (double d : result.deviationMm)
-        if (std::isfinite(d))
-            worst = std::max(worst, std::fabs(d));
-    s.limitMm = std::clamp(1.1 * worst, 2 * s.bandMm, 20 * s.bandMm);
+    // One fixed scale from the band, whatever the result: the same colour means the same
+    // deviation in every picture of this drawing, and beyond two bands the colour saturates
+    // (the colour bar's end labels say "+").
+    (void)result;
+    s.limitMm = kScaleBands * s.bandMm;
     return s;
 }
 

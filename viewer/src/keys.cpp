@@ -27,7 +27,7 @@ const std::vector<KeyHelp>& windowKeys() {
         {"r", {"r"}, "reset: whole part, oblique view, section refitted"},
         {"x", {"x"}, "cut-away quarter on / off"},
         {"g", {"g"}, "nominal cone (ghost) on / off"},
-        {"l", {"l"}, "leftover metal in the cut-away on / off"},
+        {"l", {"l"}, "metal left on, in the cut-away, on / off"},
         {"o", {"o"}, "stock outline on / off"},
         {"j", {"j"}, "chuck jaws on / off"},
         {"t", {"t"}, "insert on / off"},

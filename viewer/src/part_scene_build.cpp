@@ -43,9 +43,13 @@ void PartScene::Impl::buildLut() {
     lut->SetNanColor(0.62, 0.64, 0.67); // off the drawing: plain steel
     lut->ClampingOn();
     const double band = scale.toDisplay(scale.bandMm);
-    lut->SetAnnotation(vtkVariant(band), fmt::format("+{:.3g} tol", band));
-    lut->SetAnnotation(vtkVariant(-band), fmt::format("-{:.3g} tol", band));
+    // The ends say what the colours mean; the band is the tolerance normal to the surface.
+    // Values beyond the ends saturate (clamped): the end labels say so.
+    lut->SetAnnotation(vtkVariant(l), fmt::format("left on {:.3g}+", l));
+    lut->SetAnnotation(vtkVariant(band), fmt::format("+{:.3g} band", band));
     lut->SetAnnotation(vtkVariant(0.0), "0");
+    lut->SetAnnotation(vtkVariant(-band), fmt::format("-{:.3g} band", band));
+    lut->SetAnnotation(vtkVariant(-l), fmt::format("overcut {:.3g}+", l));
     lut->Build();
 }
 
@@ -118,7 +122,7 @@ void PartScene::Impl::buildMain() {
     scalarBar = vtkSmartPointer<vtkScalarBarActor>::New();
     scalarBar->SetLookupTable(lut);
     scalarBar->SetTitle(scale.displayUnit());
-    scalarBar->SetNumberOfLabels(5);
+    scalarBar->SetNumberOfLabels(0); // the annotations carry the numbers: no overlapping ticks
     scalarBar->DrawAnnotationsOn();
     scalarBar->SetMaximumWidthInPixels(120);
     scalarBar->GetPositionCoordinate()->SetCoordinateSystemToNormalizedViewport();

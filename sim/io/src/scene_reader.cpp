@@ -109,7 +109,7 @@ SimOptions readSim(const Fields& root) {
     return s;
 }
 
-Expect readExpect(const Fields& root) {
+Expect readExpect(const Fields& root, std::vector<std::string>& notes) {
     Expect e;
     const toml::table* t = root.subtable("expect");
     if (!t)
@@ -124,6 +124,15 @@ Expect readExpect(const Fields& root) {
     if (const toml::array* a = f.array("findings", "finding kinds")) {
         for (const toml::node& n : *a) {
             const auto* s = n.as_string();
+            if (s && s->get() == "past_stock") {
+                // The old name of crosses_centre (it never meant past the stock's end).
+                notes.push_back(detail::locOf(n.source(), root.context().file).str() +
+                                ": expect.findings: \"past_stock\" is now called "
+                                "\"crosses_centre\" (the tool crosses the centre where there is "
+                                "metal); the old name is still read");
+                e.findings.push_back("crosses_centre");
+                continue;
+            }
             bool ok = false;
             for (const auto& k : kinds)
                 ok = ok || (s && s->get() == k);
@@ -216,7 +225,7 @@ Scene readSceneText(const std::string& text, const std::string& fileName) {
     scene.plan = detail::readPlan(root);
     scene.planning = readPlanning(root);
     scene.sim = readSim(root);
-    scene.expect = readExpect(root);
+    scene.expect = readExpect(root, scene.readNotes);
     scene.gaugeBlocksMm = readGaugeBlocks(root);
     scene.uncertainty = detail::readUncertainty(root, scene.tool, scene.setup);
     scene.validate();

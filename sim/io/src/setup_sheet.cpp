@@ -154,10 +154,13 @@ Section readingsSection(const Ctx& c) {
                              ", the saddle reads 0 with the tip at " + c.L(c.su.zeroZMm) +
                              " from the datum face.";
     refs.blocks.push_back(paragraph(
-        twoStages ? "Stage A readings count from the first touch-off on the bar (Ø" +
-                        c.L(c.sc.stock.diameterMm) +
-                        ") and its end face. Stage B readings count from the references: " + zero
-                  : "Readings count from the touch-off: " + zero));
+        twoStages
+            ? "Readings from the first touch-off count from the first touch-off on the bar (Ø" +
+                  c.L(c.sc.stock.diameterMm) +
+                  ") and its end face. Readings from the references count from the "
+                  "references: " +
+                  zero
+            : "Readings count from the touch-off: " + zero));
     return refs;
 }
 

@@ -127,8 +127,16 @@ Section operationsSection(const SheetCtx& c) {
     std::vector<std::string> numbered;
     Table passes;
     const std::string un = unitName(u);
-    passes.head = {"step",           "pass",         "stage", "moves", "cross-slide " + un,
-                   "compound " + un, "saddle " + un, "from",  "to",    "feed " + un + "/rev",
+    passes.head = {"step",
+                   "pass",
+                   "readings from",
+                   "slide that moves",
+                   "cross-slide " + un,
+                   "compound " + un,
+                   "saddle " + un,
+                   "from",
+                   "to",
+                   "feed " + un + "/rev",
                    "back out to"};
     // Stages are named only when there are two (straight passes before the references).
     bool twoStages = false;
@@ -161,10 +169,10 @@ Section operationsSection(const SheetCtx& c) {
                       dialCell(su.saddle, p.saddleMm + sOff, u);
         const std::string there = wayThere(c, between, k);
         const std::string back = backOutAfter(c, between, k);
-        const std::string stage = d.stage == 0 ? "A" : "B";
+        const std::string stage = d.stage == 0 ? "first touch-off" : "the references";
         std::string line = std::to_string(stepNo) + ". Pass " + std::to_string(k + 1) +
-                           (twoStages ? " (stage " + stage + ")" : std::string()) + ": " + p.note +
-                           ". It " + feedDirectionWords(passFeedDirection(c.sc, p)) + ".";
+                           (twoStages ? " (readings from " + stage + ")" : std::string()) + ": " +
+                           p.note + ". It " + feedDirectionWords(passFeedDirection(c.sc, p)) + ".";
         if (!there.empty())
             line += " To the start: " + there + ".";
         line += " Locked: " + locked + ". Wind the " + passKindName(p.kind) + " from " +
@@ -181,8 +189,18 @@ Section operationsSection(const SheetCtx& c) {
                                dialCell(moving, p.fromMm + off, u),
                                dialCell(moving, p.toMm + off, u), c.feed(p.feedMmPerRev), back});
     }
+    // The key to the readings right under the table that uses it.
+    const std::string key =
+        "In the table: a reading n.nnn [n t + d] is n whole turns of the handwheel from zero "
+        "(negative: back from zero), then division d on the dial, which wraps every turn; "
+        "\"moves\" marks the slide that moves during the pass, the others stay locked at their "
+        "readings" +
+        std::string(twoStages ? "; \"readings from\" says which zero they count from (the first "
+                                "touch-off on the bar, or the references)"
+                              : "") +
+        ".";
     return {"Order of operations",
-            {listBlock(numbered, Block::Kind::Numbered), tableBlock(passes)}};
+            {listBlock(numbered, Block::Kind::Numbered), tableBlock(passes), paragraph(key)}};
 }
 
 } // namespace swarf::io::detail

@@ -37,7 +37,7 @@ void takeSolidVolumes(const RunSolids& solids, CutResult& result);
 struct RunSolidsOptions {
     ProfileFitOptions fit;
     bool writeNominal = true;     ///< nominal.step
-    bool writeLeftover = true;    ///< leftover.step (only if there is leftover)
+    bool writeLeftover = true;    ///< left-on.step (only if metal is left on)
     bool writeOvercut = true;     ///< overcut.step (only if there is an overcut)
     bool writeSurfaceStl = false; ///< surface.stl: the 3D surface with feed marks (large)
     SurfaceStlOptions stl;        ///< how finely surface.stl is meshed
@@ -54,7 +54,7 @@ struct RunSolidsReport {
 };
 
 /// Writes `as-cut.step` (one solid, product "as-cut") into outDir, and as the options say
-/// `nominal.step`, `leftover.step`, `overcut.step` (one solid each, named alike) and
+/// `nominal.step`, `left-on.step`, `overcut.step` (one solid each, named alike) and
 /// `surface.stl`. All STEP files are AP214 in mm, frame as in solid.h. Each file is written
 /// atomically. outDir must exist. Throws GeometryError if the modeller fails and OutputError
 /// if a file cannot be written.

@@ -7,7 +7,7 @@
 
 namespace swarf::geometry {
 
-/// A solid with the product name it gets in a STEP file ("as-cut", "nominal", "leftover").
+/// A solid with the product name it gets in a STEP file ("as-cut", "nominal", "left-on").
 struct NamedSolid {
     std::string name;
     Solid solid;

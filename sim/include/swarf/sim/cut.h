@@ -69,7 +69,7 @@ enum class FindingKind {
     Overcut,          ///< cut below the drawing, beyond tolerance: scrap
     Rubbing,          ///< trailing edge or flank rubs: the cone is steeper than the tool can follow
     JawCrash,         ///< the tool reaches the chuck jaws
-    PastStock,        ///< the move runs past the stock's free end or through the centre
+    CrossesCentre,    ///< the tool crosses the spindle axis where there is metal
     CompoundTravel,   ///< a compound reading beyond its travel
     DepthOfCut,       ///< depth of cut beyond the cutting edge length
     AirCut,           ///< the pass cuts nothing

@@ -239,6 +239,9 @@ struct Scene {
     std::string name;
     std::string description;
     std::string file; ///< the file it came from
+    /// What the reader noticed that is not an error (an old name accepted, with the new one);
+    /// `swarf check` prints them with the other notes.
+    std::vector<std::string> readNotes;
     Units units = Units::Mm;
     Stock stock;
     Part part;

@@ -23,6 +23,7 @@ inline constexpr double kPlausibleFeedMmPerRev = 1.0;
 ///   minute?);
 /// - a stick-out too short for the tool to finish the part's last feature without its insert
 ///   coming within kJawClearanceMm of the jaws.
+/// First, what the reader noticed (Scene::readNotes: an old name accepted).
 /// Empty when nothing is worth a note.
 std::vector<std::string> sceneNotes(const Scene& scene);
 

@@ -30,9 +30,12 @@ struct DeviationScale {
     double mapPosition(double deviationMm) const;
 };
 
+/// Bands either side of zero the colour map spans; beyond, colours saturate.
+inline constexpr double kScaleBands = 2.0;
+
 /// The scale for a result: the band is the main cone's tolerance (± on diameter, so half of it
-/// on radius, taken normal to the surface); the limit covers the final deviation, at least twice
-/// and at most twenty times the band.
+/// on radius, taken normal to the surface); the limit is kScaleBands bands, fixed by the drawing
+/// alone, so one colour means one deviation in every picture (the result does not move it).
 DeviationScale deviationScale(const Scene& scene, const CutResult& result);
 
 /// Colour of a deviation (mm): + left on is warm (red), − overcut is cool (blue).
