@@ -1,5 +1,6 @@
 // Tests for sim/include/swarf/sim/bore_sweep.h: the sweep inside a hole.
 #include "swarf/sim/bore_sweep.h"
+#include "swarf/sim/compare.h"
 #include "swarf/sim/nose_offset.h"
 #include "swarf/sim/units.h"
 
@@ -119,4 +120,23 @@ TEST_CASE("a 1:10 socket bored along its drawn line leaves the inside nose offse
         boredProfile(s, outline, {move(5, drawn(5) + dx, 35, drawn(35) + dx)}, g);
     for (double z : {10.0, 20.0, 30.0})
         CHECK(offset.radiusAt(z) == Approx(drawn(z)).margin(1e-9));
+
+    // The same through the drawing: the socket as an inside feature, its deviation left on by
+    // the normal offset all along the swept part (references R1, R12; derived).
+    Scene drawnScene = s;
+    Feature socket;
+    socket.kind = FeatureKind::Cone;
+    socket.side = Side::Inside;
+    socket.zStartMm = 0;
+    socket.zEndMm = 40;
+    socket.cone = Cone{0.0, 24.0, theta, Widens::TowardTailstock};
+    drawnScene.part.features = {socket};
+    const Profile nominal = nominalOnGrid(drawnScene.part, g, Side::Inside);
+    const auto dev = normalDeviation(drawnScene.part, nominal, asDrawn, Side::Inside);
+    const auto devOffset = normalDeviation(drawnScene.part, nominal, offset, Side::Inside);
+    for (double z : {10.0, 20.0, 30.0}) {
+        const auto i = static_cast<std::size_t>(std::lround(z / g.dzMm));
+        CHECK(dev[i] == Approx(o.normalErrorMm).epsilon(1e-9));
+        CHECK(devOffset[i] == Approx(0.0).margin(1e-9));
+    }
 }
