@@ -31,21 +31,40 @@ int featureAt(const Part& part, double zMm) {
 }
 
 Profile nominalOnGrid(const Part& part, const Profile& grid) {
+    return nominalOnGrid(part, grid, Side::Outside);
+}
+
+Profile nominalOnGrid(const Part& part, const Profile& grid, Side side) {
     Profile n = grid;
-    for (std::size_t i = 0; i < n.radiusMm.size(); ++i)
-        n.radiusMm[i] = part.nominalRadiusAt(grid.zAt(i)).value_or(kNaN);
+    for (std::size_t i = 0; i < n.radiusMm.size(); ++i) {
+        const double z = grid.zAt(i);
+        const int fi = part.radialFeatureOnSide(z, side);
+        if (fi < 0) {
+            n.radiusMm[i] = kNaN;
+            continue;
+        }
+        const Feature& f = part.features[static_cast<std::size_t>(fi)];
+        n.radiusMm[i] = f.radiusAt(std::clamp(z, f.zStartMm, f.zEndMm));
+    }
     return n;
 }
 
 std::vector<double> normalDeviation(const Part& part, const Profile& nominal,
                                     const Profile& asCut) {
+    return normalDeviation(part, nominal, asCut, Side::Outside);
+}
+
+std::vector<double> normalDeviation(const Part& part, const Profile& nominal, const Profile& asCut,
+                                    Side side) {
+    // Metal left on is beyond the drawn surface outside, within the drawn bore inside.
+    const double leftOnSign = side == Side::Outside ? 1.0 : -1.0;
     std::vector<double> d(asCut.radiusMm.size(), kNaN);
     for (std::size_t i = 0; i < d.size(); ++i) {
-        const int f = featureAt(part, asCut.zAt(i));
+        const int f = part.radialFeatureOnSide(asCut.zAt(i), side);
         if (f < 0)
             continue;
         const double cosT = std::cos(part.features[f].surfaceHalfAngleRad());
-        d[i] = (asCut.radiusMm[i] - nominal.radiusMm[i]) * cosT;
+        d[i] = leftOnSign * (asCut.radiusMm[i] - nominal.radiusMm[i]) * cosT;
     }
     return d;
 }

@@ -39,4 +39,15 @@ NoseOffsets noseRadiusOffsets(double noseRadiusMm, double halfAngleRad, Widens w
     return o;
 }
 
+NoseOffsets insideNoseRadiusOffsets(double noseRadiusMm, double halfAngleRad, Widens widens,
+                                    TipSide tip) {
+    // Mirror x across the surface: the wall (the material) is then on the axis side, as outside,
+    // and a bore widening toward one end is a shank widening toward the other. z is unchanged.
+    const Widens mirrored =
+        widens == Widens::TowardChuck ? Widens::TowardTailstock : Widens::TowardChuck;
+    NoseOffsets o = noseRadiusOffsets(noseRadiusMm, halfAngleRad, mirrored, tip);
+    o.xShiftSign = -o.xShiftSign;
+    return o;
+}
+
 } // namespace swarf

@@ -1,6 +1,8 @@
 // Scene geometry helpers and the format-independent checks of a scene.
 #include "swarf/sim/scene.h"
 
+#include "swarf/sim/inside_work.h"
+
 #include <algorithm>
 #include <cmath>
 #include <cstdio>
@@ -24,6 +26,10 @@ const char* passKindName(PassKind kind) {
 
 const char* passKindKey(PassKind kind) {
     return kind == PassKind::CrossSlide ? "cross" : passKindName(kind);
+}
+
+const char* sideName(Side side) {
+    return side == Side::Inside ? "inside" : "outside";
 }
 
 const char* featureKindName(FeatureKind kind) {
@@ -66,20 +72,31 @@ double Feature::surfaceHalfAngleRad() const {
 }
 
 int Part::radialFeatureAt(double zMm) const {
+    return radialFeatureOnSide(zMm, Side::Outside);
+}
+
+int Part::radialFeatureOnSide(double zMm, Side side) const {
     constexpr double eps = 1e-9;
     int best = -1;
     double bestR = -1;
     for (std::size_t i = 0; i < features.size(); ++i) {
         const Feature& f = features[i];
-        if (f.kind == FeatureKind::Face || zMm < f.zStartMm - eps || zMm > f.zEndMm + eps)
+        if (f.side != side || f.kind == FeatureKind::Face || zMm < f.zStartMm - eps ||
+            zMm > f.zEndMm + eps)
             continue;
         const double r = f.radiusAt(std::clamp(zMm, f.zStartMm, f.zEndMm));
-        if (r > bestR) {
+        const bool better = best < 0 || (side == Side::Outside ? r > bestR : r < bestR);
+        if (better) {
             bestR = r;
             best = static_cast<int>(i);
         }
     }
     return best;
+}
+
+bool Part::hasInside() const {
+    return std::any_of(features.begin(), features.end(),
+                       [](const Feature& f) { return f.side == Side::Inside; });
 }
 
 std::optional<double> Part::nominalRadiusAt(double zMm) const {
@@ -92,7 +109,14 @@ std::optional<double> Part::nominalRadiusAt(double zMm) const {
 
 const Feature* Part::mainCone() const {
     for (const Feature& f : features)
-        if (f.kind == FeatureKind::Cone)
+        if (f.kind == FeatureKind::Cone && f.side == Side::Outside)
+            return &f;
+    return nullptr;
+}
+
+const Feature* Part::mainInsideCone() const {
+    for (const Feature& f : features)
+        if (f.kind == FeatureKind::Cone && f.side == Side::Inside)
             return &f;
     return nullptr;
 }
@@ -179,9 +203,15 @@ void Scene::validate() const {
               "expected 0 or more (from the datum face)");
         c.len(face ? f.zEndMm == f.zStartMm : f.zEndMm > f.zStartMm, w, k + ".to", f.zEndMm,
               "expected more than from");
-        if (i > 0)
-            c.len(f.zStartMm >= part.features[i - 1].zEndMm - 1e-9, w, k + ".from", f.zStartMm,
+        // In order along the axis, not overlapping, on each side: an inside feature lies under
+        // the outside ones.
+        for (std::size_t j = i; j-- > 0;) {
+            if (part.features[j].side != f.side)
+                continue;
+            c.len(f.zStartMm >= part.features[j].zEndMm - 1e-9, w, k + ".from", f.zStartMm,
                   "expected features in order along the axis, not overlapping");
+            break;
+        }
         c.len(f.zEndMm <= stock.jawZMm() + 1e-9, sw, "stock.stick_out", stock.stickOutMm,
               "expected the part to end outside the jaws: " + k + " ends past them");
         c.len(f.toleranceMm > 0, w, k + ".tolerance", f.toleranceMm, "expected more than 0");
@@ -302,6 +332,8 @@ void Scene::validate() const {
 
     c.len(sim.profileStepMm > 0, {file, 0, 0}, "sim.profile_step", sim.profileStepMm,
           "expected more than 0");
+    validateInsideWork(*this);
+
     c.num(sim.angleSamples >= 8, {file, 0, 0}, "sim.angle_samples", sim.angleSamples,
           "expected 8 or more");
     c.num(!(expect.noFindings && !expect.findings.empty()), expect.where, "expect.no_findings", 1,

@@ -3,6 +3,7 @@
 
 #include "swarf/sim/compound_sense.h"
 #include "swarf/sim/findings.h"
+#include "swarf/sim/inside_work.h"
 #include "swarf/sim/tool_outline.h"
 
 #include <cmath>
@@ -137,6 +138,8 @@ std::vector<std::string> sceneNotes(const Scene& scene) {
     stickOutNotes(scene, notes);
     compoundNotes(scene, notes);
     unitNotes(scene, notes);
+    for (std::string& n : insideWorkNotes(scene))
+        notes.push_back(std::move(n));
     return notes;
 }
 

@@ -120,3 +120,43 @@ TEST_CASE("overcut volume and the drawing's inside corners", "[compare]") {
     CHECK(corners[0].atFeatureEnd);
     CHECK(corners[0].interiorAngleRad == Approx(kPi / 2)); // derived: a square shoulder
 }
+
+TEST_CASE("inside: left on is metal within the drawn bore; outside features are not the bore",
+          "[compare][inside]") {
+    Part part;
+    Feature outside;
+    outside.kind = FeatureKind::Cylinder;
+    outside.zStartMm = 0;
+    outside.zEndMm = 40;
+    outside.diameterMm = 38;
+    Feature socket;
+    socket.kind = FeatureKind::Cone;
+    socket.side = Side::Inside;
+    socket.zStartMm = 0;
+    socket.zEndMm = 30;
+    socket.cone = Cone{0.0, 24.0, std::atan(1.0 / 20.0), Widens::TowardTailstock};
+    part.features = {outside, socket};
+    Profile grid;
+    grid.z0Mm = 0;
+    grid.dzMm = 1;
+    grid.radiusMm.assign(41, 0.0);
+    const Profile drawnBore = nominalOnGrid(part, grid, Side::Inside);
+    CHECK(drawnBore.radiusMm[10] == Approx(12.0 - 10.0 / 20.0));   // derived: 1:10 on diameter
+    CHECK(std::isnan(drawnBore.radiusMm[35]));                     // past the socket
+    CHECK(nominalOnGrid(part, grid).radiusMm[10] == Approx(19.0)); // outside unchanged
+    // A bore 0.01 mm small on radius leaves 0.01·cos θ on; 0.02 large overcuts 0.02·cos θ.
+    const double cosT = std::cos(std::atan(1.0 / 20.0));
+    Profile small = drawnBore, large = drawnBore;
+    for (std::size_t i = 0; i <= 30; ++i) {
+        small.radiusMm[i] -= 0.01;
+        large.radiusMm[i] += 0.02;
+    }
+    const auto leftOn = normalDeviation(part, drawnBore, small, Side::Inside);
+    const auto overcut = normalDeviation(part, drawnBore, large, Side::Inside);
+    CHECK(leftOn[10] == Approx(0.01 * cosT));
+    CHECK(overcut[10] == Approx(-0.02 * cosT));
+    CHECK(std::isnan(leftOn[35]));
+    const DeviationExtremes e = deviationExtremes(leftOn);
+    CHECK(e.leftOnMm == Approx(0.01 * cosT));
+    CHECK(e.overcutMm == Approx(0.0).margin(1e-15));
+}

@@ -110,3 +110,50 @@ TEST_CASE("limits: cylinder and face need no offset", "[nose_offset]") {
     CHECK(face.normalErrorMm == Approx(0).margin(1e-15));
     CHECK(noseRadiusOffsets(0.0, 0.5, Widens::TowardChuck).normalErrorMm == 0);
 }
+
+namespace {
+// derived: signed gap between the bore actually cut and the drawing's bore, along the normal
+// into the wall (+ = metal left inside the drawn bore), from the nose circle alone. The drawn
+// bore's line goes through the origin of (z, x), its radius growing toward `w`; a boring tool's
+// imaginary tip is the corner of the nose's largest-x tangent (the wall side) and one z tangent.
+double boreGap(double r, double theta, Widens w, TipSide side, double tipZ, double tipX) {
+    const double g = w == Widens::TowardChuck ? 1.0 : -1.0;
+    // Unit normal of the line x = g·tan θ·z pointing into the wall (x increasing).
+    const double nz = -g * std::sin(theta), nx = std::cos(theta);
+    const double cz = tipZ + (side == TipSide::ChuckSide ? -r : r);
+    const double cx = tipX - r;
+    // How far the nose's deepest point falls short of the line.
+    return -((cz * nz + cx * nx) + r);
+}
+} // namespace
+
+TEST_CASE("inside: R1 mirrored, checked against the nose circle", "[nose_offset][inside]") {
+    const double r = 0.8;
+    for (double deg : {1.4321, 2.8624, 30.0, 45.0, 60.0}) {
+        const double t = degToRad(deg);
+        for (Widens w : {Widens::TowardChuck, Widens::TowardTailstock}) {
+            for (TipSide side : {TipSide::ChuckSide, TipSide::TailstockSide}) {
+                INFO(deg << "° widens " << (w == Widens::TowardChuck ? "chuck" : "tailstock")
+                         << " tip " << (side == TipSide::ChuckSide ? "chuck" : "tailstock"));
+                const auto o = insideNoseRadiusOffsets(r, t, w, side);
+                const double gap = boreGap(r, t, w, side, 0, 0);
+                CHECK(o.leftOn == (gap > 0));
+                CHECK(std::fabs(gap) == Approx(o.normalErrorMm));
+                CHECK(boreGap(r, t, w, side, 0, o.xShiftSign * o.dxRadiusMm) ==
+                      Approx(0).margin(1e-12));
+                CHECK(boreGap(r, t, w, side, o.zShiftSign * o.dzMm, 0) == Approx(0).margin(1e-12));
+            }
+        }
+    }
+    // Source: references R1 (the closed forms), R12 (the sign turned inside; derived): a socket
+    // widening toward its mouth (the tailstock), bored with the tip on the chuck side, is left
+    // on by r(sin θ + cos θ − 1) and wants the tip moved r(1 − tan((90° − θ)/2)) away from the
+    // axis; at 45°, r = 0.8: the R1 table's 0.46863 and 0.33137.
+    const auto socket =
+        insideNoseRadiusOffsets(0.8, degToRad(45), Widens::TowardTailstock, TipSide::ChuckSide);
+    CHECK(socket.leftOn);
+    CHECK(socket.dxRadiusMm == Approx(0.46863).margin(5e-6));
+    CHECK(socket.normalErrorMm == Approx(0.33137).margin(5e-6));
+    CHECK(socket.xShiftSign == +1);
+    CHECK(socket.zShiftSign == +1); // toward the socket's narrow end, the chuck
+}

@@ -13,6 +13,7 @@
 #include "swarf/sim/budget.h"
 #include "swarf/sim/caution.h"
 #include "swarf/sim/error.h"
+#include "swarf/sim/inside_work.h"
 #include "swarf/sim/planner.h"
 #include "swarf/viewer/histogram.h"
 
@@ -43,6 +44,7 @@ int runBudgetCommand(const BudgetArgs& a) {
     if (a.seed < 0)
         badOption("--seed", a.seed, "expected a whole number 0 or more");
     Scene scene = io::readScene(a.scene); // bad input throws before anything is written
+    refuseInsideWork(scene, "budget");
     bool planned = false;
     if (scene.part.mainCone() && scene.plan.passes.empty()) {
         // No passes of its own: budget the plan `swarf plan` would make.

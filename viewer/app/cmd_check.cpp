@@ -78,37 +78,53 @@ void printScene(const Scene& s) {
         st.tailstockSupport ? ", tailstock centre" : ", no tailstock");
     fmt::print("       face allowance {}, material: {}\n", len(st.faceAllowanceMm, u),
                st.material.empty() ? "(not given)" : st.material);
+    if (st.hasBore())
+        fmt::print("       hole {} diameter, {} deep from the free end ({}; bottom at z = {})\n",
+                   len(st.boreDiameterMm, u), len(st.boreDepthMm, u),
+                   st.boreThrough() ? "through the work" : "blind", len(st.boreBottomZMm(), u));
     fmt::print("part: {} feature(s), general tolerances ISO 2768-{}\n", s.part.features.size(),
                iso2768Name(s.part.toleranceClass));
     int i = 0;
     for (const Feature& f : s.part.features) {
         ++i;
+        const std::string side = f.side == Side::Inside ? "inside " : "";
         switch (f.kind) {
         case FeatureKind::Cylinder:
-            fmt::print("  [{}] cylinder \"{}\": z {} to {}, diameter {} ± {} ({})\n", i, f.name,
-                       len(f.zStartMm, u), len(f.zEndMm, u), len(f.diameterMm, u),
+            fmt::print("  [{}] {}cylinder \"{}\": z {} to {}, diameter {} ± {} ({})\n", i, side,
+                       f.name, len(f.zStartMm, u), len(f.zEndMm, u), len(f.diameterMm, u),
                        tol(f.toleranceMm, u), f.toleranceFromClass ? "ISO 2768" : "given");
             break;
         case FeatureKind::Cone:
-            fmt::print("  [{}] cone \"{}\": z {} to {}\n", i, f.name, len(f.zStartMm, u),
+            fmt::print("  [{}] {}cone \"{}\": z {} to {}\n", i, side, f.name, len(f.zStartMm, u),
                        len(f.zEndMm, u));
             printCone(f, u, s.part.toleranceClass);
             break;
         case FeatureKind::Chamfer:
-            fmt::print("  [{}] chamfer \"{}\": z {} to {}, {} from the axis, diameter {} to {}\n",
-                       i, f.name, len(f.zStartMm, u), len(f.zEndMm, u), deg(f.cone.halfAngleRad),
-                       len(f.cone.diameterAt(f.zStartMm), u), len(f.cone.diameterAt(f.zEndMm), u));
+            fmt::print("  [{}] {}chamfer \"{}\": z {} to {}, {} from the axis, diameter {} to {}\n",
+                       i, side, f.name, len(f.zStartMm, u), len(f.zEndMm, u),
+                       deg(f.cone.halfAngleRad), len(f.cone.diameterAt(f.zStartMm), u),
+                       len(f.cone.diameterAt(f.zEndMm), u));
             break;
         case FeatureKind::Face:
-            fmt::print("  [{}] face \"{}\" at z = {}, out to diameter {}\n", i, f.name,
+            fmt::print("  [{}] {}face \"{}\" at z = {}, out to diameter {}\n", i, side, f.name,
                        len(f.zStartMm, u), len(f.diameterMm, u));
             break;
         }
     }
     const Tool& t = s.tool;
+    if (t.kind == ToolKind::BoringBar)
+        fmt::print("tool: boring bar {} diameter, overhang {} ({:.1f} bar diameters), enters "
+                   "bores of {} or more, axis {}\n",
+                   len(t.barDiameterMm, u), len(t.overhangMm, u), t.overhangMm / t.barDiameterMm,
+                   len(t.minBoreMm, u),
+                   t.tipHeightMm == 0
+                       ? std::string("on centre")
+                       : len(std::fabs(t.tipHeightMm), u) +
+                             (t.tipHeightMm < 0 ? " below centre" : " above centre"));
     const std::string shape =
         t.shape ? fmt::format("ISO 1832 shape {}", t.shape) : std::string("insert");
-    fmt::print("tool: {}, included angle ε {}, nose radius {}\n", shape,
+    fmt::print("{}: {}, included angle ε {}, nose radius {}\n",
+               t.kind == ToolKind::BoringBar ? "      insert" : "tool", shape,
                t.shape == 'R' ? std::string("(round)") : deg(t.includedAngleRad),
                len(t.noseRadiusMm, u));
     fmt::print("      entering angle κr {}{}, hand {}\n", deg(t.enteringAngleRad),

@@ -10,6 +10,7 @@
 #include "swarf/sim/caution.h"
 #include "swarf/sim/compound_sense.h"
 #include "swarf/sim/error.h"
+#include "swarf/sim/inside_work.h"
 #include "swarf/sim/kernel.h"
 #include "swarf/sim/planner.h"
 #include "swarf/sim/run_budget.h"
@@ -44,6 +45,7 @@ std::vector<std::string> headerFor(const ConePlan& plan, const std::string& from
 
 int runPlan(const PlanArgs& a) {
     const Scene scene = io::readScene(a.scene); // bad input throws before anything is written
+    refuseInsideWork(scene, "plan");
     const ConePlan plan = planCone(scene);
     if (plan.planned) // the plan is simulated below: refuse now one the machine cannot hold
         requireFits(plan.scene, {false, false, false}, availableMemoryBytes());

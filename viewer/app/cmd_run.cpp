@@ -14,6 +14,7 @@
 #include "swarf/io/scene_reader.h"
 #include "swarf/sim/caution.h"
 #include "swarf/sim/error.h"
+#include "swarf/sim/inside_work.h"
 #include "swarf/sim/kernel.h"
 #include "swarf/sim/result_figures.h"
 #include "swarf/sim/run_budget.h"
@@ -90,6 +91,7 @@ void registerRun(CLI::App& app, int& exitCode) {
     cmd->callback([scene, outDir, noStep, noPictures, stl, reference, &exitCode] {
         // Read first: a bad scene writes nothing; nor does one the machine cannot hold.
         const Scene s = io::readScene(*scene);
+        refuseInsideWork(s, "run");
         requireFits(s, {true, !*noStep, !*noPictures}, availableMemoryBytes());
         if (s.plan.passes.empty())
             fmt::print(

@@ -4,6 +4,7 @@
 #include "swarf/app/memory.h"
 #include "swarf/io/scene_reader.h"
 #include "swarf/sim/error.h"
+#include "swarf/sim/inside_work.h"
 #include "swarf/sim/kernel.h"
 #include "swarf/sim/run_budget.h"
 #include "swarf/viewer/viewer.h"
@@ -57,6 +58,7 @@ void registerView(CLI::App& app, int& exitCode) {
             std::sscanf(args->size.c_str(), "%dx%d", &args->options.widthPx,
                         &args->options.heightPx);
         const Scene scene = io::readScene(args->scene);
+        refuseInsideWork(scene, "view");
         requireFits(scene, {false, false, true}, availableMemoryBytes());
         const auto result = std::make_shared<const CutResult>(simulate(scene));
         if (!args->screenshot.empty()) {

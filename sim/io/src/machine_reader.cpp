@@ -62,11 +62,13 @@ Tool readTool(const Fields& root) {
     if (!t)
         root.missing("tool", "a [tool] table: the insert and holder");
     Fields f(*t, "tool", root.context(),
-             {"shape", "included_angle", "insert", "nose_radius", "entering_angle", "holder",
-              "hand", "edge_length", "tip_height", "thickness"});
+             {"kind", "shape", "included_angle", "insert", "nose_radius", "entering_angle",
+              "holder", "hand", "edge_length", "tip_height", "thickness", "bar_diameter",
+              "overhang", "min_bore", "axis_height"});
     const Units u = root.context().units;
     Tool tool;
     tool.where = f.where();
+    readToolKind(f, tool);
 
     // The ISO 1832 designation, if given, fixes the shape, nose radius and size.
     std::optional<InsertCode> code;
@@ -180,8 +182,12 @@ Tool readTool(const Fields& root) {
 
     if (auto h = f.choice("hand", {"R", "L", "N"}))
         tool.hand = *h == "R" ? Hand::R : *h == "L" ? Hand::L : Hand::N;
-    tool.tipHeightMm = f.length("tip_height", "tip above (+) or below (-) centre").value_or(0.0);
-    f.require(std::fabs(tool.tipHeightMm) < 10.0, "tip_height",
+    const char* heightKey = tool.kind == ToolKind::BoringBar ? "axis_height" : "tip_height";
+    tool.tipHeightMm = f.length(heightKey, tool.kind == ToolKind::BoringBar
+                                               ? "the bar's axis above (+) or below (-) centre"
+                                               : "tip above (+) or below (-) centre")
+                           .value_or(0.0);
+    f.require(std::fabs(tool.tipHeightMm) < 10.0, heightKey,
               "expected less than 10 mm off centre either way");
     return tool;
 }

@@ -30,18 +30,21 @@ const std::vector<std::string_view> kAnyFeatureKeys = {"kind",
                                                        "length",
                                                        "angle",
                                                        "tolerance",
-                                                       "angle_tolerance"};
-const std::vector<std::string_view> kCylinderKeys = {"kind", "name",     "from",
-                                                     "to",   "diameter", "tolerance"};
+                                                       "angle_tolerance",
+                                                       "side"};
+const std::vector<std::string_view> kCylinderKeys = {"kind",     "name",      "from", "to",
+                                                     "diameter", "tolerance", "side"};
 const std::vector<std::string_view> kConeKeys = {
     "kind",        "name",           "from",         "to",
     "gauge_plane", "gauge_diameter", "half_angle",   "included_angle",
     "ratio",       "taper_per_foot", "second_plane", "second_diameter",
-    "standard",    "widens_toward",  "tolerance",    "angle_tolerance"};
+    "standard",    "widens_toward",  "tolerance",    "angle_tolerance",
+    "side"};
 const std::vector<std::string_view> kChamferKeys = {
-    "kind",     "name",          "at",        "length",         "angle",
-    "diameter", "widens_toward", "tolerance", "angle_tolerance"};
-const std::vector<std::string_view> kFaceKeys = {"kind", "name", "at", "diameter", "tolerance"};
+    "kind",     "name",          "at",        "length",          "angle",
+    "diameter", "widens_toward", "tolerance", "angle_tolerance", "side"};
+const std::vector<std::string_view> kFaceKeys = {"kind",     "name",      "at",
+                                                 "diameter", "tolerance", "side"};
 
 std::string fmtLen(double mm, Units u) {
     char buf[64];
@@ -248,7 +251,11 @@ void readCone(const Fields& f, Feature& feat, Iso2768 cls) {
     feat.diameterMm = std::max(cone.diameterAt(feat.zStartMm), cone.diameterAt(feat.zEndMm));
 }
 
+// `at` is the face whose edge the chamfer breaks and `diameter` the edge's. Outside, it widens
+// from `at` over `length` to `diameter`; inside, it narrows from `at` to the bore's `diameter`
+// (a mouth chamfer: widens toward the tailstock, runs from the face into the hole).
 void readChamfer(const Fields& f, Feature& feat, Iso2768 cls) {
+    const bool inside = feat.side == Side::Inside;
     const double at = f.requiredLength("at", "the position of the edge, from the datum face");
     f.require(at >= 0, "at", "expected 0 or more: positions are measured from the datum face");
     const double len = f.requiredLength("length", "the chamfer's axial length");
@@ -258,18 +265,21 @@ void readChamfer(const Fields& f, Feature& feat, Iso2768 cls) {
               "expected more than 0 and less than 90 degrees");
     const double d = f.requiredLength("diameter", "the diameter of the edge the chamfer breaks");
     requirePositive(f, "diameter", d);
-    Widens w = Widens::TowardChuck;
+    Widens w = inside ? Widens::TowardTailstock : Widens::TowardChuck;
     if (f.has("widens_toward"))
         w = readWidens(f);
-    const double smallD = d - 2 * len * std::tan(angle);
-    f.require(smallD > 0, "length",
-              "expected a chamfer that leaves a diameter (it would reach the axis)");
-    // The chamfer starts at `at` (its small end) and grows over `length` in its direction.
-    feat.zStartMm = w == Widens::TowardChuck ? at : at - len;
-    feat.zEndMm = w == Widens::TowardChuck ? at + len : at;
+    const double step = 2 * len * std::tan(angle);
+    if (!inside)
+        f.require(d - step > 0, "length",
+                  "expected a chamfer that leaves a diameter (it would reach the axis)");
+    f.require(d + step <= kMaxLengthMm, "length", "expected a chamfer of at most 10 m diameter");
+    // Outside it extends from `at` the way it widens; inside the way it narrows.
+    const bool towardChuck = (w == Widens::TowardChuck) != inside;
+    feat.zStartMm = towardChuck ? at : at - len;
+    feat.zEndMm = towardChuck ? at + len : at;
     f.require(feat.zStartMm >= 0, "at", "expected the chamfer to lie on the part (z 0 or more)");
     feat.diameterMm = d;
-    feat.cone = Cone{at, smallD, angle, w};
+    feat.cone = Cone{at, inside ? d + step : d - step, angle, w};
     feat.coneGivenAs = "chamfer";
     readTolerance(f, feat, cls, d);
     readAngleTolerance(f, feat, cls, len);
@@ -291,6 +301,8 @@ Feature readFeature(const toml::table& t, int index, const ReadContext& ctx, Iso
     Feature feat;
     feat.where = f.where();
     feat.name = f.string("name", "a label").value_or("feature " + std::to_string(index));
+    if (auto side = f.choice("side", {"outside", "inside"}))
+        feat.side = *side == "inside" ? Side::Inside : Side::Outside;
     if (*kind == "cylinder") {
         feat.kind = FeatureKind::Cylinder;
         readExtent(f, feat);
@@ -342,9 +354,14 @@ Part readPart(const Fields& root, const Stock& stock) {
         Fields ff(*ft, "part.feature[" + std::to_string(index) + "]", root.context(),
                   kAnyFeatureKeys);
         const Units u = root.context().units;
-        // Along the axis in order, each starting where the one before ends or later.
-        if (!part.features.empty()) {
-            const Feature& prev = part.features.back();
+        // Along the axis in order, each starting where the one before on its side ends or
+        // later: inside features lie under the outside ones.
+        const Feature* before = nullptr;
+        for (const Feature& p : part.features)
+            if (p.side == feat.side)
+                before = &p;
+        if (before) {
+            const Feature& prev = *before;
             ff.require(feat.zStartMm >= prev.zEndMm - 1e-9,
                        feat.kind == FeatureKind::Face || feat.kind == FeatureKind::Chamfer ? "at"
                                                                                            : "from",
@@ -367,7 +384,12 @@ Part readPart(const Fields& root, const Stock& stock) {
                                  " and the jaws' face is at z = " + fmtLen(stock.jawZMm(), u) +
                                  " (stick-out less face allowance)");
         }
-        // No larger than the bar.
+        // No larger than the bar; an inside feature is checked against the hole and the wall
+        // with the whole scene (insideWorkProblem).
+        if (feat.side == Side::Inside) {
+            part.features.push_back(std::move(feat));
+            continue;
+        }
         double largest = feat.diameterMm;
         if (feat.kind == FeatureKind::Cone)
             largest =

@@ -5,10 +5,13 @@
 #include "scene_text.h"
 #include "swarf/io/did_you_mean.h"
 #include "swarf/sim/cut.h"
+#include "swarf/sim/inside_work.h"
 
 #include <cmath>
 #include <filesystem>
 #include <fstream>
+#include <optional>
+#include <string>
 
 namespace swarf::io {
 
@@ -32,7 +35,8 @@ Stock readStock(const Fields& root) {
     if (!t)
         root.missing("stock", "a [stock] table: the bar");
     Fields f(*t, "stock", root.context(),
-             {"diameter", "length", "stick_out", "face_allowance", "material", "tailstock"});
+             {"diameter", "length", "stick_out", "face_allowance", "material", "tailstock",
+              "bore_diameter", "bore_depth"});
     Stock s;
     s.where = f.where();
     s.diameterMm = f.requiredLength("diameter", "the bar diameter");
@@ -50,6 +54,17 @@ Stock readStock(const Fields& root) {
               "expected less than the stick-out");
     s.material = f.string("material", "free text").value_or("");
     s.tailstockSupport = f.boolean("tailstock").value_or(false);
+    // A hole from the free end: both keys or neither. Against the bar and the features it is
+    // checked with the whole scene (insideWorkProblem).
+    s.boreWhere = f.where("bore_diameter");
+    if (auto d = f.length("bore_diameter", "the hole's diameter")) {
+        detail::requirePositive(f, "bore_diameter", *d);
+        s.boreDiameterMm = *d;
+        s.boreDepthMm = f.requiredLength("bore_depth", "how deep the hole goes from the free end");
+        detail::requirePositive(f, "bore_depth", s.boreDepthMm);
+    } else if (f.has("bore_depth")) {
+        f.missing("bore_diameter", "the hole's diameter, with bore_depth");
+    }
     return s;
 }
 
@@ -176,6 +191,47 @@ std::vector<double> readGaugeBlocks(const Fields& root) {
     return sizes;
 }
 
+// The node a dotted key names ("part.feature[2].to"), or the deepest table on the way when the
+// key itself is absent (a default); nullptr if not even the first table is there.
+const toml::node* nodeAt(const toml::table& doc, const std::string& dotted) {
+    const toml::node* at = &doc;
+    std::size_t pos = 0;
+    while (pos <= dotted.size()) {
+        const std::size_t dot = dotted.find('.', pos);
+        std::string part = dotted.substr(pos, dot == std::string::npos ? dot : dot - pos);
+        std::optional<std::size_t> index;
+        if (auto b = part.find('['); b != std::string::npos) {
+            index = std::stoul(part.substr(b + 1)) - 1;
+            part = part.substr(0, b);
+        }
+        const toml::table* t = at->as_table();
+        const toml::node* next = t ? t->get(part) : nullptr;
+        if (next && index) {
+            const toml::array* a = next->as_array();
+            next = a && *index < a->size() ? a->get(*index) : nullptr;
+        }
+        if (!next)
+            return at == &doc ? nullptr : at;
+        at = next;
+        if (dot == std::string::npos)
+            break;
+        pos = dot + 1;
+    }
+    return at;
+}
+
+// Inside work that does not hang together, at the key's own line and column.
+void checkInsideWork(const Scene& scene, const toml::table& doc, const std::string& fileName) {
+    const auto p = insideWorkProblem(scene);
+    if (!p)
+        return;
+    const toml::node* n = nodeAt(doc, p->key);
+    const SourceLoc where = n ? detail::locOf(n->source(), fileName) : p->where;
+    // The value as written when the key is there; else the value the scene came to.
+    const bool written = n && !n->is_table() && !n->is_array();
+    throw InputError(where, p->key, written ? detail::valueText(*n) : p->value, p->expected);
+}
+
 // Tables written at the top level that belong inside another: "did you mean [[part.feature]]?".
 void rejectMisplacedTables(const toml::table& doc, const std::string& fileName) {
     static const std::pair<const char*, const char*> kNested[] = {
@@ -228,6 +284,7 @@ Scene readSceneText(const std::string& text, const std::string& fileName) {
     scene.expect = readExpect(root, scene.readNotes);
     scene.gaugeBlocksMm = readGaugeBlocks(root);
     scene.uncertainty = detail::readUncertainty(root, scene.tool, scene.setup);
+    checkInsideWork(scene, doc, fileName);
     scene.validate();
     return scene;
 }

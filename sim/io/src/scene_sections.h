@@ -10,6 +10,10 @@ namespace swarf::io::detail {
 Part readPart(const Fields& root, const Stock& stock);
 /// [tool].
 Tool readTool(const Fields& root);
+/// [tool] kind: "turning" (default) or "boring_bar" with bar_diameter, overhang, min_bore (each
+/// refused on the other kind); sets tool.kind and the bar's values. A boring bar's tip_height is
+/// refused (it is axis_height, read with the tool).
+void readToolKind(const Fields& f, Tool& tool);
 /// [setup] with [setup.compound], [setup.cross], [setup.saddle].
 Setup readSetup(const Fields& root);
 /// [[plan.pass]] (the [plan] table may be absent: an empty plan).

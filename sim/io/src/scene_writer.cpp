@@ -161,6 +161,8 @@ void writeFeature(Out& o, const Feature& f) {
         o.str("widens_toward", widens(f.cone.widens));
         break;
     }
+    if (f.side == Side::Inside)
+        o.str("side", sideName(f.side));
     if (!f.toleranceFromClass)
         o.len("tolerance", f.toleranceMm);
     if ((f.kind == FeatureKind::Cone || f.kind == FeatureKind::Chamfer) &&
@@ -228,6 +230,10 @@ std::string sceneToToml(const Scene& sc, const std::vector<std::string>& headerC
     o.len("face_allowance", sc.stock.faceAllowanceMm);
     o.str("material", sc.stock.material);
     o.raw("tailstock", sc.stock.tailstockSupport ? "true" : "false");
+    if (sc.stock.hasBore()) {
+        o.len("bore_diameter", sc.stock.boreDiameterMm);
+        o.len("bore_depth", sc.stock.boreDepthMm);
+    }
 
     o.line("");
     o.line("[part]");
@@ -238,6 +244,13 @@ std::string sceneToToml(const Scene& sc, const std::vector<std::string>& headerC
     const Tool& t = sc.tool;
     o.line("");
     o.line("[tool]");
+    const bool bar = t.kind == ToolKind::BoringBar;
+    if (bar) {
+        o.str("kind", "boring_bar");
+        o.len("bar_diameter", t.barDiameterMm);
+        o.len("overhang", t.overhangMm);
+        o.len("min_bore", t.minBoreMm);
+    }
     if (t.shape != 0)
         o.str("shape", std::string(1, t.shape));
     else
@@ -249,7 +262,7 @@ std::string sceneToToml(const Scene& sc, const std::vector<std::string>& headerC
         o.deg("entering_angle", t.enteringAngleRad);
     o.str("hand", t.hand == Hand::R ? "R" : t.hand == Hand::L ? "L" : "N");
     o.len("edge_length", t.edgeLengthMm);
-    o.len("tip_height", t.tipHeightMm);
+    o.len(bar ? "axis_height" : "tip_height", t.tipHeightMm);
     o.len("thickness", t.thicknessMm);
 
     const Setup& s = sc.setup;

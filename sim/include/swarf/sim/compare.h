@@ -25,6 +25,17 @@ Profile nominalOnGrid(const Part& part, const Profile& grid);
 /// at that sample; NaN off the drawing.
 std::vector<double> normalDeviation(const Part& part, const Profile& nominal, const Profile& asCut);
 
+/// The drawing's radius on one side on the grid's samples (inside: the drawn bore, from
+/// Part::radialFeatureOnSide); NaN where the drawing gives none on that side.
+Profile nominalOnGrid(const Part& part, const Profile& grid, Side side);
+
+/// Signed deviation normal to the drawing on one side per sample, mm: + metal left on, − overcut.
+/// Outside it is normalDeviation; inside, metal left on is metal within the drawn bore (the
+/// as-cut bore smaller than drawn: a plug gauge goes in short), so (Rn − R)·cos θ. NaN off the
+/// drawing on that side.
+std::vector<double> normalDeviation(const Part& part, const Profile& nominal, const Profile& asCut,
+                                    Side side);
+
 /// Signed deviation normal to the drawing of a surface point at (z, radius), mm: + left on,
 /// − overcut; NaN off the drawing. For colouring the 3D surface (FeedMarkSurface) point by point.
 double normalDeviationAt(const Part& part, double zMm, double radiusMm);

@@ -1,10 +1,10 @@
 #pragma once
-// Nose-radius offsets for an outside cone (references R1). A tool is positioned by its
-// imaginary tip: the corner where the tangents to the nose at its lowest x and at one of its
-// z-extremes meet. Driving that corner along the drawing's cone line cuts a cone parallel to it
-// but displaced: metal is left on when the tip's z-tangent is on the side the cone widens
-// toward, and the cone is overcut when it is on the other side. Shifting the path by ONE of ΔX
-// or ΔZ puts the cone where the drawing has it.
+// Nose-radius offsets for an outside cone (references R1), and mirrored for an inside one. A tool
+// is positioned by its imaginary tip: the corner where the tangents to the nose at its lowest x and
+// at one of its z-extremes meet. Driving that corner along the drawing's cone line cuts a cone
+// parallel to it but displaced: metal is left on when the tip's z-tangent is on the side the cone
+// widens toward, and the cone is overcut when it is on the other side. Shifting the path by ONE of
+// ΔX or ΔZ puts the cone where the drawing has it.
 #include "swarf/sim/cone.h"
 
 namespace swarf {
@@ -40,5 +40,16 @@ struct NoseOffsets {
 /// tip on `tip`'s side. All lengths mm.
 NoseOffsets noseRadiusOffsets(double noseRadiusMm, double halfAngleRad, Widens widens,
                               TipSide tip = TipSide::ChuckSide);
+
+/// Offsets for an inside cone (a bore) of half angle θ widening as given, cut with a boring
+/// tool's nose of radius r positioned by its imaginary tip: the corner of the tangents at the
+/// nose's largest x (the wall side) and at `tip`'s z. The outside case mirrored across the
+/// surface (references R1, R12; derived): an inside cone widening one way is an outside one
+/// widening the other, and the wall is away from the axis. So `leftOn` means metal left inside
+/// the drawn bore (a plug gauge goes in short), the magnitudes are those of noseRadiusOffsets
+/// for the mirrored cone, `xShiftSign` is +1 (away from the axis) to cut deeper and −1 to cut
+/// less, and `zShiftSign` moves toward the bore's narrow end to cut deeper.
+NoseOffsets insideNoseRadiusOffsets(double noseRadiusMm, double halfAngleRad, Widens widens,
+                                    TipSide tip = TipSide::ChuckSide);
 
 } // namespace swarf

@@ -32,9 +32,21 @@ struct Stock {
     std::string material;       ///< free text
     bool tailstockSupport = false; ///< work supported by a centre in the tailstock
     SourceLoc where;
+    /// A drilled or pre-bored hole from the free end, mm; 0: solid bar. Less than diameterMm.
+    double boreDiameterMm = 0;
+    /// How deep the hole goes from the free end, mm (0 with no hole); it reaches the jaws' face
+    /// or beyond for a hole through the work.
+    double boreDepthMm = 0;
+    SourceLoc boreWhere; ///< the bore_diameter key, for messages about the hole
 
     double freeEndZMm() const { return -faceAllowanceMm; }
     double jawZMm() const { return -faceAllowanceMm + stickOutMm; }
+    /// True if the bar has a hole (boreDiameterMm > 0).
+    bool hasBore() const { return boreDiameterMm > 0; }
+    /// z of the bottom of the hole (mm): freeEndZMm() + boreDepthMm. Meaningful with a hole.
+    double boreBottomZMm() const { return freeEndZMm() + boreDepthMm; }
+    /// True if the hole reaches the jaws' face (through the work that sticks out).
+    bool boreThrough() const { return hasBore() && boreBottomZMm() >= jawZMm() - 1e-9; }
 };
 
 /// ISO 2768-1 general tolerance class.
@@ -43,18 +55,28 @@ enum class Iso2768 { f, m, c, v };
 /// Kinds of drawing feature along the axis.
 enum class FeatureKind { Cylinder, Cone, Chamfer, Face };
 
+/// Which surface a feature is on: the outside of the bar, or the inside of its hole (a bore).
+enum class Side { Outside, Inside };
+
+/// "outside" or "inside": a feature's side as scene files spell it (the `side` key).
+const char* sideName(Side side);
+
 /// "cylinder", "cone", "chamfer" or "face": the feature's kind as scene files and result.json
 /// spell it.
 const char* featureKindName(FeatureKind kind);
 
 /// One feature of the drawing, between zStartMm and zEndMm (zStart < zEnd; equal for a face).
-/// A chamfer is stored as a cone (its half angle and diameter at its small end).
+/// A chamfer is stored as a cone (its half angle and diameter at the face it breaks: the small
+/// end outside, the large end inside). An inside feature is a surface of the bore.
 struct Feature {
     FeatureKind kind = FeatureKind::Cylinder;
-    std::string name; ///< as the scene names it, or "feature N"
+    Side side = Side::Outside; ///< on the outside of the bar or inside its hole
+    std::string name;          ///< as the scene names it, or "feature N"
     double zStartMm = 0, zEndMm = 0;
-    double diameterMm = 0; ///< Cylinder: the diameter. Face: the outer diameter of the face.
-    Cone cone;             ///< Cone and Chamfer
+    /// Cylinder: the diameter. Face: the outer diameter of the face. Chamfer: the diameter of
+    /// the edge it breaks. Cone: its larger end diameter.
+    double diameterMm = 0;
+    Cone cone; ///< Cone and Chamfer
     std::string
         coneGivenAs;        ///< how the scene gave the cone ("half_angle", "standard Morse 3", ...)
     double toleranceMm = 0; ///< ± on diameter (cylinder diameter, cone gauge diameter), mm
@@ -75,14 +97,22 @@ struct Part {
     Iso2768 toleranceClass = Iso2768::m;
     SourceLoc where;
 
-    /// Index of the radial feature (cylinder, cone, chamfer) that gives the drawn radius at z:
-    /// the one covering z, the larger where two meet; −1 where none does. The one definition of
-    /// "the drawing at z" that the comparison, the pictures and the planner use.
+    /// Index of the outside radial feature (cylinder, cone, chamfer) that gives the drawn radius
+    /// at z: the one covering z, the larger where two meet; −1 where none does. The one
+    /// definition of "the drawing at z" that the comparison, the pictures and the planner use.
+    /// Inside features are never returned (see radialFeatureOnSide).
     int radialFeatureAt(double zMm) const;
+    /// As radialFeatureAt, on the given side; inside, the smaller where two meet (the bore's
+    /// drawn surface is the one nearest the axis, as outside it is the one farthest from it).
+    int radialFeatureOnSide(double zMm, Side side) const;
+    /// True if any feature is on the inside.
+    bool hasInside() const;
     /// The drawn radius at z (mm) from radialFeatureAt; empty where the drawing says nothing.
     std::optional<double> nominalRadiusAt(double zMm) const;
-    /// The first cone feature (the one the job is about), or nullptr.
+    /// The first outside cone feature (the one the job is about), or nullptr.
     const Feature* mainCone() const;
+    /// The first inside cone feature, or nullptr.
+    const Feature* mainInsideCone() const;
     double zMinMm() const;
     double zMaxMm() const;
 };
@@ -90,17 +120,26 @@ struct Part {
 /// Which way a tool is handed (ISO 1832): R feeds toward the chuck, L toward the tailstock.
 enum class Hand { R, L, N };
 
+/// What holds the insert: a turning holder (outside work) or a boring bar (inside work).
+enum class ToolKind { Turning, BoringBar };
+
 /// The insert and its holder.
 struct Tool {
+    ToolKind kind = ToolKind::Turning;
     char shape = 'D';            ///< ISO 1832 shape letter, or 0 when given by includedAngleRad
     double includedAngleRad = 0; ///< insert corner angle ε
     double noseRadiusMm = 0.4;   ///< r
     double enteringAngleRad = 0; ///< holder entering angle κr, measured from the feed direction
     Hand hand = Hand::R;
-    double edgeLengthMm = 15;  ///< cutting edge length (insert size), mm
-    double tipHeightMm = 0;    ///< tip above (+) or below (−) centre, mm
+    double edgeLengthMm = 15; ///< cutting edge length (insert size), mm
+    /// Tip above (+) or below (−) centre, mm. A boring bar's tip is on the bar's axis (its
+    /// `axis_height`).
+    double tipHeightMm = 0;
     double thicknessMm = 4.76; ///< insert thickness, for drawing it
     std::string holderCode;    ///< ISO 5608 holder letter if given ("J"), for messages
+    double barDiameterMm = 0;  ///< BoringBar: the bar's shank diameter, mm (0 for Turning)
+    double overhangMm = 0;     ///< BoringBar: from the tool post to the insert, mm
+    double minBoreMm = 0;      ///< BoringBar: the smallest bore diameter the bar enters, mm
     SourceLoc where;
 };
 

@@ -22,7 +22,8 @@ inline constexpr double kPlausibleFeedMmPerRev = 1.0;
 /// - a feed per revolution above kPlausibleFeedMmPerRev in the plan or in [planning] (a feed per
 ///   minute?);
 /// - a stick-out too short for the tool to finish the part's last feature without its insert
-///   coming within kJawClearanceMm of the jaws.
+///   coming within kJawClearanceMm of the jaws;
+/// - a boring bar's overhang and a boring bar with nothing to bore (insideWorkNotes).
 /// First, what the reader noticed (Scene::readNotes: an old name accepted).
 /// Empty when nothing is worth a note.
 std::vector<std::string> sceneNotes(const Scene& scene);
