@@ -12,6 +12,7 @@
 #include <algorithm>
 #include <cmath>
 #include <filesystem>
+#include <fstream>
 #include <string>
 
 namespace fs = std::filesystem;
@@ -244,4 +245,24 @@ TEST_CASE("a drawing cut within tolerance has the drawing's volume", "[corpus][k
         }
     }
     CHECK(checked >= 10);
+}
+
+TEST_CASE("every scene file opens with the caution in its leading comments", "[corpus][caution]") {
+    // Every scene is an example someone may copy to the machine: its header carries the caution
+    // before the first key (scenes/README.md, "Adding a scene").
+    std::vector<fs::path> files = sceneFiles();
+    for (const char* dir : {"extreme_scenes", "absurd_scenes", "inside_scenes"})
+        for (const auto& e : fs::directory_iterator(fs::path(SWARF_TEST_DATA_DIR) / dir))
+            if (e.path().extension() == ".toml")
+                files.push_back(e.path());
+    REQUIRE(files.size() > 20);
+    for (const fs::path& f : files) {
+        INFO(f.string());
+        std::ifstream in(f);
+        std::string line;
+        bool caution = false;
+        while (std::getline(in, line) && (line.empty() || line[0] == '#'))
+            caution = caution || line.find("CAUTION") != std::string::npos;
+        CHECK(caution);
+    }
 }
