@@ -160,3 +160,14 @@ TEST_CASE("swarf plan ends with the caution, planned or not", "[cli][plan]") {
         fs::remove_all(dir);
     }
 }
+
+TEST_CASE("swarf view at a position past the plan says so, with the range", "[cli][view]") {
+    const fs::path png =
+        fs::temp_directory_path() / ("swarf-view-past-" + std::to_string(getpid()) + ".png");
+    const Run r = runSwarf("view '" + std::string(SWARF_SCENES_DIR) +
+                           "/fixture-arbor.toml' --pass 7 --screenshot '" + png.string() + "'");
+    INFO(r.out << r.err);
+    CHECK(r.exitCode == 2);
+    CHECK(contains(r.err, "--pass = 7: expected a position from 0 (before the first pass) to 4"));
+    CHECK_FALSE(fs::exists(png));
+}

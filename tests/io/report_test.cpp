@@ -55,3 +55,20 @@ TEST_CASE("report of a part within tolerance says so and escapes text", "[io][re
     CHECK(html.find("Lock the saddle &lt;then&gt; wind &amp; watch") != std::string::npos);
     CHECK(html.find("<img") == std::string::npos);
 }
+
+TEST_CASE("an inch scene's report gives volumes in cubic inches; a finding with no place a dash",
+          "[io][report][units]") {
+    Scene s = test::syntheticScene(2);
+    s.units = Units::Inch;
+    CutResult r = test::syntheticResult(s, [](int k) { return k == 1 ? 0.001 : 0.5; });
+    r.stockVolumeMm3 = 16387.064; // one cubic inch (25.4³ mm³, exact by definition of the inch)
+    Finding f;
+    f.kind = FindingKind::AirCut;
+    f.pass = 0;
+    f.message = "cuts nothing";
+    r.findings.push_back(f); // no place: zMm is NaN
+    const std::string html = io::reportHtml(s, r, nullptr);
+    CHECK(html.find("stock 1.00 in³") != std::string::npos);
+    CHECK(html.find("mm³") == std::string::npos);
+    CHECK(html.find("<td>—</td><td>cuts nothing</td>") != std::string::npos);
+}

@@ -108,7 +108,7 @@ int runBudgetCommand(const BudgetArgs& a) {
     if (b.sources.empty())
         fmt::print("sources: none ([uncertainty] states nothing uncertain)\n");
     for (const SourceShare& s : b.sources)
-        fmt::print("  {}\n", io::sourceLine(scene, b, s));
+        fmt::print("  {}\n", io::sourceLine(scene, s));
     fmt::print("{}.\n", budgetSentence(b));
     fmt::print("wrote:\n");
     for (const std::string& f : written)

@@ -9,6 +9,8 @@
 #include "swarf/sim/run_budget.h"
 #include "swarf/viewer/viewer.h"
 
+#include <fmt/core.h>
+
 #include <cstdio>
 #include <cstdlib>
 #include <memory>
@@ -59,6 +61,15 @@ void registerView(CLI::App& app, int& exitCode) {
                         &args->options.heightPx);
         const Scene scene = io::readScene(args->scene);
         refuseInsideWork(scene, "view");
+        // A slider position past the plan is said, with the range, before any work.
+        const double passes = static_cast<double>(scene.plan.passes.size());
+        const double at = args->options.startPosition;
+        if (at >= 0 && at > passes) // negative: the finished part (the default)
+            throw InputError(
+                SourceLoc{"command line", 0, 0}, "--pass", fmt::format("{:g}", at),
+                fmt::format("expected a position from 0 (before the first pass) to {:g} (the "
+                            "end of the last): the plan has {:g} passes",
+                            passes, passes));
         requireFits(scene, {false, false, true}, availableMemoryBytes());
         const auto result = std::make_shared<const CutResult>(simulate(scene));
         if (!args->screenshot.empty()) {

@@ -66,7 +66,7 @@ std::string sourceStated(const Scene& scene, BudgetSource s) {
     return "";
 }
 
-std::string sourceLine(const Scene& scene, const Budget& b, const SourceShare& s) {
+std::string sourceLine(const Scene& scene, const SourceShare& s) {
     return fmt::format("{} ({}): gauge diameter sd {} alone, {:.0f} % of the spread",
                        budgetSourceName(s.source), sourceStated(scene, s.source),
                        formatSmallLength(s.sdMm, scene.units), 100.0 * s.share);

@@ -98,12 +98,20 @@ std::string reportHtml(const Scene& scene, const CutResult& result,
                     esc(fig.gaugeDrawing), esc(fig.gaugeAsCut), esc(fig.gaugeError)));
     row("Finish (feed marks of the finishing pass)",
         fmt::format("Rt {}, Ra {}", esc(fig.rt), esc(fig.ra)));
+    // Volumes in the scene's units: cubic inches for an inch scene (25.4³ mm³ each).
+    const bool inch = scene.units == Units::Inch;
+    const auto vol = [inch](double mm3, bool small) {
+        const double v = inch ? mm3 / (25.4 * 25.4 * 25.4) : mm3;
+        const int decimals = inch ? (small ? 4 : 2) : (small ? 1 : 0);
+        return fmt::format("{:.{}f} {}", v, decimals, inch ? "in³" : "mm³");
+    };
     row("Volumes",
-        fmt::format("stock {:.0f} mm³, as cut {:.0f} mm³, removed {:.0f} mm³ (z = {} to {}, the "
-                    "solids written); left on {:.1f} mm³, overcut {:.1f} mm³ (within the drawing)",
-                    result.stockVolumeMm3, result.asCutVolumeMm3, result.removedVolumeMm3,
-                    len(result.volumeFromZMm), len(result.volumeToZMm), result.leftoverVolumeMm3,
-                    result.overcutVolumeMm3));
+        fmt::format("stock {}, as cut {}, removed {} (z = {} to {}, the solids written); left on "
+                    "{}, overcut {} (within the drawing)",
+                    vol(result.stockVolumeMm3, false), vol(result.asCutVolumeMm3, false),
+                    vol(result.removedVolumeMm3, false), len(result.volumeFromZMm),
+                    len(result.volumeToZMm), vol(result.leftoverVolumeMm3, true),
+                    vol(result.overcutVolumeMm3, true)));
     h += "</table>\n";
 
     // Features against the drawing.
@@ -139,8 +147,8 @@ std::string reportHtml(const Scene& scene, const CutResult& result,
         for (const Finding& f : result.findings)
             h += fmt::format(
                 "<tr><td>{}</td><td>{}</td><td>{}</td><td>{}</td></tr>\n", findingLabel(f.kind),
-                f.pass >= 0 ? std::to_string(f.pass + 1) : std::string("-"),
-                std::isfinite(f.zMm) ? "z = " + len(f.zMm) : std::string("-"), esc(f.message));
+                f.pass >= 0 ? std::to_string(f.pass + 1) : std::string("—"),
+                std::isfinite(f.zMm) ? "z = " + len(f.zMm) : std::string("—"), esc(f.message));
         h += "</table>\n";
     }
 

@@ -28,7 +28,7 @@ std::string writeBudgetReport(const Scene& scene, const Budget& budget, const st
 
 /// One line per source for people, in the scene's units: "the compound setting: ± 35 µm sd
 /// alone, 70 % of the spread".
-std::string sourceLine(const Scene& scene, const Budget& budget, const SourceShare& share);
+std::string sourceLine(const Scene& scene, const SourceShare& share);
 
 /// What the source's key in [uncertainty] says, in the scene's units: "sd 5′", "± 0.010 mm",
 /// "unknown, 0 to 0.050 mm", "ISO class M: ± 0.080 mm".
