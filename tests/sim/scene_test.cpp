@@ -13,7 +13,11 @@ namespace {
 Scene goodScene() {
     Scene s;
     s.file = "code.toml";
-    s.stock = Stock{30, 150, 85, 0, "steel", false, {"code.toml", 4, 1}};
+    s.stock.diameterMm = 30;
+    s.stock.lengthMm = 150;
+    s.stock.stickOutMm = 85;
+    s.stock.material = "steel";
+    s.stock.where = {"code.toml", 4, 1};
     Feature cone;
     cone.kind = FeatureKind::Cone;
     cone.name = "taper";

@@ -100,9 +100,9 @@ std::string reportHtml(const Scene& scene, const CutResult& result,
         fmt::format("Rt {}, Ra {}", esc(fig.rt), esc(fig.ra)));
     // Volumes in the scene's units: cubic inches for an inch scene (25.4³ mm³ each).
     const bool inch = scene.units == Units::Inch;
-    const auto vol = [inch](double mm3, bool small) {
+    const auto vol = [inch](double mm3, bool fine) {
         const double v = inch ? mm3 / (25.4 * 25.4 * 25.4) : mm3;
-        const int decimals = inch ? (small ? 4 : 2) : (small ? 1 : 0);
+        const int decimals = inch ? (fine ? 4 : 2) : (fine ? 1 : 0);
         return fmt::format("{:.{}f} {}", v, decimals, inch ? "in³" : "mm³");
     };
     row("Volumes",
