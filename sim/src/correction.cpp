@@ -118,9 +118,10 @@ Correction correctPlan(const Scene& plan, const Measurements& m) {
     }
     Scene cut = story;
     cut.plan.passes.resize(static_cast<std::size_t>(n));
-    // The cross-slide's zero: the measured cone against the one these passes make from it.
+    // The cross-slide's zero: the measured cone against the one these passes make from it, on
+    // the feed marks' crests, which a micrometer's anvils, rolls and gauges touch.
     {
-        const Profile p = profileAfter(cut, n);
+        const Profile p = simulate(cut).crest;
         std::vector<double> zs;
         for (const auto& d : m.diameters)
             zs.push_back(d.zMm);
@@ -182,7 +183,10 @@ Correction correctPlan(const Scene& plan, const Measurements& m) {
         p.compoundAngleRad =
             compoundScaleReadingRad(s.compoundAxisAngleRad() - c.revealedErrorRad, s.compoundScale);
         p.compoundErrorRad = c.revealedErrorRad;
-        shiftCross(p, c.crossOffsetMm * dial);
+        // Moved by the zero's offset, and set as a person sets it: to half a division.
+        const double half = 0.5 * plan.setup.cross.mmPerDivision;
+        const double start = passStartCrossMm(p) + c.crossOffsetMm * dial;
+        shiftCross(p, std::round(start / half) * half - passStartCrossMm(p));
         if (p.kind == PassKind::Compound)
             finish = k;
     }

@@ -75,6 +75,7 @@ struct Trip {
     ConePlan plan;
     int afterPass = 0;
     fs::path dir;
+    bool uncorrectedWithin = true; // the whole plan cut with the error, no correction
 };
 
 // Plans the scene, cuts it with the error, measures after the pass before the finish.
@@ -102,9 +103,11 @@ Trip cutAndMeasure(const Case& c) {
             break;
         }
     t.afterPass = finish; // passes are counted from 1: pass `finish` is index finish − 1
+    t.uncorrectedWithin = simulate(truth).withinTolerance;
     truth.plan.passes.resize(static_cast<std::size_t>(finish));
     const std::vector<ToolMove> moves = planMoves(truth);
-    const Profile cut = profileUpTo(truth, moves, moves.size());
+    // What a micrometer, rolls or a gauge touch: the crests of the feed marks.
+    const Profile cut = simulate(truth).crest;
 
     // Measured along the stroke of the pass just cut, on the cone (a plan with two saddle
     // settings cuts the cone in two strokes; each pivots where its compound reads 0).
@@ -145,7 +148,7 @@ TEST_CASE("swarf correct: the round trip after a trial cut", "[cli][correct]") {
     const Case cases[] = {
         {"plan-1-20-chuck-out.toml", 0.03, 0.0}, {"plan-1-20-tailstock-in.toml", -0.02, 0.0},
         {"plan-morse-3-inch.toml", 0.025, 0.0},  {"plan-morse-3-chuck-out-inch.toml", -0.03, 0.0},
-        {"plan-flare-10.toml", 0.05, 0.0}, // a cone widening toward the tailstock
+        {"plan-flare-10.toml", 0.1, 0.08}, // a cone widening toward the tailstock
         {"plan-7-24-taper.toml", 0.0, 0.06},     {"plan-shallow-1-50.toml", 0.02, 0.04},
     };
     for (const Case& c : cases) {
@@ -154,6 +157,7 @@ TEST_CASE("swarf correct: the round trip after a trial cut", "[cli][correct]") {
         INFO(c.scene << ": compound off by " << c.compoundErrorDeg << "°, cross zero off by "
                      << c.crossOffsetMm << " mm");
         const Trip t = cutAndMeasure(c);
+        CHECK_FALSE(t.uncorrectedWithin); // the error matters: uncorrected, the part is out
         const Run r = runSwarf("correct '" + (t.dir / "planned.toml").string() + "' --measured '" +
                                (t.dir / "MEASURED.toml").string() + "' --out '" +
                                (t.dir / "out").string() + "'");
@@ -173,6 +177,9 @@ TEST_CASE("swarf correct: the round trip after a trial cut", "[cli][correct]") {
         // the dial's half division.
         CHECK(std::fabs(j["revealed_cross_offset_mm"].get<double>() - c.crossOffsetMm) <= 0.01);
         CHECK(j["verdict_after"] == "in_tolerance");
+        // 0.3 mm more on diameter leaves 0.1 + 0.15 cos θ mm for the finishing pass, more than
+        // twice the finishing allowance (0.1 mm): a pass is added (derived).
+        CHECK(j["passes_added"].get<int>() == (c.crossOffsetMm > 0.2 ? 1 : 0));
         for (const char* f : {"corrected.toml", "setup-sheet.txt", "setup-sheet.html"})
             CHECK(fs::exists(t.dir / "out" / f));
         CHECK_THAT(slurp((t.dir / "out" / "setup-sheet.txt").string()),
@@ -187,6 +194,42 @@ TEST_CASE("swarf correct: the round trip after a trial cut", "[cli][correct]") {
         if (!getenv("SWARF_KEEP"))
             fs::remove_all(t.dir);
     }
+}
+
+TEST_CASE("swarf correct says scrap plainly and corrects nothing", "[cli][correct]") {
+    // The trial cut went 0.3 mm under the plan on diameter (the cross-slide's zero off): the
+    // 1:20 arbor's trial pass leaves 0.2 mm on diameter for the finish (finishing allowance 0.1
+    // mm normal to the cone, references R3 for 1:20), so the cone is 0.1 mm under the drawing,
+    // 0.08 mm under its lower limit (tolerance ±0.02 mm).
+    const Case c{"plan-1-20-chuck-out.toml", 0.0, -0.3};
+    const Trip t = cutAndMeasure(c);
+    const Run r =
+        runSwarf("correct '" + (t.dir / "planned.toml").string() + "' --measured '" +
+                 (t.dir / "MEASURED.toml").string() + "' --out '" + (t.dir / "out").string() + "'");
+    INFO(r.out << r.err);
+    REQUIRE(r.exitCode == 0);
+    CHECK_THAT(r.out, Catch::Contains("SCRAP"));
+    const auto j = nlohmann::json::parse(slurp((t.dir / "out" / "correction.json").string()));
+    CHECK(j["scrap"]["scrap"] == true);
+    // derived: the trial pass stands (finish reading − trial reading) on diameter above the
+    // finished cone, which the plan itself leaves `excess` over the drawing (its half-division
+    // rounding); 0.3 mm under that, less the tolerance, is how far under the lower limit.
+    const Scene& p = t.plan.scene;
+    const double excess =
+        simulate(p).gaugeAsCutDiameterMm - p.part.mainCone()->cone.gaugeDiameterMm;
+    const double step = p.plan.passes[static_cast<std::size_t>(t.afterPass)].crossMm -
+                        p.plan.passes[static_cast<std::size_t>(t.afterPass - 1)].crossMm;
+    CHECK(j["scrap"]["amount_mm"].get<double>() ==
+          Approx(0.3 - step - excess - p.part.mainCone()->toleranceMm).margin(0.002));
+    CHECK(j["verdict_after"] == "scrap");
+    CHECK(j["remaining"].empty());
+    CHECK_THAT(slurp((t.dir / "out" / "setup-sheet.txt").string()),
+               Catch::Contains("No correction can put the metal back"));
+    // corrected.toml holds the story so far, and no more passes.
+    CHECK(slurp((t.dir / "out" / "corrected.toml").string()).find("after the trial cut") ==
+          std::string::npos);
+    if (!getenv("SWARF_KEEP"))
+        fs::remove_all(t.dir);
 }
 
 TEST_CASE("swarf correct refuses bad measurement files with nothing written", "[cli][correct]") {

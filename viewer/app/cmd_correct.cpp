@@ -117,7 +117,8 @@ int runCorrect(const CorrectArgs& a) {
                    "indicator on a test bar moves {} {}\n",
                    c.compoundChangeRad < 0 ? "−" : "+", formatDms(std::fabs(c.compoundChangeRad)),
                    formatDms(c.oldCompoundReadingRad), formatDms(c.newCompoundReadingRad),
-                   L(c.indicatorTravelMm), formatSmallLength(std::fabs(c.indicatorChangeMm), u),
+                   formatLength(c.indicatorTravelMm, u),
+                   formatSmallLength(std::fabs(c.indicatorChangeMm), u),
                    c.indicatorChangeMm >= 0 ? "more" : "less");
         fmt::print("cross-slide zero off by {}{} on diameter; stock left {} to {} normal to the "
                    "cone\n",

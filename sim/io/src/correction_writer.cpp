@@ -162,7 +162,8 @@ std::vector<SheetPart> correctionSheet(const Scene& plan, const Measurements& m,
                            formatDms(c.oldCompoundReadingRad) + " to " +
                            formatDms(c.newCompoundReadingRad) + ".");
         cp.lines.push_back("With an indicator on a test bar parallel to the axis, over " +
-                           L(c.indicatorTravelMm) + " of compound travel the indicator moves " +
+                           formatLength(c.indicatorTravelMm, u) +
+                           " of compound travel the indicator moves " +
                            formatSmallLength(std::fabs(c.indicatorChangeMm), u) +
                            (c.indicatorChangeMm >= 0 ? " more" : " less") + " than before.");
         cp.lines.push_back("The dials keep their zero; the cross-slide readings below include the "
@@ -185,7 +186,8 @@ std::vector<SheetPart> correctionSheet(const Scene& plan, const Measurements& m,
                 p.planPass >= 0 ? ", plan's pass " + std::to_string(p.planPass + 1) : "",
                 dialReadingText(plan.setup.cross, p.crossMm, u));
             if (ps.kind == PassKind::Compound)
-                line += ", compound from " + L(ps.fromMm) + " to " + L(ps.toMm);
+                line += ", compound from " + formatLength(ps.fromMm, u) + " to " +
+                        formatLength(ps.toMm, u);
             rest.lines.push_back(line + ".");
         }
         for (const std::string& n : c.notes)
