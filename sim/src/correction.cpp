@@ -116,6 +116,8 @@ Correction correctPlan(const Scene& plan, const Measurements& m) {
         p.compoundAngleRad = setupForPass(plan.setup, p).compoundReadingRad;
         p.compoundErrorRad = thFit - intendedAngleRad(plan.setup, p);
     }
+    story.name += " (as measured after pass " + std::to_string(n) + ", corrected)";
+    story.expect = Expect{};
     Scene cut = story;
     cut.plan.passes.resize(static_cast<std::size_t>(n));
     // The cross-slide's zero: the measured cone against the one these passes make from it, on
@@ -267,7 +269,6 @@ Correction correctPlan(const Scene& plan, const Measurements& m) {
         c.remaining.push_back(cp);
     }
     keepRetractsOut(story);
-    story.expect = Expect{};
     c.corrected = story;
     return c;
 }
