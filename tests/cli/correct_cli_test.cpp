@@ -138,6 +138,21 @@ Trip cutAndMeasure(const Case& c) {
         "[[over_rolls]]\nroll = {:.4f}\nat = [{:.4f}, {:.4f}]\nreading = [{:.4f}, {:.4f}]\n",
         fromMm(roll, u), rounded(z1, u), rounded(z2, u),
         rounded(readingOverRollsMm(d1, roll, th), u), rounded(readingOverRollsMm(d2, roll, th), u));
+    // An indicator along the axis over the same span, toward the large end: it reads the
+    // change of radius (references R10: L tan θ for α = 0), read to the same least count.
+    m += fmt::format("[[indicator]]\ntravel = {:.4f}\nchange = {:.4f}\n", rounded(zr2 - zr1, u),
+                     rounded(std::fabs(d2 - d1) / 2, u));
+    // A ring gauge of the drawing's gauge diameter, pushed home where the cone has that
+    // diameter; its stand-off from the datum face read with a depth gauge to 0.01 mm (0.0005
+    // in), when that falls on the stroke just cut.
+    const double dg = cone.cone.gaugeDiameterMm;
+    for (double z = lo + 0.5; z < hi - 0.5; z += 0.001)
+        if ((2 * cut.radiusAt(z) - dg) * (2 * cut.radiusAt(z + 0.001) - dg) <= 0) {
+            const double step = u == Units::Inch ? 0.0005 : 0.01;
+            m += fmt::format("[[gauge]]\ngauge_diameter = {:.5f}\nstand_off = {:.4f}\n",
+                             fromMm(dg, u), std::round(fromMm(z, u) / step) * step);
+            break;
+        }
     std::ofstream(t.dir / "MEASURED.toml") << m;
     return t;
 }
