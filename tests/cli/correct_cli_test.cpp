@@ -199,6 +199,10 @@ TEST_CASE("swarf correct: the round trip after a trial cut", "[cli][correct]") {
             CHECK(fs::exists(t.dir / "out" / f));
         CHECK_THAT(slurp((t.dir / "out" / "setup-sheet.txt").string()),
                    Catch::Contains("stop the spindle before measuring"));
+        const std::string html = slurp((t.dir / "out" / "setup-sheet.html").string());
+        CHECK_THAT(html, Catch::Contains("stop the spindle before measuring"));
+        CHECK_THAT(html, Catch::Contains("<svg")); // the before-and-after chart
+        CHECK_THAT(html, Catch::Contains("after correction"));
         // swarf run on the story gives the verdict after correction.
         const Run run = runSwarf("run '" + (t.dir / "out" / "corrected.toml").string() +
                                  "' --out '" + (t.dir / "run").string() + "' --no-pictures");

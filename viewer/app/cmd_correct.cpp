@@ -95,7 +95,8 @@ int runCorrect(const CorrectArgs& a) {
     const std::string title =
         scene.name + ": the rest of the job after pass " + std::to_string(c.afterPass);
     io::writeTextFile(txt, io::correctionSheetText(sheet, title));
-    io::writeTextFile(html, io::correctionSheetHtml(sheet, title));
+    io::writeTextFile(
+        html, io::correctionSheetHtml(sheet, title, io::correctionChartSvg(scene, c, after)));
 
     auto L = [u](double mm) { return formatLength(mm, u, Precision::Fine); };
     const Feature& cone = *scene.part.mainCone();

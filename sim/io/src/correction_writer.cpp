@@ -220,18 +220,22 @@ std::string correctionSheetText(const std::vector<SheetPart>& sheet, const std::
     return t;
 }
 
-std::string correctionSheetHtml(const std::vector<SheetPart>& sheet, const std::string& title) {
+std::string correctionSheetHtml(const std::vector<SheetPart>& sheet, const std::string& title,
+                                const std::string& chartSvg) {
     std::string h = "<!DOCTYPE html>\n<html lang=\"en\"><head><meta charset=\"utf-8\"><title>" +
                     escapeHtml(title) +
                     "</title>\n<style>body{font-family:sans-serif;max-width:50em;margin:2em auto;"
                     "line-height:1.4}h2{border-bottom:1px solid #888}@media print{body{margin:"
                     "0}}</style></head>\n<body>\n<h1>" +
                     escapeHtml(title) + "</h1>\n";
-    for (const SheetPart& p : sheet) {
+    for (std::size_t i = 0; i < sheet.size(); ++i) {
+        const SheetPart& p = sheet[i];
         h += "<h2>" + escapeHtml(p.heading) + "</h2>\n<ul>\n";
         for (const std::string& l : p.lines)
             h += "<li>" + escapeHtml(l) + "</li>\n";
         h += "</ul>\n";
+        if (i == 0 && !chartSvg.empty())
+            h += "<figure>\n" + chartSvg + "</figure>\n";
     }
     return h + "</body></html>\n";
 }

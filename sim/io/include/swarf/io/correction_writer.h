@@ -29,8 +29,16 @@ std::vector<SheetPart> correctionSheet(const Scene& plan, const Measurements& m,
 
 /// The sheet as plain text (UTF-8).
 std::string correctionSheetText(const std::vector<SheetPart>& sheet, const std::string& title);
-/// The sheet as one self-contained HTML page.
-std::string correctionSheetHtml(const std::vector<SheetPart>& sheet, const std::string& title);
+/// The sheet as one self-contained HTML page; `chartSvg` (may be empty) follows its first
+/// section.
+std::string correctionSheetHtml(const std::vector<SheetPart>& sheet, const std::string& title,
+                                const std::string& chartSvg = "");
+
+/// The before-and-after chart as inline SVG: the cone's diameter minus the drawing's along the
+/// cone for the plan after the pass measured, the cone as measured and the corrected job's end
+/// (`after`, the kernel's result for c.corrected), with the tolerance band; empty when there is
+/// no fit.
+std::string correctionChartSvg(const Scene& plan, const Correction& c, const CutResult& after);
 
 /// Residuals for people: "diameter[1] at z 10.000 mm: +0.0012 mm (0.6 u)", one line each.
 std::vector<std::string> residualLines(const ConeFit& fit, Units units);
