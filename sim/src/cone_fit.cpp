@@ -165,13 +165,16 @@ ConeFit fitCone(const Cone& drawing, const Measurements& m) {
                       "wrong";
         return fit;
     }
+    const FitResidual* worst = nullptr; // the reading furthest off, in its uncertainties
     for (const FitResidual& r : fit.residuals)
-        if (std::fabs(r.normalised()) > kMaxNormalisedResidual) {
-            fit.problem = "the readings contradict each other: " + r.what + " is " +
-                          std::to_string(std::lround(std::fabs(r.normalised()))) +
-                          " times its uncertainty off the cone the others give; measure again";
-            return fit;
-        }
+        if (!worst || std::fabs(r.normalised()) > std::fabs(worst->normalised()))
+            worst = &r;
+    if (worst && std::fabs(worst->normalised()) > kMaxNormalisedResidual) {
+        fit.problem = "the readings contradict each other: " + worst->what + " is " +
+                      std::to_string(std::lround(std::fabs(worst->normalised()))) +
+                      " times its uncertainty off the cone the readings give; measure again";
+        return fit;
+    }
     fit.ok = true;
     return fit;
 }
