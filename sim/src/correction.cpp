@@ -226,16 +226,25 @@ Correction correctPlan(const Scene& plan, const Measurements& m) {
         }
     }
 
-    // Passes added where the next cut would be deeper than the plan allows.
+    // Passes added where the next cut would be deeper than the plan allows: max_depth, and for
+    // the finishing pass twice the finishing allowance or half as much again as the plan's own
+    // finishing cut, whichever is more (a plan written by hand may finish deeper).
+    double plannedDepth = 0;
+    {
+        const Profile before = profileAfter(plan, n), next = profileAfter(plan, n + 1);
+        for (double z : cutPlanes(*cone, next, 0.5 * plan.stock.diameterMm))
+            plannedDepth = std::max(plannedDepth, (before.radiusAt(z) - next.radiusAt(z)) * cosTh);
+    }
     for (int guard = 0; guard < 20 && n < static_cast<int>(story.plan.passes.size()); ++guard) {
         const Pass& next = story.plan.passes[static_cast<std::size_t>(n)];
         if (next.kind != PassKind::Compound)
             break;
         const bool isFinish = n == finish;
+        const double planned = c.passesAdded == 0 ? plannedDepth : 0.0;
         const double limit =
-            isFinish && plan.planning.finishAllowanceMm > 0
-                ? std::min(2.0 * plan.planning.finishAllowanceMm, plan.planning.maxDepthMm)
-                : plan.planning.maxDepthMm;
+            isFinish ? std::min(std::max(2.0 * plan.planning.finishAllowanceMm, 1.5 * planned),
+                                std::max(plan.planning.maxDepthMm, planned))
+                     : std::max(plan.planning.maxDepthMm, planned);
         const Profile after = profileAfter(story, n + 1);
         double deepest = 0;
         for (double z : cutPlanes(*cone, after, 0.5 * plan.stock.diameterMm))
