@@ -215,6 +215,26 @@ TEST_CASE("swarf correct: the round trip after a trial cut", "[cli][correct]") {
     }
 }
 
+TEST_CASE("the README's example: the planned 1:20 arbor after pass 2", "[cli][correct]") {
+    // scenes/measured/plan-1-20-after-pass-2.toml was measured (rounded to 0.001 mm) on the
+    // kernel's profile of the plan cut with its compound 0.03° steep (a made-up example).
+    const fs::path dir =
+        fs::temp_directory_path() / ("swarf-correct-readme" + std::to_string(getpid()));
+    fs::remove_all(dir);
+    const Run r = runSwarf("correct '" + std::string(SWARF_SCENES_DIR) +
+                           "/plan-1-20-chuck-out.toml' --measured '" + SWARF_SCENES_DIR +
+                           "/measured/plan-1-20-after-pass-2.toml' --out '" + dir.string() + "'");
+    INFO(r.out << r.err);
+    REQUIRE(r.exitCode == 0);
+    CHECK_THAT(r.out, Catch::Contains("passes planned by swarf plan"));
+    const auto j = nlohmann::json::parse(slurp((dir / "correction.json").string()));
+    CHECK(j["after_pass"] == 2);
+    CHECK(std::fabs(j["revealed_compound_error_deg"].get<double>() - 0.03) <=
+          3 * j["measured"]["half_angle_sd_deg"].get<double>());
+    CHECK(j["verdict_after"] == "in_tolerance");
+    fs::remove_all(dir);
+}
+
 TEST_CASE("swarf correct says scrap plainly and corrects nothing", "[cli][correct]") {
     // The trial cut went 0.3 mm under the plan on diameter (the cross-slide's zero off): the
     // 1:20 arbor's trial pass leaves 0.2 mm on diameter for the finish (finishing allowance 0.1
