@@ -34,6 +34,15 @@ double passEndCrossMm(const Pass& pass) {
     return pass.kind == PassKind::CrossSlide ? pass.toMm : pass.crossMm;
 }
 
+Setup setupForPass(const Setup& setup, const Pass& pass) {
+    Setup s = setup;
+    if (pass.compoundAngleRad)
+        s.compoundReadingRad = *pass.compoundAngleRad;
+    if (pass.compoundErrorRad)
+        s.compoundErrorRad = *pass.compoundErrorRad;
+    return s;
+}
+
 Eigen::Vector2d tipFromTravels(const Setup& setup, double crossTravelMm, double compoundTravelMm,
                                double saddleTravelMm) {
     const double alpha = setup.compoundAxisAngleRad();
@@ -76,9 +85,13 @@ class Walker {
             const double s = ps.kind == PassKind::Saddle ? ps.fromMm : ps.saddleMm;
             if (placed) {
                 backOut(k - 1, k, retractAfter(k - 1));
+                // A pass with a compound setting of its own: the compound is re-set here, with
+                // the tool backed out; the dials keep their zero.
+                su_ = setupForPass(sc_.setup, ps);
                 bring(SlideName::Compound, p, k - 1, k);
                 bring(SlideName::Saddle, s, k - 1, k);
             } else {
+                su_ = setupForPass(sc_.setup, ps);
                 comeFromOutside(c, p, s);
             }
             feedIn(c, k);
@@ -95,7 +108,7 @@ class Walker {
 
   private:
     const Scene& sc_;
-    const Setup& su_;
+    Setup su_; // the set-up as it stands: the pass's own compound setting, if it has one
     SlideState cross_, compound_, saddle_;
     int lastPass_ = -1; // the manual pass that ended last, −1 if none since a path or the start
 

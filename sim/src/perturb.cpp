@@ -105,9 +105,14 @@ Scene perturbScene(const Scene& scene, std::uint64_t seed, std::uint64_t sample,
     const Uncertainty& u = scene.uncertainty;
     for (BudgetSource src : sources) {
         switch (src) {
-        case BudgetSource::CompoundAngle:
-            s.setup.compoundErrorRad += u.compoundAngleSdRad * budgetNormal(seed, sample, src, 0);
+        case BudgetSource::CompoundAngle: {
+            const double e = u.compoundAngleSdRad * budgetNormal(seed, sample, src, 0);
+            s.setup.compoundErrorRad += e;
+            for (Pass& p : s.plan.passes) // a pass with a compound setting of its own
+                if (p.compoundErrorRad)
+                    *p.compoundErrorRad += e;
             break;
+        }
         case BudgetSource::CrossReading:
             jitterReadings(s, Which::Cross, u.crossReadingMm, seed, sample, src);
             break;

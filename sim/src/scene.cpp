@@ -300,6 +300,19 @@ void Scene::validate() const {
         } else {
             c.len(p.toMm != p.fromMm, p.where, k + ".to", p.toMm,
                   "expected a reading other than from");
+            if (p.compoundAngleRad || p.compoundErrorRad) {
+                Setup ps = setup;
+                if (p.compoundAngleRad)
+                    ps.compoundReadingRad = *p.compoundAngleRad;
+                if (p.compoundErrorRad)
+                    ps.compoundErrorRad = *p.compoundErrorRad;
+                c.deg(std::fabs(ps.compoundErrorRad) < degToRad(5), p.where, k + ".compound_error",
+                      ps.compoundErrorRad, "expected less than 5 degrees either way");
+                const double a = ps.compoundAxisAngleRad();
+                c.deg(a >= 0 && a < kPi / 2, p.where, k + ".compound_angle", a,
+                      "expected a true compound angle from 0 to less than 90 degrees from the "
+                      "spindle axis");
+            }
             if (p.retractToMm) {
                 // Backed out: no further in than the pass ended or the next pass starts.
                 double limit = p.kind == PassKind::CrossSlide ? p.toMm : p.crossMm;

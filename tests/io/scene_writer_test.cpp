@@ -90,6 +90,12 @@ void checkSame(const Scene& a, const Scene& b) {
         CHECK(near(p.fromMm, q.fromMm));
         CHECK(near(p.toMm, q.toMm));
         CHECK(near(p.feedMmPerRev, q.feedMmPerRev));
+        CHECK(p.compoundAngleRad.has_value() == q.compoundAngleRad.has_value());
+        if (p.compoundAngleRad && q.compoundAngleRad)
+            CHECK(near(*p.compoundAngleRad, *q.compoundAngleRad));
+        CHECK(p.compoundErrorRad.has_value() == q.compoundErrorRad.has_value());
+        if (p.compoundErrorRad && q.compoundErrorRad)
+            CHECK(near(*p.compoundErrorRad, *q.compoundErrorRad));
         CHECK(p.retractToMm.has_value() == q.retractToMm.has_value());
         if (p.retractToMm && q.retractToMm)
             CHECK(near(*p.retractToMm, *q.retractToMm));
@@ -109,6 +115,17 @@ TEST_CASE("the demo scene round-trips through the writer", "[io][writer]") {
     CHECK(text.rfind("# a comment\n", 0) == 0);
     const Scene b = io::readSceneText(text, "round-trip.toml");
     checkSame(a, b);
+}
+
+TEST_CASE("passes with compound settings of their own round-trip", "[io][writer]") {
+    Scene a = io::readScene(std::string(SWARF_SCENES_DIR) + "/fixture-arbor.toml");
+    REQUIRE(a.plan.passes.size() >= 2);
+    a.plan.passes[1].compoundAngleRad = a.setup.compoundReadingRad + degToRad(0.03);
+    a.plan.passes[1].compoundErrorRad = degToRad(-0.01);
+    const std::string text = io::sceneToToml(a);
+    CHECK_THAT(text, Catch::Contains("compound_angle = "));
+    CHECK_THAT(text, Catch::Contains("compound_error = "));
+    checkSame(a, io::readSceneText(text, "two-settings.toml"));
 }
 
 TEST_CASE("strings with quotes, backslashes and newlines survive", "[io][writer]") {

@@ -55,6 +55,26 @@ TEST_CASE("compound scale read from the cross-slide and its error", "[machine]")
     CHECK(m[0].tipTo.y() == Approx(14.0 - 20 * std::sin(a)));
 }
 
+TEST_CASE("a pass with a compound setting of its own", "[machine]") {
+    // Source: scenes/README.md [[plan.pass]] compound_angle, compound_error: the pass runs at its
+    // own true angle; the dials keep their zero (the machine model's formula, derived).
+    Scene s = compoundScene();
+    Pass second = s.plan.passes[0];
+    second.crossMm = 2.5;
+    second.compoundAngleRad = degToRad(12);
+    second.compoundErrorRad = degToRad(-0.05);
+    s.plan.passes.push_back(second);
+    const auto m = planMoves(s);
+    REQUIRE(m.size() == 2);
+    const double a1 = degToRad(10), a2 = degToRad(11.95);
+    CHECK(m[0].tipTo.y() == Approx(14.0 - 20 * std::sin(a1)));
+    CHECK(m[1].tipFrom.y() == Approx(15.0 - 1.25));
+    CHECK(m[1].tipTo.x() == Approx(40.0 - 20 * std::cos(a2)));
+    CHECK(m[1].tipTo.y() == Approx(15.0 - 1.25 - 20 * std::sin(a2)));
+    CHECK(setupForPass(s.setup, s.plan.passes[1]).compoundAxisAngleRad() == Approx(a2));
+    CHECK(setupForPass(s.setup, s.plan.passes[0]).compoundAxisAngleRad() == Approx(a1));
+}
+
 TEST_CASE("radius dial moves the tool by the reading", "[machine]") {
     Scene s = compoundScene();
     s.setup.crossDial = DialMode::Radius;

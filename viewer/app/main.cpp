@@ -17,6 +17,7 @@ int main(int argc, char** argv) {
     swarf::app::registerView(app, exitCode);
     swarf::app::registerPlan(app, exitCode);
     swarf::app::registerBudget(app, exitCode);
+    swarf::app::registerCorrect(app, exitCode);
     try {
         app.parse(argc, argv);
     } catch (const CLI::CallForHelp& e) {

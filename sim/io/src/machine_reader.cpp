@@ -12,12 +12,15 @@ namespace swarf::io::detail {
 
 namespace {
 
-const std::vector<std::string_view> kCompoundPassKeys = {"kind", "note", "cross", "saddle",
-                                                         "from", "to",   "feed",  "retract_to"};
-const std::vector<std::string_view> kSaddlePassKeys = {"kind", "note", "cross", "compound",
-                                                       "from", "to",   "feed",  "retract_to"};
-const std::vector<std::string_view> kCrossPassKeys = {"kind", "note", "compound", "saddle",
-                                                      "from", "to",   "feed",     "retract_to"};
+const std::vector<std::string_view> kCompoundPassKeys = {
+    "kind", "note", "cross",      "saddle",         "from",
+    "to",   "feed", "retract_to", "compound_angle", "compound_error"};
+const std::vector<std::string_view> kSaddlePassKeys = {
+    "kind", "note", "cross",      "compound",       "from",
+    "to",   "feed", "retract_to", "compound_angle", "compound_error"};
+const std::vector<std::string_view> kCrossPassKeys = {
+    "kind", "note", "compound",   "saddle",         "from",
+    "to",   "feed", "retract_to", "compound_angle", "compound_error"};
 
 std::string fmtNum(double v) {
     char buf[64];
@@ -298,7 +301,7 @@ Plan readPlan(const Fields& root) {
                              "expected a table: write passes as [[plan.pass]]");
         Fields any(*pt, path, root.context(),
                    {"kind", "note", "cross", "compound", "saddle", "from", "to", "feed", "points",
-                    "retract_to"});
+                    "retract_to", "compound_angle", "compound_error"});
         auto kind = any.choice("kind", {"compound", "saddle", "cross", "path"});
         if (!kind)
             any.missing("kind", "\"compound\", \"saddle\", \"cross\" or \"path\"");
@@ -368,6 +371,11 @@ Plan readPlan(const Fields& root) {
         requirePositive(pf, "feed", p.feedMmPerRev);
         p.retractToMm = pf.length("retract_to", "the cross-slide reading backed out to after "
                                                 "the pass");
+        p.compoundAngleRad = pf.angle("compound_angle", "this pass's compound angle on its scale");
+        p.compoundErrorRad = pf.angle("compound_error", "this pass's compound error");
+        if (p.compoundErrorRad)
+            pf.require(std::fabs(*p.compoundErrorRad) < degToRad(5), "compound_error",
+                       "expected less than 5 degrees either way");
         if (p.retractToMm)
             retracts.push_back(
                 {plan.passes.size(), pf.where("retract_to"), valueText(*pt->get("retract_to"))});

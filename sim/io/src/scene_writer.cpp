@@ -209,6 +209,10 @@ void writePass(Out& o, const Pass& p) {
     o.len("feed", p.feedMmPerRev);
     if (p.retractToMm && p.kind != PassKind::Path)
         o.len("retract_to", *p.retractToMm);
+    if (p.compoundAngleRad && p.kind != PassKind::Path)
+        o.deg("compound_angle", *p.compoundAngleRad);
+    if (p.compoundErrorRad && p.kind != PassKind::Path)
+        o.deg("compound_error", *p.compoundErrorRad);
 }
 
 } // namespace

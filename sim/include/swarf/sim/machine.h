@@ -31,6 +31,10 @@ namespace swarf {
 /// given the travel before and the slide's backlash (mm, ≥ 0).
 double followWithBacklash(double travelBeforeMm, double handwheelMm, double backlashMm);
 
+/// The set-up as it stands during `pass`: the set-up's own, with the pass's compound setting
+/// (Pass::compoundAngleRad, Pass::compoundErrorRad) in place of the set-up's where it has one.
+Setup setupForPass(const Setup& setup, const Pass& pass);
+
 /// Imaginary tip (z, x) in mm for slide travels in mm (not readings), as in the file comment.
 Eigen::Vector2d tipFromTravels(const Setup& setup, double crossTravelMm, double compoundTravelMm,
                                double saddleTravelMm);

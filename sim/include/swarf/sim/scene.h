@@ -225,6 +225,12 @@ struct Pass {
     /// goes back to the next start; empty: one turn of the cross-slide dial out from the
     /// smaller of this pass's last and the next pass's first cross-slide reading.
     std::optional<double> retractToMm;
+    /// A compound setting of this pass's own (a plan that re-sets the compound part way, e.g.
+    /// after a trial cut): the angle read on the compound's scale (rad), empty: the set-up's.
+    /// The scale, sense and dial stay the set-up's; the dials keep their zero.
+    std::optional<double> compoundAngleRad;
+    /// This pass's compound error (true angle minus intended, rad), empty: the set-up's.
+    std::optional<double> compoundErrorRad;
     SourceLoc where;
 };
 
