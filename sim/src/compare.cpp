@@ -105,7 +105,8 @@ std::vector<double> markedDeviation(const std::vector<double>& valleysMm,
         return valleysMm;
     std::vector<double> out(valleysMm.size());
     for (std::size_t i = 0; i < out.size(); ++i)
-        out[i] = crestsMm[i] > -valleysMm[i] ? crestsMm[i] : valleysMm[i];
+        // isgreater: NaN (off the drawing) compares false without raising FE_INVALID.
+        out[i] = std::isgreater(crestsMm[i], -valleysMm[i]) ? crestsMm[i] : valleysMm[i];
     return out;
 }
 

@@ -335,7 +335,8 @@ Plan readPlan(const Fields& root) {
                 auto inRange = [u](double v) {
                     return std::isfinite(v) && std::fabs(toMm(v, u)) <= kMaxLengthMm;
                 };
-                if (!z || !d || *d < 0 || !inRange(*z) || !inRange(*d))
+                if (!z || !d || !inRange(*z) || !inRange(*d) ||
+                    *d < 0) // finite before <: no FP trap
                     throw InputError(locOf(pn.source(), root.context().file), path + ".points",
                                      valueText(pn),
                                      "expected a point [z, diameter] of two numbers in " +
