@@ -4,6 +4,8 @@
 // written. How long each takes is measured, not asserted (the report of issue 17 quotes it).
 #include "swarf/io/scene_reader.h"
 
+#include "support/cli_run.h"
+
 #include <catch2/catch.hpp>
 #include <nlohmann/json.hpp>
 
@@ -19,37 +21,11 @@
 
 namespace fs = std::filesystem;
 
+using swarf::test::Run;
+using swarf::test::runSwarf;
+using swarf::test::slurp;
+
 namespace {
-
-struct Run {
-    int exitCode = -1;
-    std::string out, err;
-};
-
-std::string slurp(const fs::path& path) {
-    std::ifstream in(path, std::ios::binary);
-    std::stringstream ss;
-    ss << in.rdbuf();
-    return ss.str();
-}
-
-// Runs SWARF_BINARY with the arguments; stdout through popen, stderr into a temporary file.
-Run runSwarf(const std::string& args) {
-    const std::string errFile = "absurd_scenes_test." + std::to_string(getpid()) + ".stderr.txt";
-    const std::string cmd = std::string("'") + SWARF_BINARY + "' " + args + " 2>" + errFile;
-    Run r;
-    FILE* p = popen(cmd.c_str(), "r");
-    REQUIRE(p != nullptr);
-    char buf[4096];
-    std::size_t n;
-    while ((n = std::fread(buf, 1, sizeof buf, p)) > 0)
-        r.out.append(buf, n);
-    const int status = pclose(p);
-    r.exitCode = WIFEXITED(status) ? WEXITSTATUS(status) : -1;
-    r.err = slurp(errFile);
-    std::remove(errFile.c_str());
-    return r;
-}
 
 fs::path scratch(const std::string& name) {
     const fs::path dir = fs::temp_directory_path() / ("swarf_absurd_" + name);

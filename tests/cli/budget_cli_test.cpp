@@ -1,6 +1,8 @@
 // `swarf budget`: writes budget.json and report.html for the demo, the same file for the same
 // seed, one line per source and the sentence on the console; refuses bad options, bad scenes
 // and scenes with nothing to budget with exit 2 and nothing written.
+#include "support/cli_run.h"
+
 #include <catch2/catch.hpp>
 
 #include <nlohmann/json.hpp>
@@ -15,36 +17,11 @@
 
 namespace fs = std::filesystem;
 
+using swarf::test::Run;
+using swarf::test::runSwarf;
+using swarf::test::slurp;
+
 namespace {
-
-struct Run {
-    int exitCode = -1;
-    std::string out, err;
-};
-
-std::string slurp(const std::string& path) {
-    std::ifstream in(path);
-    std::stringstream ss;
-    ss << in.rdbuf();
-    return ss.str();
-}
-
-Run runSwarf(const std::string& args) {
-    const std::string errFile = "budget_cli_test." + std::to_string(getpid()) + ".stderr.txt";
-    const std::string cmd = std::string("'") + SWARF_BINARY + "' " + args + " 2>" + errFile;
-    Run r;
-    FILE* p = popen(cmd.c_str(), "r");
-    REQUIRE(p != nullptr);
-    char buf[4096];
-    std::size_t n;
-    while ((n = std::fread(buf, 1, sizeof buf, p)) > 0)
-        r.out.append(buf, n);
-    const int status = pclose(p);
-    r.exitCode = WIFEXITED(status) ? WEXITSTATUS(status) : -1;
-    r.err = slurp(errFile);
-    std::remove(errFile.c_str());
-    return r;
-}
 
 std::string scene(const char* name) {
     return std::string("'") + SWARF_SCENES_DIR + "/" + name + "'";

@@ -1,5 +1,7 @@
 // `swarf check`: exit 0 and a summary on stdout for a good scene; exit 2 and the message on
 // stderr (nothing on stdout) for a bad one.
+#include "support/cli_run.h"
+
 #include <catch2/catch.hpp>
 
 #include <cstdio>
@@ -11,39 +13,11 @@
 #include <utility>
 #include <vector>
 
-namespace {
+using swarf::test::Run;
+using swarf::test::runSwarf;
+using swarf::test::slurp;
 
-struct Run {
-    int exitCode = -1;
-    std::string out, err;
-};
-
-std::string slurp(const std::string& path) {
-    std::ifstream in(path);
-    std::stringstream ss;
-    ss << in.rdbuf();
-    return ss.str();
-}
-
-// Runs SWARF_BINARY with the arguments; stdout through popen, stderr into a temporary file.
-Run runSwarf(const std::string& args) {
-    const std::string errFile = "check_cli_test." + std::to_string(getpid()) + ".stderr.txt";
-    const std::string cmd = std::string("'") + SWARF_BINARY + "' " + args + " 2>" + errFile;
-    Run r;
-    FILE* p = popen(cmd.c_str(), "r");
-    REQUIRE(p != nullptr);
-    char buf[4096];
-    std::size_t n;
-    while ((n = std::fread(buf, 1, sizeof buf, p)) > 0)
-        r.out.append(buf, n);
-    const int status = pclose(p);
-    r.exitCode = WIFEXITED(status) ? WEXITSTATUS(status) : -1;
-    r.err = slurp(errFile);
-    std::remove(errFile.c_str());
-    return r;
-}
-
-} // namespace
+namespace {} // namespace
 
 TEST_CASE("swarf check accepts the demo scene and prints the cone in every form", "[cli][check]") {
     const Run r = runSwarf(std::string("check '") + SWARF_SCENES_DIR + "/fixture-arbor.toml'");

@@ -11,6 +11,8 @@
 #include "swarf/sim/roll_check.h"
 #include "swarf/sim/units.h"
 
+#include "support/cli_run.h"
+
 #include <catch2/catch.hpp>
 #include <fmt/format.h>
 #include <nlohmann/json.hpp>
@@ -27,36 +29,11 @@
 namespace fs = std::filesystem;
 using namespace swarf;
 
+using swarf::test::Run;
+using swarf::test::runSwarf;
+using swarf::test::slurp;
+
 namespace {
-
-struct Run {
-    int exitCode = -1;
-    std::string out, err;
-};
-
-std::string slurp(const std::string& path) {
-    std::ifstream in(path);
-    std::stringstream ss;
-    ss << in.rdbuf();
-    return ss.str();
-}
-
-Run runSwarf(const std::string& args) {
-    const std::string errFile = "correct_cli_test." + std::to_string(getpid()) + ".stderr.txt";
-    const std::string cmd = std::string("'") + SWARF_BINARY + "' " + args + " 2>" + errFile;
-    Run r;
-    FILE* p = popen(cmd.c_str(), "r");
-    REQUIRE(p != nullptr);
-    char buf[4096];
-    std::size_t n;
-    while ((n = std::fread(buf, 1, sizeof buf, p)) > 0)
-        r.out.append(buf, n);
-    const int status = pclose(p);
-    r.exitCode = WIFEXITED(status) ? WEXITSTATUS(status) : -1;
-    r.err = slurp(errFile);
-    std::remove(errFile.c_str());
-    return r;
-}
 
 // A reading as a person writes it down: rounded to the instrument's least count, in the
 // scene's units (0.001 mm, 0.0001 in).

@@ -1,6 +1,8 @@
 // Inside work from the command line (issue 14): `swarf check` reads and prints a bore, inside
 // features and a boring bar; the commands that do not simulate inside work yet refuse it with
 // exit code 2, the message at its first piece, and nothing written.
+#include "support/cli_run.h"
+
 #include <catch2/catch.hpp>
 
 #include <cstdio>
@@ -11,36 +13,11 @@
 #include <sys/wait.h>
 #include <unistd.h>
 
+using swarf::test::Run;
+using swarf::test::runSwarf;
+using swarf::test::slurp;
+
 namespace {
-
-struct Run {
-    int exitCode = -1;
-    std::string out, err;
-};
-
-std::string slurp(const std::string& path) {
-    std::ifstream in(path);
-    std::stringstream ss;
-    ss << in.rdbuf();
-    return ss.str();
-}
-
-Run runSwarf(const std::string& args) {
-    const std::string errFile = "inside_cli_test." + std::to_string(getpid()) + ".stderr.txt";
-    const std::string cmd = std::string("'") + SWARF_BINARY + "' " + args + " 2>" + errFile;
-    Run r;
-    FILE* p = popen(cmd.c_str(), "r");
-    REQUIRE(p != nullptr);
-    char buf[4096];
-    std::size_t n;
-    while ((n = std::fread(buf, 1, sizeof buf, p)) > 0)
-        r.out.append(buf, n);
-    const int status = pclose(p);
-    r.exitCode = WIFEXITED(status) ? WEXITSTATUS(status) : -1;
-    r.err = slurp(errFile);
-    std::remove(errFile.c_str());
-    return r;
-}
 
 std::string insideScene(const char* name) {
     return std::string("'") + SWARF_TEST_DATA_DIR + "/inside_scenes/" + name + "'";

@@ -3,6 +3,8 @@
 #include "swarf/io/scene_reader.h"
 #include "swarf/sim/units.h"
 
+#include "support/cli_run.h"
+
 #include <catch2/catch.hpp>
 #include <nlohmann/json.hpp>
 
@@ -20,37 +22,11 @@
 using namespace swarf;
 namespace fs = std::filesystem;
 
+using swarf::test::Run;
+using swarf::test::runSwarf;
+using swarf::test::slurp;
+
 namespace {
-
-struct Run {
-    int exitCode = -1;
-    std::string out, err;
-};
-
-std::string slurp(const fs::path& path) {
-    std::ifstream in(path);
-    std::stringstream ss;
-    ss << in.rdbuf();
-    return ss.str();
-}
-
-// Runs SWARF_BINARY with the arguments; stdout through popen, stderr into a temporary file.
-Run runSwarf(const std::string& args, const std::string& env = "") {
-    const std::string errFile = "run_cli_test." + std::to_string(getpid()) + ".stderr.txt";
-    const std::string cmd = env + " '" + std::string(SWARF_BINARY) + "' " + args + " 2>" + errFile;
-    Run r;
-    FILE* p = popen(cmd.c_str(), "r");
-    REQUIRE(p != nullptr);
-    char buf[4096];
-    std::size_t n;
-    while ((n = std::fread(buf, 1, sizeof buf, p)) > 0)
-        r.out.append(buf, n);
-    const int status = pclose(p);
-    r.exitCode = WIFEXITED(status) ? WEXITSTATUS(status) : -1;
-    r.err = slurp(errFile);
-    std::remove(errFile.c_str());
-    return r;
-}
 
 std::vector<fs::path> sceneFiles() {
     std::vector<fs::path> files;
