@@ -88,7 +88,8 @@ std::string setCompoundText(const ConePlan& out, const Scene& sc) {
            ": half angle θ = " + formatDms(out.halfAngleRad, 1) +
            ". Set it exactly in one of two ways: with the sine bar (the stack is under the "
            "checks), or with a dial indicator in the tool post against the side of a test bar "
-           "held parallel to the spindle axis (between centres), at centre height: wind the "
+           "held parallel to the spindle axis (between centres), at centre height (spindle "
+           "stopped): wind the "
            "compound in " +
            formatLength(out.indicatorTravelMm, u) + " (" + turns +
            " turns) and the indicator must move L·sin θ = " +

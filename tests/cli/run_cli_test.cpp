@@ -147,3 +147,34 @@ TEST_CASE("swarf view at a position past the plan says so, with the range", "[cl
     CHECK(contains(r.err, "--pass = 7: expected a position from 0 (before the first pass) to 4"));
     CHECK_FALSE(fs::exists(png));
 }
+
+TEST_CASE("view --camera chooses the view a screenshot is taken from", "[cli][view]") {
+    const std::string scene = "'" + std::string(SWARF_SCENES_DIR) + "/fixture-arbor.toml'";
+    auto shot = [&](const std::string& camera) {
+        const fs::path png = fs::temp_directory_path() /
+                             ("swarf-camera-" + camera + "-" + std::to_string(getpid()) + ".png");
+        const Run r = runSwarf("view " + scene + " --size 640x400 --camera " + camera +
+                               " --screenshot '" + png.string() + "'");
+        INFO(r.out << r.err);
+        CHECK(r.exitCode == 0);
+        const std::string bytes = slurp(png);
+        fs::remove(png);
+        CHECK(bytes.size() > 1000);
+        return bytes;
+    };
+    const std::string front = shot("front"), top = shot("top"), end = shot("end"),
+                      close = shot("close-up");
+    // Different views of the same part make different pictures.
+    CHECK(front != top);
+    CHECK(front != end);
+    CHECK(top != end);
+    CHECK(close != front);
+
+    const fs::path png =
+        fs::temp_directory_path() / ("swarf-camera-bad-" + std::to_string(getpid()) + ".png");
+    const Run bad =
+        runSwarf("view " + scene + " --camera sideways --screenshot '" + png.string() + "'");
+    CHECK(bad.exitCode == 64); // a wrong command line (kExitUsage)
+    CHECK(contains(bad.err, "expected front, top, end, oblique, cone or close-up; got 'sideways'"));
+    CHECK_FALSE(fs::exists(png));
+}

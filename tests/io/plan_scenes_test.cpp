@@ -12,6 +12,7 @@
 #include <catch2/catch.hpp>
 
 #include <algorithm>
+#include <cctype>
 #include <cmath>
 #include <filesystem>
 #include <string>
@@ -96,4 +97,39 @@ TEST_CASE("every plan scene's readings are whole divisions and within tolerance"
         }
     }
     CHECK(planned >= 10);
+}
+
+TEST_CASE("every measuring step of every plan says the spindle is stopped",
+          "[io][planner][caution]") {
+    // Common practice: nothing is measured on a turning part. The sheet's Measure steps, and
+    // every step that puts an instrument on the work, say so in the step itself.
+    auto lower = [](std::string s) {
+        std::transform(s.begin(), s.end(), s.begin(),
+                       [](unsigned char ch) { return static_cast<char>(std::tolower(ch)); });
+        return s;
+    };
+    int measuring = 0;
+    for (const auto& e : fs::directory_iterator(SWARF_SCENES_DIR)) {
+        const std::string name = e.path().filename().string();
+        if (name.rfind("plan-", 0) != 0 || e.path().extension() != ".toml")
+            continue;
+        const ConePlan plan = planCone(io::readScene(e.path().string()));
+        if (!plan.planned)
+            continue;
+        for (const PlanStep& step : plan.steps) {
+            const std::string t = lower(step.text);
+            const bool instrument =
+                step.kind == PlanStep::Kind::Measure || t.find("micrometer") != std::string::npos ||
+                t.find("indicator") != std::string::npos || t.find(" rolls") != std::string::npos ||
+                t.find("plug gauge") != std::string::npos ||
+                t.find("ring gauge") != std::string::npos;
+            if (!instrument)
+                continue;
+            INFO(name << ": " << step.text);
+            ++measuring;
+            CHECK((t.find("spindle stopped") != std::string::npos ||
+                   t.find("stop the spindle") != std::string::npos));
+        }
+    }
+    CHECK(measuring >= 10);
 }

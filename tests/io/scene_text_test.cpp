@@ -148,3 +148,44 @@ TEST_CASE("a folder or a file that cannot be opened is bad input", "[io][text]")
         CHECK(e.exitCode() == swarf::kExitBadInput);
     }
 }
+
+TEST_CASE("\"cross-slide\", the screens' word, is read as the file keys' \"cross\" and "
+          "\"cross_slide\"",
+          "[io][text][words]") {
+    auto replacedAll = [](std::string s, const std::string& from, const std::string& to) {
+        for (std::size_t at = s.find(from); at != std::string::npos; at = s.find(from, at))
+            s.replace(at, from.size(), to), at += to.size();
+        return s;
+    };
+    SECTION("a pass's kind") {
+        const std::string text =
+            slurp(fs::path(SWARF_SCENES_DIR) / "finding-wind-back-shoulder.toml");
+        REQUIRE(text.find("kind = \"cross\"") != std::string::npos);
+        const swarf::Scene plain = swarf::io::readSceneText(text, "a.toml");
+        const swarf::Scene alias = swarf::io::readSceneText(
+            replacedAll(text, "kind = \"cross\"", "kind = \"cross-slide\""), "a.toml");
+        REQUIRE(alias.plan.passes.size() == plain.plan.passes.size());
+        int cross = 0;
+        for (std::size_t k = 0; k < plain.plan.passes.size(); ++k) {
+            CHECK(alias.plan.passes[k].kind == plain.plan.passes[k].kind);
+            cross += plain.plan.passes[k].kind == swarf::PassKind::CrossSlide;
+        }
+        CHECK(cross > 0);
+        // What swarf writes keeps the file key.
+        CHECK(swarf::io::sceneToToml(alias).find("kind = \"cross\"") != std::string::npos);
+    }
+    SECTION("the compound's scale") {
+        const std::string text = slurp(fs::path(SWARF_SCENES_DIR) / "taper-shank-morse.toml");
+        REQUIRE(text.find("scale = \"cross_slide\"") != std::string::npos);
+        const swarf::Scene alias = swarf::io::readSceneText(
+            replacedAll(text, "scale = \"cross_slide\"", "scale = \"cross-slide\""), "a.toml");
+        CHECK(alias.setup.compoundScale == swarf::CompoundScale::FromCrossSlide);
+    }
+    SECTION("other spellings are still refused with the choices") {
+        const std::string text = slurp(fs::path(SWARF_SCENES_DIR) / "taper-shank-morse.toml");
+        CHECK_THROWS_WITH(
+            swarf::io::readSceneText(
+                replacedAll(text, "scale = \"cross_slide\"", "scale = \"crossslide\""), "a.toml"),
+            Catch::Contains("setup.compound.scale") && Catch::Contains("cross_slide"));
+    }
+}

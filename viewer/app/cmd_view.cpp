@@ -13,6 +13,7 @@
 
 #include <cstdio>
 #include <cstdlib>
+#include <map>
 #include <memory>
 #include <string>
 
@@ -26,6 +27,7 @@ void registerView(CLI::App& app, int& exitCode) {
         std::string scene;
         std::string screenshot;
         std::string size;
+        std::string camera;
         viewer::ViewerOptions options;
     };
     auto args = std::make_shared<Args>();
@@ -55,10 +57,26 @@ void registerView(CLI::App& app, int& exitCode) {
         });
     cmd->add_option("--screenshot", args->screenshot,
                     "Render the window once off screen into this PNG and exit (no window)");
+    // The views of keys 1-5 and c (viewer/KEYS.md), by name.
+    static const std::map<std::string, std::string> cameras = {{"front", "1"}, {"top", "2"},
+                                                               {"end", "3"},   {"oblique", "4"},
+                                                               {"cone", "5"},  {"close-up", "c"}};
+    cmd->add_option("--camera", args->camera,
+                    "Open on this view: front (operator's side, chuck on the left), top, end "
+                    "(from the tailstock), oblique (the default), cone (the main cone filling "
+                    "the view) or close-up (the feed marks at the gauge plane); with "
+                    "--screenshot, the view the picture is taken from")
+        ->check([](const std::string& v) -> std::string {
+            if (cameras.count(v))
+                return "";
+            return "expected front, top, end, oblique, cone or close-up; got '" + v + "'";
+        });
     cmd->callback([args, &exitCode] {
         if (!args->size.empty())
             std::sscanf(args->size.c_str(), "%dx%d", &args->options.widthPx,
                         &args->options.heightPx);
+        if (!args->camera.empty())
+            args->options.startKeys = {cameras.at(args->camera)};
         const Scene scene = io::readScene(args->scene);
         refuseInsideWork(scene, "view");
         // A slider position past the plan is said, with the range, before any work.

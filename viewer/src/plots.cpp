@@ -29,6 +29,7 @@
 
 #include <algorithm>
 #include <cmath>
+#include <tuple>
 
 namespace swarf::viewer::detail {
 
@@ -62,6 +63,19 @@ SectionView::SectionView(vtkColorTransferFunction* lut, const DeviationScale& sc
     title_->GetTextProperty()->SetVerticalJustificationToTop();
     title_->GetPositionCoordinate()->SetValue(0.01, 0.97);
     renderer_->AddViewProp(title_);
+    for (auto [actor, text, x, right] : {std::tuple{&leftEnd_, "<- datum face", 0.01, false},
+                                         std::tuple{&rightEnd_, "chuck ->", 0.99, true}}) {
+        *actor = vtkSmartPointer<vtkTextActor>::New();
+        (*actor)->SetInput(text);
+        (*actor)->GetTextProperty()->SetColor(0.85, 0.85, 0.85);
+        (*actor)->GetTextProperty()->SetFontSize(13);
+        (*actor)->GetTextProperty()->SetVerticalJustificationToBottom();
+        if (right)
+            (*actor)->GetTextProperty()->SetJustificationToRight();
+        (*actor)->GetPositionCoordinate()->SetCoordinateSystemToNormalizedViewport();
+        (*actor)->GetPositionCoordinate()->SetValue(x, 0.02);
+        renderer_->AddViewProp(*actor);
+    }
 }
 
 SectionView::~SectionView() = default;
@@ -170,6 +184,8 @@ void SectionView::fit(bool toLine) {
 
 void SectionView::setFontSize(int px) {
     title_->GetTextProperty()->SetFontSize(px);
+    leftEnd_->GetTextProperty()->SetFontSize(px);
+    rightEnd_->GetTextProperty()->SetFontSize(px);
 }
 
 DeviationChart::DeviationChart(const DeviationScale& scale, Units units)
@@ -186,7 +202,7 @@ DeviationChart::DeviationChart(const DeviationScale& scale, Units units)
     chart_->GetTitleProperties()->SetFontSize(15);
     chart_->SetShowLegend(true);
     chart_->GetAxis(vtkAxis::BOTTOM)
-        ->SetTitle(fmt::format("z from the datum face toward the chuck ({})", unitName(units)));
+        ->SetTitle(fmt::format("datum face <-  z ({})  -> chuck", unitName(units)));
     chart_->GetAxis(vtkAxis::LEFT)->SetTitle(fmt::format("deviation ({})", scale.displayUnit()));
     const double l = scale.toDisplay(scale.limitMm);
     chart_->GetAxis(vtkAxis::LEFT)->SetBehavior(vtkAxis::FIXED);

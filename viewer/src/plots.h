@@ -46,6 +46,9 @@ class SectionView {
     vtkSmartPointer<vtkPolyDataMapper> refMapper_, cutMapper_;
     vtkSmartPointer<vtkActor> refActor_, cutActor_;
     vtkSmartPointer<vtkTextActor> title_;
+    /// "datum face" at the bottom left, "chuck" at the bottom right: z grows to the right here,
+    /// the other way from the 3D front view, so both ends are named.
+    vtkSmartPointer<vtkTextActor> leftEnd_, rightEnd_;
 };
 
 /// The chart of deviation along the cone, µm (thou): the as-cut line and the tolerance lines.

@@ -290,6 +290,8 @@ ViewerSession::ViewerSession(const Scene& scene, std::shared_ptr<const CutResult
         d.window->Render();
     }
     d.part->resetSection();
+    for (const std::string& key : options.startKeys)
+        d.onKey(key, false);
 }
 
 ViewerSession::~ViewerSession() {

@@ -223,9 +223,10 @@ Setup readSetup(const Fields& root) {
              {"angle", "scale", "error", "advance", "across", "per_division", "divisions",
               "backlash", "travel"});
     s.compoundReadingRad = c.requiredAngle("angle", "the compound angle as read on its scale");
-    auto scale = c.choice("scale", {"axis", "cross_slide"});
+    // "cross-slide", as the screens write it, is read as "cross_slide".
+    auto scale = c.choice("scale", {"axis", "cross_slide", "cross-slide"});
     s.compoundScale =
-        scale && *scale == "cross_slide" ? CompoundScale::FromCrossSlide : CompoundScale::FromAxis;
+        scale && *scale != "axis" ? CompoundScale::FromCrossSlide : CompoundScale::FromAxis;
     if (s.compoundScale == CompoundScale::FromAxis)
         c.require(
             s.compoundReadingRad >= 0 && s.compoundReadingRad < degToRad(90), "angle",
@@ -302,9 +303,12 @@ Plan readPlan(const Fields& root) {
         Fields any(*pt, path, root.context(),
                    {"kind", "note", "cross", "compound", "saddle", "from", "to", "feed", "points",
                     "retract_to", "compound_angle", "compound_error"});
-        auto kind = any.choice("kind", {"compound", "saddle", "cross", "path"});
+        // "cross-slide", the word the screens and sheets use, is read as "cross".
+        auto kind = any.choice("kind", {"compound", "saddle", "cross", "cross-slide", "path"});
         if (!kind)
             any.missing("kind", "\"compound\", \"saddle\", \"cross\" or \"path\"");
+        if (*kind == "cross-slide")
+            kind = "cross";
         Pass p;
         p.where = any.where();
         p.note = any.string("note", "what the person does").value_or("");

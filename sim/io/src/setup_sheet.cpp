@@ -167,7 +167,7 @@ Section readingsSection(const Ctx& c) {
 Section checksSection(const Ctx& c) {
     const ConePlan& plan = c.plan;
     const auto& rolls = plan.rolls;
-    return {"Checks before the finishing pass",
+    return {"Checks before the finishing pass (spindle stopped)",
             {listBlock({
                 "Diameter at " + c.L(plan.checkZMm) + " from the datum face: Ø" +
                     c.L(plan.checkDiameterRoughMm) + " before finishing, Ø" +

@@ -23,6 +23,9 @@ struct ViewerOptions {
     int heightPx = 800;
     double startPosition = -1; ///< slider position to open at; < 0: the finished part
     bool offScreen = false;    ///< render off screen (benchmarks, tests); still needs a display
+    /// Keys pressed, in order, once the window is built (as pressKey takes them), e.g. "1" to
+    /// open on the front view or "c" on the close-up; `swarf view --camera` fills it.
+    std::vector<std::string> startKeys;
 };
 
 /// One open viewer: the window, its renderers and the current moment. Not copyable. All calls
