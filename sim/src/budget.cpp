@@ -35,9 +35,24 @@ struct Progress {
 
 // Makes parts 0..n−1 with `sources` drawn, on `threads` threads (the calling one among them,
 // which alone reports progress). Part i depends on (seed, i) only.
+// The index of a part's trial-cut micrometer draw among source Measuring's numbers: far from
+// the set-up's own (index 0), so a trial cut leaves every other draw as it is.
+constexpr std::uint64_t kTrialMeasureIndex = 1u << 20;
+
+// One part: `scene` drawn as part `i`, with its trial cut if there is one.
+PartOutcome onePart(const Scene& scene, int feature, const std::vector<BudgetSource>& sources,
+                    std::uint64_t seed, std::uint64_t i, const TrialCut* trial) {
+    Scene drawn = perturbScene(scene, seed, i, sources);
+    if (trial)
+        drawn = afterTrialCut(drawn, *trial,
+                              trial->measureSdMm * budgetNormal(seed, i, BudgetSource::Measuring,
+                                                                kTrialMeasureIndex));
+    return partOutcome(drawn, feature);
+}
+
 std::vector<PartOutcome> makeParts(const Scene& scene, int feature,
                                    const std::vector<BudgetSource>& sources, std::uint64_t seed,
-                                   int n, int threads, Progress& progress) {
+                                   int n, int threads, Progress& progress, const TrialCut* trial) {
     std::vector<PartOutcome> out(static_cast<std::size_t>(n));
     std::atomic<int> next{0};
     std::exception_ptr failure;
@@ -45,8 +60,8 @@ std::vector<PartOutcome> makeParts(const Scene& scene, int feature,
     auto work = [&](bool reporter) {
         try {
             for (int i = next.fetch_add(1); i < n; i = next.fetch_add(1)) {
-                out[static_cast<std::size_t>(i)] = partOutcome(
-                    perturbScene(scene, seed, static_cast<std::uint64_t>(i), sources), feature);
+                out[static_cast<std::size_t>(i)] =
+                    onePart(scene, feature, sources, seed, static_cast<std::uint64_t>(i), trial);
                 progress.done.fetch_add(1);
                 if (reporter)
                     progress.report();
@@ -191,10 +206,11 @@ Budget runBudget(const Scene& scene, const BudgetOptions& options, const Progres
     prog.fn = &progress;
     prog.total = 1 + b.samples + (oneAtATime ? shareSamples * static_cast<long>(active.size()) : 0);
 
-    b.exact = partOutcome(base, b.featureIndex);
+    const TrialCut* trial = options.trialCut ? &*options.trialCut : nullptr;
+    b.exact = partOutcome(trial ? afterTrialCut(base, *trial, 0.0) : base, b.featureIndex);
     prog.done = 1;
     const std::vector<PartOutcome> parts =
-        makeParts(base, b.featureIndex, active, b.seed, b.samples, threads, prog);
+        makeParts(base, b.featureIndex, active, b.seed, b.samples, threads, prog, trial);
     b.gaugeDiametersMm = diameters(parts);
     b.gaugeDiameterMm = spreadOf(b.gaugeDiametersMm);
     b.halfAngleRad = spreadOf(halfAngles(parts));
@@ -213,7 +229,7 @@ Budget runBudget(const Scene& scene, const BudgetOptions& options, const Progres
         s.source = src;
         if (oneAtATime) {
             const std::vector<PartOutcome> alone =
-                makeParts(base, b.featureIndex, {src}, b.seed, shareSamples, threads, prog);
+                makeParts(base, b.featureIndex, {src}, b.seed, shareSamples, threads, prog, trial);
             s.sdMm = spreadOf(diameters(alone)).sd;
             s.halfAngleSdRad = spreadOf(halfAngles(alone)).sd;
         } else if (options.shares) {

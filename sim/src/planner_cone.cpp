@@ -288,10 +288,21 @@ ConePlan planCone(const Scene& scene) {
     out.roughingPasses = made;
 
     // Checks before the finishing pass, then the finish.
-    step(out, PlanStep::Kind::Measure,
-         "Stop the spindle. Before finishing, check the diameter at " + L(out.checkZMm) +
-             " from the datum face: Ø" + L(out.checkDiameterRoughMm) + " now (Ø" +
-             L(out.checkDiameterFinishedMm) + " when finished).");
+    out.trialCut = scene.planning.trialCut;
+    if (out.trialCut)
+        step(out, PlanStep::Kind::Measure,
+             "Trial cut. Stop the spindle and measure the diameter at " + L(out.checkZMm) +
+                 " from the datum face with a micrometer: it should be Ø" +
+                 L(out.checkDiameterRoughMm) + " (Ø" + L(out.checkDiameterFinishedMm) +
+                 " when finished). If it reads Ø d instead, add (d − " +
+                 L(out.checkDiameterRoughMm) + ")" + (b.crossK() < 1 ? "" : " / 2") +
+                 " to every finishing cross-slide reading below, to the nearest division (a "
+                 "cone that measures large takes a larger reading: further in).");
+    else
+        step(out, PlanStep::Kind::Measure,
+             "Stop the spindle. Before finishing, check the diameter at " + L(out.checkZMm) +
+                 " from the datum face: Ø" + L(out.checkDiameterRoughMm) + " now (Ø" +
+                 L(out.checkDiameterFinishedMm) + " when finished).");
     step(out, PlanStep::Kind::Measure,
          "With the spindle stopped, check the angle over two Ø" + L(out.rolls.rollDiameterMm) +
              " rolls with their centres at " + L(out.rolls.z1Mm) + " and " + L(out.rolls.z2Mm) +

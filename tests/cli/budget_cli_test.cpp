@@ -99,3 +99,44 @@ TEST_CASE("swarf budget plans a scene without passes first", "[cli][budget]") {
     CHECK(j["scene"]["units"] == "in");
     fs::remove_all(dir);
 }
+
+TEST_CASE("swarf plan --target chooses the way of working from the budget", "[cli][budget][plan]") {
+    const fs::path work =
+        fs::temp_directory_path() / ("swarf-plan-target-" + std::to_string(getpid()));
+    fs::remove_all(work);
+    fs::create_directories(work);
+    // The 1:20 arbor with a dial zeroed on a bar read with a caliper (sd 0.02 mm): no way of
+    // working without a trial cut holds ±0.02 on the diameter most of the time.
+    const fs::path sceneFile = work / "arbor.toml";
+    {
+        std::ofstream out(sceneFile);
+        out << slurp(fs::path(SWARF_SCENES_DIR) / "plan-1-20-chuck-out.toml")
+            << "\n[uncertainty]\nmeasuring_sd = 0.02\n";
+    }
+    const fs::path dir = work / "out";
+    const Run r = runSwarf("plan '" + sceneFile.string() + "' --out '" + dir.string() +
+                           "' --target 0.9 --samples 200");
+    INFO(r.out << r.err);
+    REQUIRE(r.exitCode == 0);
+    CHECK(r.out.find("chosen from the error budget") != std::string::npos);
+    CHECK(r.out.find("with a trial cut: ") != std::string::npos);
+    CHECK(r.out.find("<- kept") != std::string::npos);
+    const std::string sheet = slurp(dir / "setup-sheet.txt");
+    CHECK(sheet.find("Why this way of working") != std::string::npos);
+    CHECK(sheet.find("Trial cut. Stop the spindle") != std::string::npos);
+    CHECK(slurp(dir / "planned.toml").find("trial_cut = true") != std::string::npos);
+
+    // A target without an [uncertainty]: exit 2, the option named, nothing written.
+    const fs::path none = work / "none";
+    const Run bare = runSwarf("plan " + scene("plan-1-20-chuck-out.toml") + " --out '" +
+                              none.string() + "' --target 0.9");
+    CHECK(bare.exitCode == 2);
+    CHECK(bare.err.find("--target = 0.9: expected an [uncertainty] table") != std::string::npos);
+    CHECK_FALSE(fs::exists(none));
+    const Run bad =
+        runSwarf("plan '" + sceneFile.string() + "' --out '" + none.string() + "' --target 1.5");
+    CHECK(bad.exitCode == 2);
+    CHECK(bad.err.find("--target = 1.5: expected a chance between 0 and 1") != std::string::npos);
+    CHECK_FALSE(fs::exists(none));
+    fs::remove_all(work);
+}

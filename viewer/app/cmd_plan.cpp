@@ -3,6 +3,7 @@
 // print its verdict, so the plan proves itself.
 #include "commands.h"
 #include "swarf/app/memory.h"
+#include "swarf/app/progress.h"
 #include "swarf/io/output_file.h"
 #include "swarf/io/scene_reader.h"
 #include "swarf/io/scene_writer.h"
@@ -12,6 +13,7 @@
 #include "swarf/sim/error.h"
 #include "swarf/sim/inside_work.h"
 #include "swarf/sim/kernel.h"
+#include "swarf/sim/plan_choice.h"
 #include "swarf/sim/planner.h"
 #include "swarf/sim/run_budget.h"
 
@@ -19,6 +21,7 @@
 
 #include <filesystem>
 #include <memory>
+#include <optional>
 #include <string>
 
 namespace swarf::app {
@@ -27,7 +30,43 @@ namespace {
 struct PlanArgs {
     std::string scene;
     std::string outDir;
+    double target = -1;      ///< < 0: the scene's in_tolerance_target, if any
+    long long samples = 400; ///< parts per budget when choosing the way of working
+    long long seed = 1;
 };
+
+// The plan as told, or, with a target and an [uncertainty], the way of working that reaches the
+// target (plan_choice.h), said on the console.
+ConePlan planOrChoose(const Scene& scene, const PlanArgs& a) {
+    const std::optional<double> target =
+        a.target >= 0 ? std::optional<double>(a.target) : scene.planning.inToleranceTarget;
+    if (!target)
+        return planCone(scene);
+    const SourceLoc where = a.target >= 0 ? SourceLoc{"command line", 0, 0} : scene.planning.where;
+    const std::string key = a.target >= 0 ? "--target" : "planning.in_tolerance_target";
+    if (activeBudgetSources(scene.uncertainty, scene.setup.cross.backlashMm,
+                            scene.setup.compound.backlashMm, scene.setup.saddle.backlashMm)
+            .empty())
+        throw InputError(where, key, fmt::format("{:g}", *target),
+                         "expected an [uncertainty] table in the scene to go with it: without "
+                         "one every part comes out the same, and there is nothing to choose by");
+    BudgetOptions opt;
+    opt.samples = static_cast<int>(a.samples);
+    opt.seed = static_cast<std::uint64_t>(a.seed);
+    PlanChoice choice;
+    {
+        ProgressBar bar("trying each way of working");
+        choice = choosePlan(scene, *target, opt, [&bar](double f) { bar.update(f); });
+    }
+    if (choice.chosen >= 0) {
+        fmt::print("chosen from the error budget:\n");
+        for (const std::string& l : choice.plan.choiceLines)
+            fmt::print("  {}\n", l);
+        for (const std::string& l : choice.plan.stepsThatMatter)
+            fmt::print("  matters: {}\n", l);
+    }
+    return choice.plan;
+}
 
 std::vector<std::string> headerFor(const ConePlan& plan, const std::string& from) {
     std::vector<std::string> h = {
@@ -46,7 +85,16 @@ std::vector<std::string> headerFor(const ConePlan& plan, const std::string& from
 int runPlan(const PlanArgs& a) {
     const Scene scene = io::readScene(a.scene); // bad input throws before anything is written
     refuseInsideWork(scene, "plan");
-    const ConePlan plan = planCone(scene);
+    if (a.target >= 0 && !(a.target > 0 && a.target < 1))
+        throw InputError(SourceLoc{"command line", 0, 0}, "--target", fmt::format("{:g}", a.target),
+                         "expected a chance between 0 and 1, e.g. 0.95 for 19 parts in 20");
+    if (a.samples < 20 || a.samples > 100000)
+        throw InputError(SourceLoc{"command line", 0, 0}, "--samples", std::to_string(a.samples),
+                         "expected a whole number of parts from 20 to 100000");
+    if (a.seed < 0)
+        throw InputError(SourceLoc{"command line", 0, 0}, "--seed", std::to_string(a.seed),
+                         "expected a whole number 0 or more");
+    const ConePlan plan = planOrChoose(scene, a);
     if (plan.planned) // the plan is simulated below: refuse now one the machine cannot hold
         requireFits(plan.scene, {false, false, false}, availableMemoryBytes());
     io::makeOutputFolder(a.outDir);
@@ -120,6 +168,14 @@ void registerPlan(CLI::App& app, int& exitCode) {
         ->required();
     cmd->add_option("--out,-o", args->outDir, "Folder for planned.toml and setup-sheet.txt/.html")
         ->required();
+    cmd->add_option(
+        "--target", args->target,
+        "Chance of a part within tolerance the plan must reach, e.g. 0.95: with the "
+        "scene's [uncertainty], choose the placing and a trial cut from the error "
+        "budget (default: the scene's planning.in_tolerance_target, else plan as told)");
+    cmd->add_option("--samples", args->samples,
+                    "Parts drawn per budget when choosing (default 400)");
+    cmd->add_option("--seed", args->seed, "Seed of the random numbers when choosing (default 1)");
     cmd->callback([args, &exitCode] { exitCode = runPlan(*args); });
 }
 

@@ -75,7 +75,7 @@ PlanningOptions readPlanning(const Fields& root) {
         return p;
     Fields f(*t, "planning", root.context(),
              {"max_depth", "finish_allowance", "rough_feed", "finish_feed", "placing", "roughing",
-              "roll_diameter"});
+              "roll_diameter", "trial_cut", "in_tolerance_target"});
     p.where = f.where();
     p.maxDepthMm = f.length("max_depth", "largest depth per roughing pass").value_or(p.maxDepthMm);
     // Common practice: a depth of cut is dialled in hundredths of a mm or more; finer would
@@ -94,9 +94,20 @@ PlanningOptions readPlanning(const Fields& root) {
     p.finishFeedMmPerRev =
         f.length("finish_feed", "finishing feed per rev").value_or(p.finishFeedMmPerRev);
     detail::requirePositive(f, "finish_feed", p.finishFeedMmPerRev);
-    if (auto s = f.choice("placing", {"zero_on_diameter", "reference_shoulder"}))
+    if (auto s = f.choice("placing", {"zero_on_diameter", "reference_shoulder"})) {
         p.placing = *s == "zero_on_diameter" ? PlanningOptions::Placing::ZeroOnDiameter
                                              : PlanningOptions::Placing::ReferenceShoulder;
+        p.placingStated = true;
+    }
+    if (auto b = f.boolean("trial_cut")) {
+        p.trialCut = *b;
+        p.trialCutStated = true;
+    }
+    if (auto t = f.number("in_tolerance_target", "the chance of a part within tolerance")) {
+        f.require(*t > 0 && *t < 1, "in_tolerance_target",
+                  "expected a chance between 0 and 1, e.g. 0.95 for 19 parts in 20");
+        p.inToleranceTarget = *t;
+    }
     if (auto s = f.choice("roughing", {"compound", "saddle_steps"}))
         p.roughing = *s == "compound" ? PlanningOptions::Roughing::Compound
                                       : PlanningOptions::Roughing::SaddleSteps;

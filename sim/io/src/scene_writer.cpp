@@ -317,6 +317,8 @@ std::string sceneToToml(const Scene& sc, const std::vector<std::string>& headerC
     o.str("roughing",
           pl.roughing == PlanningOptions::Roughing::Compound ? "compound" : "saddle_steps");
     o.len("roll_diameter", pl.rollDiameterMm);
+    if (pl.trialCut)
+        o.raw("trial_cut", "true");
 
     o.line("");
     o.line("[sim]");

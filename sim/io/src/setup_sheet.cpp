@@ -226,6 +226,20 @@ Document buildSheet(const ConePlan& plan, const CutResult* proof) {
     sh.sections.push_back(detail::operationsSection(c));
     sh.sections.push_back(checksSection(c));
     sh.sections.push_back(detail::mattersSection(c));
+    if (!plan.choiceLines.empty()) {
+        Section why{"Why this way of working, and the steps that matter most", {}};
+        why.blocks.push_back(paragraph(
+            "swarf planned the cone each way it knows and ran the error budget of each from the "
+            "scene's [uncertainty] (a Monte Carlo of the parts the set-up makes):"));
+        why.blocks.push_back(listBlock(plan.choiceLines));
+        if (!plan.stepsThatMatter.empty()) {
+            why.blocks.push_back(paragraph(
+                "Of the spread of the gauge diameter in the way kept, the largest parts come "
+                "from these steps: take most care over them."));
+            why.blocks.push_back(listBlock(plan.stepsThatMatter));
+        }
+        sh.sections.push_back(why);
+    }
     sh.sections.push_back(finishSection(c));
     if (!plan.cautions.empty())
         sh.sections.push_back(

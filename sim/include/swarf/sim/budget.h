@@ -8,9 +8,11 @@
 // std::thread; the numbers depend on the seed and the sample count only.
 #include "swarf/sim/kernel.h"
 #include "swarf/sim/scene.h"
+#include "swarf/sim/trial_cut.h"
 #include "swarf/sim/uncertainty.h"
 
 #include <cstdint>
+#include <optional>
 #include <string>
 #include <vector>
 
@@ -23,6 +25,10 @@ struct BudgetOptions {
     int threads = 0;        ///< threads to use; 0: one per core
     int shareSamples = 0;   ///< parts drawn per one-at-a-time run; 0: as many as `samples`
     bool shares = true;     ///< false: no one-at-a-time runs (sources then have no share)
+    /// A measured trial cut before finishing (trial_cut.h): each part is cut to the trial, its
+    /// diameter measured with the micrometer's error drawn (source Measuring's numbers, apart
+    /// from the set-up's), and finished at the corrected reading. Empty: no trial cut.
+    std::optional<TrialCut> trialCut;
 };
 
 /// A spread of values: mean, standard deviation (n − 1) and the 2.5 % and 97.5 % points

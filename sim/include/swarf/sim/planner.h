@@ -121,6 +121,14 @@ struct ConePlan {
     /// Passes whose finishing reading had to be set on half a division (no whole division keeps
     /// the tolerance); empty when every reading is a whole division.
     std::vector<int> halfDivisionPasses;
+    /// The plan has a measured trial cut before finishing (PlanningOptions::trialCut).
+    bool trialCut = false;
+    /// How the plan was chosen from the scene's uncertainty (plan_choice.h), in lines for
+    /// people: the target, each way of working tried with its chance; empty when not chosen.
+    std::vector<std::string> choiceLines;
+    /// The steps that matter most to the chance of a good part, largest first (plan_choice.h);
+    /// empty when not chosen.
+    std::vector<std::string> stepsThatMatter;
 };
 
 /// Least angle (rad) kept between the path and the insert's trailing or leading edge: a

@@ -261,6 +261,15 @@ struct PlanningOptions {
     /// Rough with the compound parallel to the cone, or with stepped saddle passes first.
     enum class Roughing { Compound, SaddleSteps } roughing = Roughing::Compound;
     double rollDiameterMm = 0; ///< rolls for the over-rolls check; 0: choose one
+    /// A measured trial cut before finishing: after the last roughing pass the diameter at the
+    /// check plane is measured and the finishing reading corrected by what it is off.
+    bool trialCut = false;
+    bool placingStated = false;  ///< the scene gave `placing` (a choice keeps to it)
+    bool trialCutStated = false; ///< the scene gave `trial_cut` (a choice keeps to it)
+    /// The chance of a part within tolerance a plan must reach (0, 1): with an [uncertainty],
+    /// `swarf plan` then chooses the placing and the trial cut (plan_choice.h); empty: it plans
+    /// as told.
+    std::optional<double> inToleranceTarget;
     SourceLoc where;
 };
 
