@@ -44,22 +44,24 @@ std::string formatAngleChange(double rad) {
 }
 
 std::string twinDifferenceText(const Scene& scene, const TwinDifference& d,
-                               const std::string& heading) {
+                               const std::string& heading, const std::string& thisWord,
+                               const std::string& twinWord) {
     const Units u = scene.units;
     std::string t = heading + "\n";
-    t += "gauge diameter: this " + formatLength(d.gaugeDiameterThisMm, u, Precision::Fine) +
-         ", twin " + formatLength(d.gaugeDiameterTwinMm, u, Precision::Fine) + ", difference " +
+    t += "gauge diameter: " + thisWord + " " +
+         formatLength(d.gaugeDiameterThisMm, u, Precision::Fine) + ", " + twinWord + " " +
+         formatLength(d.gaugeDiameterTwinMm, u, Precision::Fine) + ", difference " +
          formatDiameterChange(d.gaugeDiameterChangeMm, u);
     if (!d.sameGaugePlane)
         t += " (not at the same gauge plane)";
     t += "\n";
     if (d.halfAngleChangeRad)
-        t += "half angle: this " + formatDms(d.coneThis->halfAngleRad) + ", twin " +
-             formatDms(d.coneTwin->halfAngleRad) + ", difference " +
+        t += "half angle: " + thisWord + " " + formatDms(d.coneThis->halfAngleRad) + ", " +
+             twinWord + " " + formatDms(d.coneTwin->halfAngleRad) + ", difference " +
              formatAngleChange(*d.halfAngleChangeRad) + "\n";
     else
         t += "half angle: no cone to compare in both drawings\n";
-    t += std::string("verdict: this ") + verdictWords(d.withinThis) + ", twin " +
+    t += "verdict: " + thisWord + " " + verdictWords(d.withinThis) + ", " + twinWord + " " +
          verdictWords(d.withinTwin);
     return t;
 }

@@ -122,3 +122,31 @@ TEST_CASE("view --twin with a broken twin exits 2 before any window", "[cli][com
     CHECK(contains(r.err, "angle-samples-too-few.toml:45:17"));
     CHECK_FALSE(fs::exists(png));
 }
+
+TEST_CASE("view finds the twin by name: <stem>-mistake.toml beside <stem>-right.toml",
+          "[cli][compare]") {
+    const fs::path scenes(SWARF_SCENES_DIR);
+    const fs::path dir = fs::temp_directory_path() / "swarf-compare-cli-pair";
+    fs::remove_all(dir);
+    fs::create_directories(dir);
+    fs::copy_file(scenes / "fixture-arbor-no-offset.toml", dir / "arbor-mistake.toml");
+    // The twin found by the rule is read like any scene: a broken one is refused by name,
+    // which shows it was found.
+    fs::copy_file(fs::path(SWARF_TEST_DATA_DIR) / "bad_scenes" / "angle-samples-too-few.toml",
+                  dir / "arbor-right.toml");
+    const fs::path png = dir / "ghost.png";
+    Run r = runSwarf("view '" + (dir / "arbor-mistake.toml").string() +
+                     "' --show-twin --size 640x400 --screenshot '" + png.string() + "'");
+    INFO(r.out << r.err);
+    CHECK(r.exitCode == 2);
+    CHECK(contains(r.err, "arbor-right.toml:45:17"));
+    CHECK_FALSE(fs::exists(png));
+    // With a good twin beside it, the picture is made.
+    fs::remove(dir / "arbor-right.toml");
+    fs::copy_file(scenes / "fixture-arbor.toml", dir / "arbor-right.toml");
+    r = runSwarf("view '" + (dir / "arbor-mistake.toml").string() +
+                 "' --show-twin --size 640x400 --screenshot '" + png.string() + "'");
+    CHECK(r.exitCode == 0);
+    CHECK(fs::file_size(png) > 1000);
+    fs::remove_all(dir);
+}

@@ -91,6 +91,7 @@ TEST_CASE("key w without a twin says so in the panel", "[viewer][twin]") {
     CHECK(view.twinShown());
     CHECK_FALSE(view.twinGhostDrawn());
     CHECK(contains(view.panelText(), "Twin: none. Give one with --twin FILE."));
+    CHECK(view.twinShown());
     REQUIRE(view.pressKey("w"));
     CHECK_FALSE(contains(view.panelText(), "Twin: none"));
 }

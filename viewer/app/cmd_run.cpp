@@ -228,7 +228,8 @@ void registerRun(CLI::App& app, int& exitCode) {
             const TwinDifference d =
                 twinDifference(first.scene, first.result, second->scene, second->result);
             fmt::print("\n{}\n",
-                       twinDifferenceText(first.scene, d, "difference from " + *compare + ":"));
+                       twinDifferenceText(first.scene, d, "difference from " + *compare + ":",
+                                          "scene", "other"));
         }
         fmt::print("wrote:\n");
         for (const std::string& f : written)

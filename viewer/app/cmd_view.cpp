@@ -12,6 +12,7 @@
 
 #include <fmt/core.h>
 
+#include <cctype>
 #include <cstdio>
 #include <cstdlib>
 #include <filesystem>
@@ -94,7 +95,9 @@ void registerView(CLI::App& app, int& exitCode) {
             twin->name = std::filesystem::path(*twinFile).filename().string();
             twin->shownAtStart = !args->twin.empty() || args->showTwin;
         }
-        args->options.noTwinNote = "Give one: " + twinRuleText() + ".";
+        std::string rule = twinRuleText();
+        rule[0] = static_cast<char>(std::toupper(static_cast<unsigned char>(rule[0])));
+        args->options.noTwinNote = rule + ".";
         const auto result = std::make_shared<const CutResult>(simulate(scene));
         if (twin)
             twin->result = std::make_shared<const CutResult>(simulate(twin->scene));

@@ -29,9 +29,8 @@ const std::vector<KeyHelp>& windowKeys() {
         {"g", {"g"}, "nominal cone (ghost) on / off"},
         {"w",
          {"w"},
-         "the twin on / off: the same job done the other way (`--twin FILE`, or the "
-         "`-mistake`/`-right` file beside it) as a plain violet ghost, its line in the section "
-         "and chart, and the differences (gauge diameter, half angle, verdicts) in the panel"},
+         "the twin on / off (`--twin FILE`, or the `-mistake`/`-right` file beside it): a violet "
+         "ghost, its line in the section and chart, the differences in the panel"},
         {"l", {"l"}, "metal left on, in the cut-away, on / off"},
         {"o", {"o"}, "stock outline on / off"},
         {"j", {"j"}, "chuck jaws on / off"},

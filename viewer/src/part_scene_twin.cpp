@@ -4,6 +4,7 @@
 #include "meshes.h"
 #include "panel_text.h"
 #include "part_scene_impl.h"
+#include "swarf/sim/caution.h"
 
 #include <vtkActor.h>
 #include <vtkPolyData.h>
@@ -44,8 +45,11 @@ std::string PartScene::Impl::panelWithTwin() const {
     std::string text = momentPanelText(scene, result, moment, scale);
     if (!layers.twin)
         return text;
-    if (!twin)
-        return text + "\nTwin: none. " + noTwinNote;
+    if (!twin) {
+        for (const std::string& line : wrapWords("Twin: none. " + noTwinNote, 90))
+            text += "\n" + line;
+        return text;
+    }
     std::string diff =
         twinDifferenceText(scene, twin->difference, "Twin (violet ghost): " + twin->name);
     // The window's font has no prime marks: minutes and seconds as ' and ".

@@ -45,8 +45,10 @@ std::string formatDiameterChange(double mm, Units units);
 std::string formatAngleChange(double rad);
 
 /// Lines for people (no trailing newline), in `scene`'s units: `heading`, then both gauge
-/// diameters and their difference, both half angles and theirs, both verdicts.
+/// diameters and their difference, both half angles and theirs, both verdicts; the two sides
+/// called `thisWord` and `twinWord`.
 std::string twinDifferenceText(const Scene& scene, const TwinDifference& d,
-                               const std::string& heading);
+                               const std::string& heading, const std::string& thisWord = "this",
+                               const std::string& twinWord = "twin");
 
 } // namespace swarf
