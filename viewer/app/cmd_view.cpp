@@ -2,6 +2,7 @@
 #include "commands.h"
 #include "swarf/app/display.h"
 #include "swarf/app/memory.h"
+#include "swarf/app/twin.h"
 #include "swarf/io/scene_reader.h"
 #include "swarf/sim/error.h"
 #include "swarf/sim/inside_work.h"
@@ -11,10 +12,13 @@
 
 #include <fmt/core.h>
 
+#include <cctype>
 #include <cstdio>
 #include <cstdlib>
+#include <filesystem>
 #include <map>
 #include <memory>
+#include <optional>
 #include <string>
 
 namespace swarf::app {
@@ -22,12 +26,14 @@ namespace swarf::app {
 void registerView(CLI::App& app, int& exitCode) {
     auto* cmd = app.add_subcommand(
         "view", "Open the 3D window: the part as cut, coloured by deviation, pass by pass "
-                "(keys: press h in the window)");
+                "(keys: press h in the window; w shows the scene's twin)");
     struct Args {
         std::string scene;
         std::string screenshot;
         std::string size;
         std::string camera;
+        std::string twin;
+        bool showTwin = false;
         viewer::ViewerOptions options;
     };
     auto args = std::make_shared<Args>();
@@ -55,6 +61,12 @@ void registerView(CLI::App& app, int& exitCode) {
                        v + "'";
             return "";
         });
+    cmd->add_option("--twin", args->twin,
+                    "The scene's twin, shown as a ghost with the differences by key w (and from "
+                    "the start when given here); without it, " +
+                        twinRuleText());
+    cmd->add_flag("--show-twin", args->showTwin,
+                  "Open with the twin shown (as pressing w), e.g. for --screenshot");
     cmd->add_option("--screenshot", args->screenshot,
                     "Render the window once off screen into this PNG and exit (no window)");
     // The views of keys 1-5 and c (viewer/KEYS.md), by name.
@@ -89,12 +101,35 @@ void registerView(CLI::App& app, int& exitCode) {
                             "end of the last): the plan has {:g} passes",
                             passes, passes));
         requireFits(scene, {false, false, true}, availableMemoryBytes());
+        // The twin is read before any work, so a bad one is said at once (exit 2).
+        std::optional<viewer::TwinView> twin;
+        if (const auto twinFile = findTwin(args->scene, args->twin)) {
+            twin.emplace();
+            twin->scene = io::readScene(*twinFile);
+            refuseInsideWork(twin->scene, "view");
+            // Both are held at once: the twin gets what the scene leaves.
+            requireFits(twin->scene, {false, false, true},
+                        availableMemoryBytes() - estimateRun(scene, {false, false, true}).bytes);
+            twin->name = std::filesystem::path(*twinFile).filename().string();
+            twin->shownAtStart = !args->twin.empty() || args->showTwin;
+        }
+        std::string rule = twinRuleText();
+        rule[0] = static_cast<char>(std::toupper(static_cast<unsigned char>(rule[0])));
+        args->options.noTwinNote = rule + ".";
         const auto result = std::make_shared<const CutResult>(simulate(scene));
+        if (twin)
+            twin->result = std::make_shared<const CutResult>(simulate(twin->scene));
+        const bool showTwinAlone = args->showTwin && !twin;
         if (!args->screenshot.empty()) {
             viewer::ViewerOptions o = args->options;
             o.offScreen = true;
             ensureDisplay();
             viewer::ViewerSession session(scene, result, o);
+            if (twin)
+                session.setTwin(*twin);
+            else if (showTwinAlone)
+                session.pressKey("w"); // the panel says there is no twin, and how to give one
+            session.render();
             session.saveSnapshot(args->screenshot);
             exitCode = kExitOk;
             return;
@@ -105,7 +140,7 @@ void registerView(CLI::App& app, int& exitCode) {
                 "'swarf view' needs a screen and DISPLAY is not set; "
                 "'swarf run' writes the pictures and report.html without one, and "
                 "'swarf view SCENE --screenshot FILE.png' renders the window to a file");
-        viewer::runViewer(scene, result, args->options);
+        viewer::runViewer(scene, result, args->options, twin ? &*twin : nullptr);
         exitCode = kExitOk;
     });
 }

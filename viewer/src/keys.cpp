@@ -27,6 +27,10 @@ const std::vector<KeyHelp>& windowKeys() {
         {"r", {"r"}, "reset: whole part, oblique view, section refitted"},
         {"x", {"x"}, "cut-away quarter on / off"},
         {"g", {"g"}, "nominal cone (ghost) on / off"},
+        {"w",
+         {"w"},
+         "the twin on / off (`--twin FILE`, or the `-mistake`/`-right` file beside it): a violet "
+         "ghost, its line in the section and chart, the differences in the panel"},
         {"l", {"l"}, "metal left on, in the cut-away, on / off"},
         {"o", {"o"}, "stock outline on / off"},
         {"j", {"j"}, "chuck jaws on / off"},

@@ -101,8 +101,13 @@ void PartScene::Impl::updatePlots() {
         line = deviationTrace(scene, result, moment, z0, z1, 0);
     }
     sectionTrace = decimateTrace(line, closeUp ? 0 : kSectionPoints);
-    sectionView->show(sectionTrace, magnification, where, closeUp);
-    chartView->show(decimateTrace(line, kChartPoints), where, closeUp);
+    const DeviationTrace* twinTrace = twinLine();
+    sectionView->show(sectionTrace, magnification, where, closeUp, twinTrace);
+    DeviationTrace twinChart;
+    if (twinTrace)
+        twinChart = decimateTrace(*twinTrace, kChartPoints);
+    chartView->show(decimateTrace(line, kChartPoints), where, closeUp,
+                    twinTrace ? &twinChart : nullptr);
 }
 
 void PartScene::Impl::applyLayers() {
@@ -115,6 +120,7 @@ void PartScene::Impl::applyLayers() {
     jawsActor->SetVisibility(layers.jaws && whole);
     insertActor->SetVisibility(layers.insert && whole);
     pathActor->SetVisibility(layers.paths && whole);
+    twinActor->SetVisibility(layers.twin && twin && whole);
     scalarBar->SetVisibility(layers.scalarBar);
     closeLabel->SetVisibility(closeUp);
 }
@@ -122,7 +128,7 @@ void PartScene::Impl::applyLayers() {
 void PartScene::Impl::update() {
     updatePart();
     updatePlots();
-    panel->SetInput(momentPanelText(scene, result, moment, scale).c_str());
+    panel->SetInput(panelWithTwin().c_str());
     closeLabel->SetInput(closeUpPanelText(scene, result, moment, close).c_str());
     applyLayers();
 }
@@ -189,9 +195,14 @@ const CloseUp& PartScene::closeUp() const {
 
 void PartScene::setLayers(const Layers& layers) {
     const bool cutChanged = layers.cutaway != impl_->layers.cutaway;
+    const bool twinChanged = layers.twin != impl_->layers.twin;
     impl_->layers = layers;
     if (cutChanged)
         impl_->updatePart();
+    if (twinChanged) {
+        impl_->updatePlots();
+        impl_->panel->SetInput(impl_->panelWithTwin().c_str());
+    }
     impl_->applyLayers();
 }
 

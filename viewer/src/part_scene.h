@@ -22,6 +22,9 @@ namespace swarf::viewer::detail {
 struct Layers {
     bool part = true, ghost = true, leftover = true, stock = true, insert = true, paths = true,
          scalarBar = true, cutaway = true, jaws = true;
+    /// The twin's as-cut part as a ghost, its line in the section and chart, and the
+    /// differences in the panel (key w); without a twin the panel says there is none.
+    bool twin = false;
 };
 
 /// Standard camera views of the 3D renderer: the whole part from the operator's side (chuck on
@@ -62,6 +65,18 @@ class PartScene {
     vtkRenderer* section() const;
     vtkRenderer* chart() const;
 
+    /// Gives the scene's twin (the same job done the other way, simulated with the same kernel)
+    /// to show as a ghost when Layers::twin is on; `name` names it in the panel. The result is
+    /// shared (precondition: not null). Does not switch the layer on.
+    void setTwin(const Scene& twin, std::shared_ptr<const CutResult> twinResult,
+                 const std::string& name);
+    bool hasTwin() const;
+    /// What the panel says when Layers::twin is on and there is no twin (how to give one).
+    void setNoTwinNote(const std::string& note);
+    /// Number of polygons of the twin's ghost as handed to VTK (0 without a twin), and whether
+    /// it is drawn now (tests).
+    std::size_t twinPolygons() const;
+    bool twinDrawn() const;
     /// Sizes the text for a picture or window `heightPx` pixels high.
     void setTextScale(int heightPx);
     void setHelpVisible(bool on);

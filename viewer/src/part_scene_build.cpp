@@ -114,9 +114,11 @@ void PartScene::Impl::buildMain() {
     pathActor->GetProperty()->LightingOff();
 
     buildGhost();
+    buildTwinActor();
 
-    for (auto* a : {partActor.Get(), leftoverActor.Get(), coreActor.Get(), stockActor.Get(),
-                    jawsActor.Get(), insertActor.Get(), pathActor.Get(), ghostActor.Get()})
+    for (auto* a :
+         {partActor.Get(), leftoverActor.Get(), coreActor.Get(), stockActor.Get(), jawsActor.Get(),
+          insertActor.Get(), pathActor.Get(), ghostActor.Get(), twinActor.Get()})
         main->AddActor(a);
 
     scalarBar = vtkSmartPointer<vtkScalarBarActor>::New();

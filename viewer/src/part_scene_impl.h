@@ -10,6 +10,7 @@
 // once; the section and chart get min/max-decimated lines.
 #include "part_scene.h"
 #include "plots.h"
+#include "swarf/sim/twin_difference.h"
 
 #include <vtkActor.h>
 #include <vtkColorTransferFunction.h>
@@ -79,6 +80,20 @@ struct PartScene::Impl {
         stockMapper, jawsMapper, insertMapper, pathMapper;
     vtkSmartPointer<vtkActor> partActor, ghostActor, leftoverActor, coreActor, stockActor,
         jawsActor, insertActor, pathActor;
+    // The twin (key w): its scene and result, the difference, its finished deviation line along
+    // the main cone (worked out once), and its ghost.
+    struct Twin {
+        Scene scene;
+        std::shared_ptr<const CutResult> result;
+        std::string name;
+        TwinDifference difference;
+        DeviationTrace line;
+    };
+    std::unique_ptr<Twin> twin;
+    std::string noTwinNote = "no twin was given for this scene";
+    vtkSmartPointer<vtkPolyDataMapper> twinMapper;
+    vtkSmartPointer<vtkActor> twinActor;
+
     vtkSmartPointer<vtkScalarBarActor> scalarBar;
     vtkSmartPointer<vtkTextActor> panel, help, status, closeLabel;
     vtkSmartPointer<vtkLight> light;
@@ -86,6 +101,12 @@ struct PartScene::Impl {
     void buildLut();
     void buildMain();
     void buildGhost();
+    void buildTwinActor();
+    /// The panel: the moment's text, and with Layers::twin the twin's differences (or that
+    /// there is none).
+    std::string panelWithTwin() const;
+    /// The twin's line for the section and chart now: null unless shown (whole cone only).
+    const DeviationTrace* twinLine() const;
     void update();
     void updatePart();
     void updatePlots();

@@ -53,7 +53,15 @@ SectionView::SectionView(vtkColorTransferFunction* lut, const DeviationScale& sc
     cutActor_->SetMapper(cutMapper_);
     cutActor_->GetProperty()->SetLineWidth(3);
     cutActor_->GetProperty()->LightingOff();
+    twinMapper_ = vtkSmartPointer<vtkPolyDataMapper>::New();
+    twinMapper_->ScalarVisibilityOff();
+    twinActor_ = vtkSmartPointer<vtkActor>::New();
+    twinActor_->SetMapper(twinMapper_);
+    twinActor_->GetProperty()->SetColor(0.78, 0.68, 0.92); // the twin: plain violet-grey
+    twinActor_->GetProperty()->SetLineWidth(2);
+    twinActor_->GetProperty()->LightingOff();
     renderer_->AddActor(refActor_);
+    renderer_->AddActor(twinActor_);
     renderer_->AddActor(cutActor_);
     renderer_->GetActiveCamera()->ParallelProjectionOn();
     title_ = vtkSmartPointer<vtkTextActor>::New();
@@ -81,7 +89,7 @@ SectionView::SectionView(vtkColorTransferFunction* lut, const DeviationScale& sc
 SectionView::~SectionView() = default;
 
 void SectionView::show(const DeviationTrace& t, double magnification, const std::string& where,
-                       bool unrolled) {
+                       bool unrolled, const DeviationTrace* twin) {
     auto base = [&](std::size_t i) { return unrolled ? 0.0 : t.nominalMm[i]; };
     auto refPoints = vtkSmartPointer<vtkPoints>::New();
     auto refLines = vtkSmartPointer<vtkCellArray>::New();
@@ -124,6 +132,31 @@ void SectionView::show(const DeviationTrace& t, double magnification, const std:
             cutLines->InsertNextCell(static_cast<vtkIdType>(ids.size()), ids.data());
         ids.clear();
     };
+    // The twin's line, the same way against its own drawing (laid flat too when unrolled).
+    auto twinPoints = vtkSmartPointer<vtkPoints>::New();
+    auto twinLines = vtkSmartPointer<vtkCellArray>::New();
+    if (twin) {
+        std::vector<vtkIdType> tids;
+        for (std::size_t i = 0; i <= twin->zMm.size(); ++i) {
+            const bool end = i == twin->zMm.size();
+            if (end || std::isnan(twin->deviationMm[i]) || std::isnan(twin->nominalMm[i])) {
+                if (tids.size() > 1)
+                    twinLines->InsertNextCell(static_cast<vtkIdType>(tids.size()), tids.data());
+                tids.clear();
+                continue;
+            }
+            const double shown = std::clamp(twin->deviationMm[i], -clampMm, clampMm);
+            offScale = offScale || shown != twin->deviationMm[i];
+            tids.push_back(twinPoints->InsertNextPoint(
+                twin->zMm[i], (unrolled ? 0.0 : twin->nominalMm[i]) + magnification * shown,
+                0.005));
+        }
+    }
+    auto twinPoly = vtkSmartPointer<vtkPolyData>::New();
+    twinPoly->SetPoints(twinPoints);
+    twinPoly->SetLines(twinLines);
+    twinMapper_->SetInputData(twinPoly);
+    twinActor_->SetVisibility(twin != nullptr);
     for (std::size_t i = 0; i < n; ++i) {
         const double d = t.deviationMm[i];
         if (std::isnan(d) || std::isnan(t.nominalMm[i])) {
@@ -149,10 +182,10 @@ void SectionView::show(const DeviationTrace& t, double magnification, const std:
     // Two short lines: the picture is half a window wide.
     title_->SetInput(
         fmt::format("Section{}{}, deviation x{:g}{}\ngreen: drawing   yellow: tolerance +/-{}   "
-                    "coloured: as cut{}",
+                    "coloured: as cut{}{}",
                     where.empty() ? "" : " " + where, unrolled ? " laid flat" : "", magnification,
                     t.feedMarks ? ", feed marks on the operator's side" : "",
-                    formatSmallLength(scale_.bandMm, scale_.units),
+                    formatSmallLength(scale_.bandMm, scale_.units), twin ? "   violet: twin" : "",
                     offScale ? " (flat at the edge: off the scale)" : "")
             .c_str());
 }
@@ -217,6 +250,18 @@ DeviationChart::DeviationChart(const DeviationScale& scale, Units units)
         band->SetColor(60, 60, 60, 255);
         band->GetPen()->SetLineType(vtkPen::DASH_LINE);
     }
+    // The twin's line (key w): its own table, its own z samples.
+    twinTable_ = vtkSmartPointer<vtkTable>::New();
+    for (const char* name : {"z", "twin"}) {
+        vtkNew<vtkFloatArray> col;
+        col->SetName(name);
+        twinTable_->AddColumn(col);
+    }
+    twinPlot_ = chart_->AddPlot(vtkChart::LINE);
+    twinPlot_->SetInputData(twinTable_, 0, 1);
+    twinPlot_->SetColor(150, 120, 190, 255);
+    twinPlot_->SetWidth(2);
+    twinPlot_->SetVisible(false);
     vtkNew<vtkContextActor> actor;
     actor->GetScene()->AddItem(chart_);
     renderer_->AddActor(actor);
@@ -225,7 +270,8 @@ DeviationChart::DeviationChart(const DeviationScale& scale, Units units)
 
 DeviationChart::~DeviationChart() = default;
 
-void DeviationChart::show(const DeviationTrace& t, const std::string& where, bool fitToTrace) {
+void DeviationChart::show(const DeviationTrace& t, const std::string& where, bool fitToTrace,
+                          const DeviationTrace* twin) {
     const double l = scale_.toDisplay(scale_.limitMm);
     const double band = scale_.toDisplay(scale_.bandMm);
     const double zScale = fromMm(1.0, units_);
@@ -255,6 +301,33 @@ void DeviationChart::show(const DeviationTrace& t, const std::string& where, boo
     for (int c = 0; c < 4; ++c)
         column(c)->Modified();
     table_->Modified();
+    {
+        auto twinColumn = [&](int c) {
+            return vtkFloatArray::SafeDownCast(twinTable_->GetColumn(c));
+        };
+        std::vector<std::size_t> twinKeep;
+        if (twin)
+            for (std::size_t i = 0; i < twin->zMm.size(); ++i)
+                if (!std::isnan(twin->deviationMm[i])) {
+                    twinKeep.push_back(i);
+                    const double d = scale_.toDisplay(twin->deviationMm[i]);
+                    worst = std::max(worst, std::fabs(d));
+                    lo = std::min(lo, d);
+                    hi = std::max(hi, d);
+                }
+        const auto twinRows = static_cast<vtkIdType>(twinKeep.size());
+        for (int c = 0; c < 2; ++c)
+            twinColumn(c)->SetNumberOfTuples(twinRows);
+        for (vtkIdType k = 0; k < twinRows; ++k) {
+            const std::size_t i = twinKeep[static_cast<std::size_t>(k)];
+            twinColumn(0)->SetValue(k, static_cast<float>(twin->zMm[i] * zScale));
+            twinColumn(1)->SetValue(k, static_cast<float>(scale_.toDisplay(twin->deviationMm[i])));
+        }
+        for (int c = 0; c < 2; ++c)
+            twinColumn(c)->Modified();
+        twinTable_->Modified();
+        twinPlot_->SetVisible(twinRows > 0);
+    }
     chart_->SetTitle(
         fmt::format("Deviation along the cone{} ({}): above 0 metal left on, below 0 overcut",
                     where.empty() ? "" : " " + where, scale_.displayUnit()));

@@ -11,6 +11,7 @@
 
 class vtkActor;
 class vtkChartXY;
+class vtkPlot;
 class vtkColorTransferFunction;
 class vtkPolyDataMapper;
 class vtkRenderer;
@@ -32,8 +33,10 @@ class SectionView {
     /// Draws `trace` with deviations magnified `magnification` times (> 0). `where` names the
     /// stretch in the title ("" for the whole cone). With `unrolled` the drawing is laid flat
     /// along z (a short stretch of a steep cone would otherwise be mostly its slope).
+    /// `twin`, if not null, is the scene's twin's line (key w), drawn plain violet-grey the same
+    /// way against its own drawing.
     void show(const DeviationTrace& trace, double magnification, const std::string& where,
-              bool unrolled = false);
+              bool unrolled = false, const DeviationTrace* twin = nullptr);
     /// Fits the camera to what is drawn, with a margin: to the drawing and its band, or with
     /// `toLine` to the as-cut line alone (a close-up of its feed marks).
     void fit(bool toLine = false);
@@ -43,8 +46,8 @@ class SectionView {
   private:
     DeviationScale scale_;
     vtkSmartPointer<vtkRenderer> renderer_;
-    vtkSmartPointer<vtkPolyDataMapper> refMapper_, cutMapper_;
-    vtkSmartPointer<vtkActor> refActor_, cutActor_;
+    vtkSmartPointer<vtkPolyDataMapper> refMapper_, cutMapper_, twinMapper_;
+    vtkSmartPointer<vtkActor> refActor_, cutActor_, twinActor_;
     vtkSmartPointer<vtkTextActor> title_;
     /// "datum face" at the bottom left, "chuck" at the bottom right: z grows to the right here,
     /// the other way from the 3D front view, so both ends are named.
@@ -63,7 +66,9 @@ class DeviationChart {
     /// trace goes beyond it (early passes): then it widens to show everything; with
     /// `fitToTrace` it spans just the trace (the feed marks of a close-up). `where` names the
     /// stretch in the title ("" for the whole cone).
-    void show(const DeviationTrace& trace, const std::string& where, bool fitToTrace = false);
+    /// `twin`, if not null, is the scene's twin's line (key w), drawn beside it.
+    void show(const DeviationTrace& trace, const std::string& where, bool fitToTrace = false,
+              const DeviationTrace* twin = nullptr);
     void setFontSize(int px);
     vtkRenderer* renderer() const { return renderer_; }
     /// Number of points the chart's line was given (tests).
@@ -74,7 +79,8 @@ class DeviationChart {
     Units units_;
     vtkSmartPointer<vtkRenderer> renderer_;
     vtkSmartPointer<vtkChartXY> chart_;
-    vtkSmartPointer<vtkTable> table_;
+    vtkSmartPointer<vtkTable> table_, twinTable_;
+    vtkPlot* twinPlot_ = nullptr;
 };
 
 } // namespace swarf::viewer::detail

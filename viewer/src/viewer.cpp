@@ -138,6 +138,8 @@ bool ViewerSession::Impl::onKey(const std::string& key, bool shift) {
         layers.cutaway = !layers.cutaway, layersChanged = true;
     else if (key == "g")
         layers.ghost = !layers.ghost, layersChanged = true;
+    else if (key == "w")
+        layers.twin = !layers.twin, layersChanged = true;
     else if (key == "l")
         layers.leftover = !layers.leftover, layersChanged = true;
     else if (key == "o")
@@ -201,6 +203,7 @@ ViewerSession::ViewerSession(const Scene& scene, std::shared_ptr<const CutResult
     Impl& d = *impl_;
     d.part = std::make_unique<detail::PartScene>(scene, std::move(result), options.magnification);
     d.part->setTextScale(static_cast<int>(std::max(options.heightPx, 240) * (1 - kSplitY)));
+    d.part->setNoTwinNote(options.noTwinNote);
     d.window = vtkSmartPointer<vtkRenderWindow>::New();
     d.window->SetDisplayId(detail::sharedDisplayConnection());
     d.window->SetSize(std::max(options.widthPx, 320), std::max(options.heightPx, 240));
@@ -313,6 +316,18 @@ bool ViewerSession::pressKey(const std::string& key) {
     return impl_->onKey(key, shift);
 }
 
+void ViewerSession::setTwin(const TwinView& twin) {
+    impl_->part->setTwin(twin.scene, twin.result, twin.name);
+    if (twin.shownAtStart && !twinShown())
+        pressKey("w");
+}
+bool ViewerSession::twinShown() const {
+    return impl_->part->layers().twin;
+}
+bool ViewerSession::twinGhostDrawn() const {
+    return impl_->part->twinDrawn();
+}
+
 void ViewerSession::render() {
     const detail::FpTrapsOff mesa;
     impl_->window->Render();
@@ -354,8 +369,10 @@ void ViewerSession::run() {
 }
 
 void runViewer(const Scene& scene, std::shared_ptr<const CutResult> result,
-               const ViewerOptions& options) {
+               const ViewerOptions& options, const TwinView* twin) {
     ViewerSession session(scene, std::move(result), options);
+    if (twin)
+        session.setTwin(*twin);
     session.run();
 }
 

@@ -2,6 +2,7 @@
 // network; inline CSS only.
 #include "swarf/io/report.h"
 
+#include "report_style.h"
 #include "swarf/io/html.h"
 #include "swarf/io/output_file.h"
 #include "swarf/sim/caution.h"
@@ -22,16 +23,7 @@ std::string esc(const std::string& s) {
     return escapeHtml(s);
 }
 
-const char* kStyle =
-    R"(body{font-family:sans-serif;max-width:1250px;margin:1em auto;padding:0 1em;color:#222}
-h1{font-size:1.6em}h2{font-size:1.25em;border-bottom:1px solid #ccc;margin-top:1.6em}
-table{border-collapse:collapse;margin:.5em 0}td,th{border:1px solid #ccc;padding:.25em .6em;text-align:left;vertical-align:top}
-th{background:#f0f0f0}.num{text-align:right;font-variant-numeric:tabular-nums}
-.ok{background:#e3f4e3;border:2px solid #3a3;padding:.6em 1em;font-size:1.3em}
-.bad{background:#fbe4e4;border:2px solid #c33;padding:.6em 1em;font-size:1.3em}
-.caution{background:#fff6d8;border:1px solid #d8b200;padding:.6em 1em}
-figure{display:inline-block;margin:.5em;vertical-align:top}figure img{max-width:100%;border:1px solid #bbb}
-figcaption{font-size:.9em;color:#444;max-width:600px})";
+using detail::kReportStyle;
 
 } // namespace
 
@@ -43,7 +35,7 @@ std::string reportHtml(const Scene& scene, const CutResult& result,
     std::string h;
     const std::string title = scene.name.empty() ? scene.file : scene.name;
     h += "<!DOCTYPE html>\n<html lang=\"en\"><head><meta charset=\"utf-8\">\n";
-    h += "<title>swarf report: " + esc(title) + "</title>\n<style>" + std::string(kStyle) +
+    h += "<title>swarf report: " + esc(title) + "</title>\n<style>" + std::string(kReportStyle) +
          "</style></head><body>\n";
     h += "<h1>swarf report: " + esc(title) + "</h1>\n";
     if (!scene.description.empty())

@@ -26,6 +26,17 @@ struct ViewerOptions {
     /// Keys pressed, in order, once the window is built (as pressKey takes them), e.g. "1" to
     /// open on the front view or "c" on the close-up; `swarf view --camera` fills it.
     std::vector<std::string> startKeys;
+    /// What the panel says when key w is pressed and the scene has no twin: how to give one.
+    std::string noTwinNote = "no twin was given for this scene";
+};
+
+/// A scene's twin (the same job done the other way: the mistake and its correction), simulated
+/// with the same kernel, to show as a ghost with the differences (key w).
+struct TwinView {
+    Scene scene;
+    std::shared_ptr<const CutResult> result; ///< not null
+    std::string name;                        ///< how the panel names it (its file)
+    bool shownAtStart = false;               ///< open with the ghost on (as if w were pressed)
 };
 
 /// One open viewer: the window, its renderers and the current moment. Not copyable. All calls
@@ -54,6 +65,13 @@ class ViewerSession {
     /// ...; see keys.h), without drawing. Returns false, doing nothing, for a key the window has
     /// no use for. For tests and demos.
     bool pressKey(const std::string& key);
+    /// Gives the scene's twin (key w shows it); with twin.shownAtStart the ghost is on now.
+    void setTwin(const TwinView& twin);
+    /// True while the twin's layer is on (key w): the ghost and differences, or, without a
+    /// twin, the panel's note that there is none.
+    bool twinShown() const;
+    /// True while the twin's ghost is drawn in the 3D view (tests).
+    bool twinGhostDrawn() const;
     /// Draws one frame.
     void render();
     /// Turns the 3D camera about the vertical by `degrees` (benchmarks, demos).
@@ -82,9 +100,9 @@ class ViewerSession {
     std::unique_ptr<Impl> impl_;
 };
 
-/// Opens the window for a scene and its result and returns when it is closed. Precondition: an
-/// X display exists. Throws RenderError if it cannot be opened.
+/// Opens the window for a scene and its result (and its twin, if not null) and returns when it is
+/// closed. Precondition: an X display exists. Throws RenderError if it cannot be opened.
 void runViewer(const Scene& scene, std::shared_ptr<const CutResult> result,
-               const ViewerOptions& options = {});
+               const ViewerOptions& options = {}, const TwinView* twin = nullptr);
 
 } // namespace swarf::viewer

@@ -1,0 +1,97 @@
+// The twin in the window (key w): the ghost of the twin's as-cut part toggles, the panel shows
+// the differences, and without a twin the panel says there is none.
+#include "swarf/app/display.h"
+#include "swarf/sim/twin_difference.h"
+#include "swarf/viewer/viewer.h"
+
+#include "support/synthetic.h"
+
+#include <catch2/catch.hpp>
+
+#include <memory>
+#include <string>
+
+using namespace swarf;
+
+namespace {
+
+viewer::ViewerOptions smallWindow() {
+    viewer::ViewerOptions o;
+    o.offScreen = true;
+    o.widthPx = 400;
+    o.heightPx = 300;
+    o.noTwinNote = "Give one with --twin FILE.";
+    return o;
+}
+
+bool contains(const std::string& text, const std::string& piece) {
+    return text.find(piece) != std::string::npos;
+}
+
+} // namespace
+
+TEST_CASE("key w shows and hides the twin's ghost and the differences", "[viewer][twin]") {
+    app::ensureDisplay();
+    const Scene s = test::syntheticScene(3);
+    CutResult r = test::syntheticResult(s, [](int k) { return 1.0 - 0.4 * k; });
+    CutResult t = test::syntheticResult(s, [](int k) { return 1.0 - 0.45 * k; });
+    // Gauge diameters 0.2 mm apart (derived: 0.1 mm less on radius, twice that on diameter).
+    r.gaugeZMm = t.gaugeZMm = 20;
+    r.gaugeAsCutDiameterMm = 2 * (10 + 0.05 * 20 + 0.2);
+    t.gaugeAsCutDiameterMm = 2 * (10 + 0.05 * 20 + 0.1);
+    viewer::ViewerSession view(s, r, smallWindow());
+    viewer::TwinView twin{s, std::make_shared<const CutResult>(t), "synthetic-right.toml", false};
+    view.setTwin(twin);
+    CHECK_FALSE(view.twinShown());
+    CHECK_FALSE(view.twinGhostDrawn());
+    CHECK_FALSE(contains(view.panelText(), "synthetic-right.toml"));
+
+    REQUIRE(view.pressKey("w"));
+    view.render();
+    CHECK(view.twinShown());
+    CHECK(view.twinGhostDrawn());
+    const std::string panel = view.panelText();
+    INFO(panel);
+    CHECK(contains(panel, "synthetic-right.toml"));
+    const TwinDifference d = twinDifference(s, r, s, t);
+    CHECK(d.gaugeDiameterChangeMm == Approx(0.2).margin(1e-12));
+    CHECK(contains(panel, "difference " + formatDiameterChange(0.2, s.units)));
+
+    // The close-up shows one stretch of this part: no ghost there; back to the whole part, back.
+    REQUIRE(view.pressKey("c"));
+    CHECK_FALSE(view.twinGhostDrawn());
+    REQUIRE(view.pressKey("r"));
+    CHECK(view.twinGhostDrawn());
+
+    REQUIRE(view.pressKey("w"));
+    view.render();
+    CHECK_FALSE(view.twinShown());
+    CHECK_FALSE(view.twinGhostDrawn());
+    CHECK_FALSE(contains(view.panelText(), "synthetic-right.toml"));
+}
+
+TEST_CASE("a twin given to be shown at the start is on at once", "[viewer][twin]") {
+    app::ensureDisplay();
+    const Scene s = test::syntheticScene(2);
+    const CutResult r = test::syntheticResult(s, [](int k) { return 0.5 - 0.5 * k; });
+    viewer::ViewerSession view(s, r, smallWindow());
+    view.setTwin({s, std::make_shared<const CutResult>(r), "same.toml", true});
+    CHECK(view.twinShown());
+    CHECK(view.twinGhostDrawn());
+    CHECK(contains(view.panelText(), "difference " + formatDiameterChange(0.0, s.units)));
+}
+
+TEST_CASE("key w without a twin says so in the panel", "[viewer][twin]") {
+    app::ensureDisplay();
+    const Scene s = test::syntheticScene(2);
+    const CutResult r = test::syntheticResult(s, [](int k) { return 0.5 - 0.5 * k; });
+    viewer::ViewerSession view(s, r, smallWindow());
+    CHECK_FALSE(contains(view.panelText(), "Twin: none"));
+    REQUIRE(view.pressKey("w"));
+    CHECK(view.twinShown());
+    CHECK_FALSE(view.twinGhostDrawn());
+    CHECK(contains(view.panelText(), "Twin: none. Give one with --twin FILE."));
+    CHECK(view.twinShown());
+    REQUIRE(view.pressKey("w"));
+    CHECK_FALSE(contains(view.panelText(), "Twin: none"));
+}
