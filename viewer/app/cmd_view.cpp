@@ -3,6 +3,7 @@
 #include "swarf/app/display.h"
 #include "swarf/app/memory.h"
 #include "swarf/io/scene_reader.h"
+#include "swarf/sim/causes.h"
 #include "swarf/sim/error.h"
 #include "swarf/sim/inside_work.h"
 #include "swarf/sim/kernel.h"
@@ -71,7 +72,11 @@ void registerView(CLI::App& app, int& exitCode) {
                             "end of the last): the plan has {:g} passes",
                             passes, passes));
         requireFits(scene, {false, false, true}, availableMemoryBytes());
-        const auto result = std::make_shared<const CutResult>(simulate(scene));
+        const auto result = std::make_shared<const CutResult>([&scene] {
+            CutResult r = simulate(scene);
+            r.causes = findCauses(scene, r); // the panel names them at their pass
+            return r;
+        }());
         if (!args->screenshot.empty()) {
             viewer::ViewerOptions o = args->options;
             o.offScreen = true;
