@@ -4,6 +4,7 @@
 // with the test's own sums and with the drawing's closed-form volume.
 #include "swarf/io/result_writer.h"
 #include "swarf/io/scene_reader.h"
+#include "swarf/sim/causes.h"
 #include "swarf/sim/kernel.h"
 #include "swarf/sim/planner.h"
 
@@ -20,11 +21,13 @@ using namespace swarf;
 
 namespace {
 
+// scenes/*.toml and the lessons' gallery, scenes/lessons/*.toml.
 std::vector<fs::path> sceneFiles() {
     std::vector<fs::path> files;
-    for (const auto& e : fs::directory_iterator(SWARF_SCENES_DIR))
-        if (e.path().extension() == ".toml")
-            files.push_back(e.path());
+    for (const fs::path dir : {fs::path(SWARF_SCENES_DIR), fs::path(SWARF_SCENES_DIR) / "lessons"})
+        for (const auto& e : fs::directory_iterator(dir))
+            if (e.path().extension() == ".toml")
+                files.push_back(e.path());
     std::sort(files.begin(), files.end());
     return files;
 }
@@ -91,7 +94,7 @@ void checkVolumes(const Scene& s, const CutResult& r) {
 } // namespace
 
 TEST_CASE("every scene in scenes/ gives what it expects", "[corpus][kernel]") {
-    int checked = 0, verdicts = 0;
+    int checked = 0, verdicts = 0, causesChecked = 0;
     for (const fs::path& p : sceneFiles()) {
         const Scene s = io::readScene(p.string());
         if (s.plan.passes.empty())
@@ -115,8 +118,24 @@ TEST_CASE("every scene in scenes/ gives what it expects", "[corpus][kernel]") {
                 INFO(findingKindName(f.kind) << ": " << f.message);
             CHECK(r.findings.empty());
         }
+        // The main cause a scene states is the largest named (causes.h); a scene made to come
+        // out right, stating none, names no cause at all (none moves the cone 0.1 µm).
+        const bool good = s.expect.withinTolerance && *s.expect.withinTolerance;
+        if (!s.expect.cause.empty() || good) {
+            const std::vector<Cause> causes = findCauses(s, r);
+            for (const Cause& c : causes)
+                INFO(c.source << ": " << c.message);
+            if (!s.expect.cause.empty()) {
+                REQUIRE_FALSE(causes.empty());
+                CHECK(causes.front().source == s.expect.cause);
+                ++causesChecked;
+            } else {
+                CHECK(causes.empty());
+            }
+        }
         checkVolumes(s, r);
     }
+    CHECK(causesChecked >= 10); // the lessons' mistakes
     CHECK(checked >= 8);
     CHECK(verdicts >= 6); // the scenes that state a verdict
 }

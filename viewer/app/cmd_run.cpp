@@ -14,6 +14,7 @@
 #include "swarf/io/report.h"
 #include "swarf/io/result_writer.h"
 #include "swarf/io/scene_reader.h"
+#include "swarf/sim/causes.h"
 #include "swarf/sim/caution.h"
 #include "swarf/sim/error.h"
 #include "swarf/sim/inside_work.h"
@@ -26,6 +27,7 @@
 #include <fmt/core.h>
 
 #include <algorithm>
+#include <cmath>
 #include <cstdio>
 #include <filesystem>
 #include <optional>
@@ -61,6 +63,23 @@ void printSummary(const Scene& s, const CutResult& r) {
         fmt::print("  {} {}: left on {}, overcut {}{}\n", f.within ? "ok " : "OUT", f.name,
                    f.leftOn, f.overcut, extra);
     }
+    if (!r.causes.empty()) {
+        fmt::print("what moved the cone (largest first):\n");
+        // The three largest, and only those that matter beside the largest (5 % of it or more,
+        // in tolerances): the readings' rounding stays in result.json.
+        auto size = [&](const Cause& c) {
+            const Feature* cone = s.part.mainCone();
+            return std::fabs(c.gaugeDiameterChangeMm) / cone->toleranceMm +
+                   std::fabs(c.halfAngleChangeRad) / cone->angleToleranceRad;
+        };
+        for (std::size_t i = 0; i < std::min<std::size_t>(r.causes.size(), 3); ++i) {
+            if (i > 0 && size(r.causes[i]) < 0.05 * size(r.causes.front()))
+                break;
+            const std::vector<std::string> lines = wrapWords(r.causes[i].message, 92);
+            for (std::size_t k = 0; k < lines.size(); ++k)
+                fmt::print("{}{}\n", k == 0 ? "  - " : "    ", lines[k]);
+        }
+    }
     if (r.findings.empty()) {
         fmt::print("findings: none\n");
     } else {
@@ -92,6 +111,7 @@ void simulateRun(SceneRun& run, const RunFlags& flags) {
         ProgressBar bar;
         run.result = simulate(run.scene, [&bar](double f) { bar.update(f); });
     }
+    run.result.causes = findCauses(run.scene, run.result);
     if (!flags.noStep) {
         run.solids =
             geometry::makeRunSolids(run.scene, run.result, geometry::RunSolidsOptions{}.fit);

@@ -4,6 +4,7 @@
 #include "swarf/app/memory.h"
 #include "swarf/app/twin.h"
 #include "swarf/io/scene_reader.h"
+#include "swarf/sim/causes.h"
 #include "swarf/sim/error.h"
 #include "swarf/sim/inside_work.h"
 #include "swarf/sim/kernel.h"
@@ -116,7 +117,11 @@ void registerView(CLI::App& app, int& exitCode) {
         std::string rule = twinRuleText();
         rule[0] = static_cast<char>(std::toupper(static_cast<unsigned char>(rule[0])));
         args->options.noTwinNote = rule + ".";
-        const auto result = std::make_shared<const CutResult>(simulate(scene));
+        const auto result = std::make_shared<const CutResult>([&scene] {
+            CutResult r = simulate(scene);
+            r.causes = findCauses(scene, r); // the panel names them at their pass
+            return r;
+        }());
         if (twin)
             twin->result = std::make_shared<const CutResult>(simulate(twin->scene));
         const bool showTwinAlone = args->showTwin && !twin;

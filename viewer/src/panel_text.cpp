@@ -49,6 +49,11 @@ std::string momentPanelText(const Scene& scene, const CutResult& result, const M
             dir[0] = static_cast<char>(std::toupper(static_cast<unsigned char>(dir[0])));
         s += dir + "\n";
         s += fmt::format("Feed {}/rev\n", formatLength(m.feedMmPerRev, u));
+        // What this pass brought in (causes.h): the source and how far it moved the cone.
+        for (const Cause* c : causesOfPass(result.causes, m.pass))
+            s += fmt::format("Brings in {}: cone {} {} on diameter at the gauge plane\n", c->source,
+                             formatLength(std::fabs(c->gaugeDiameterChangeMm), u, Precision::Fine),
+                             c->gaugeDiameterChangeMm >= 0 ? "larger" : "smaller");
     }
     const bool diamDial = scene.setup.crossDial == DialMode::Diameter;
     s += fmt::format("Cross-slide {} ({} dial)   Compound {}   Saddle {}\n",

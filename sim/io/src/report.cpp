@@ -144,6 +144,24 @@ std::string reportHtml(const Scene& scene, const CutResult& result,
         h += "</table>\n";
     }
 
+    // Causes (causes.h): each source with its size and the fix, largest first.
+    if (!result.causes.empty()) {
+        h += "<h2>What moved the cone, and how to fix it</h2>\n";
+        h += "<p>Each line is a counterfactual run: the scene again with that one source taken "
+             "away (or the mistake mended), and how far the cone moved.</p>\n";
+        h += "<table><tr><th>Source</th><th>Pass</th><th>Gauge diameter</th><th>Half "
+             "angle</th><th>What happened, and the fix</th></tr>\n";
+        for (const Cause& c : result.causes)
+            h += fmt::format(
+                "<tr><td>{}</td><td>{}</td><td>{}</td><td>{:+.4f}°</td><td>{}</td>"
+                "</tr>\n",
+                esc(c.source), c.pass >= 0 ? std::to_string(c.pass + 1) : std::string("—"),
+                esc((c.gaugeDiameterChangeMm >= 0 ? "+" : "−") +
+                    formatLength(std::fabs(c.gaugeDiameterChangeMm), scene.units, Precision::Fine)),
+                radToDeg(c.halfAngleChangeRad), esc(c.message));
+        h += "</table>\n";
+    }
+
     // Pictures.
     if (pictures) {
         namespace fs = std::filesystem;

@@ -85,6 +85,16 @@ std::string resultJson(const Scene& scene, const CutResult& r) {
         findings.push_back(o);
     }
     j["findings"] = findings;
+    ordered_json causes = ordered_json::array();
+    for (const Cause& c : r.causes)
+        causes.push_back(
+            {{"source", c.source},
+             {"gauge_diameter_change_mm", num(c.gaugeDiameterChangeMm)},
+             {"half_angle_change_deg", num(radToDeg(c.halfAngleChangeRad))},
+             {"pass", c.pass},
+             {"pass_number", c.pass >= 0 ? ordered_json(c.pass + 1) : ordered_json(nullptr)},
+             {"message", c.message}});
+    j["causes"] = causes;
 
     ordered_json features = ordered_json::array();
     for (const FeatureReport& fr : r.features) {

@@ -4,6 +4,7 @@
 #include "scene_sections.h"
 #include "scene_text.h"
 #include "swarf/io/did_you_mean.h"
+#include "swarf/sim/causes.h"
 #include "swarf/sim/cut.h"
 #include "swarf/sim/inside_work.h"
 
@@ -140,7 +141,7 @@ Expect readExpect(const Fields& root, std::vector<std::string>& notes) {
     const toml::table* t = root.subtable("expect");
     if (!t)
         return e;
-    Fields f(*t, "expect", root.context(), {"verdict", "findings", "no_findings"});
+    Fields f(*t, "expect", root.context(), {"verdict", "findings", "no_findings", "cause"});
     e.where = f.where();
     if (auto v = f.choice("verdict", {"in_tolerance", "out_of_tolerance"}))
         e.withinTolerance = *v == "in_tolerance";
@@ -170,6 +171,8 @@ Expect readExpect(const Fields& root, std::vector<std::string>& notes) {
             e.findings.push_back(s->get());
         }
     }
+    if (auto c = f.choice("cause", causeSourceNames()))
+        e.cause = *c;
     e.noFindings = f.boolean("no_findings").value_or(false);
     f.require(!(e.noFindings && !e.findings.empty()), "no_findings",
               "expected false when findings are listed (the two contradict)");

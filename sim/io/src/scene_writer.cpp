@@ -326,7 +326,7 @@ std::string sceneToToml(const Scene& sc, const std::vector<std::string>& headerC
     o.raw("angle_samples", std::to_string(sc.sim.angleSamples));
 
     const Expect& e = sc.expect;
-    if (e.withinTolerance || !e.findings.empty() || e.noFindings) {
+    if (e.withinTolerance || !e.findings.empty() || e.noFindings || !e.cause.empty()) {
         o.line("");
         o.line("[expect]");
         if (e.withinTolerance)
@@ -339,6 +339,8 @@ std::string sceneToToml(const Scene& sc, const std::vector<std::string>& headerC
         }
         if (e.noFindings)
             o.raw("no_findings", "true");
+        if (!e.cause.empty())
+            o.str("cause", e.cause);
     }
     writeUncertainty(o, sc.uncertainty);
     if (!sc.gaugeBlocksMm.empty()) {

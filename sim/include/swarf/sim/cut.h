@@ -1,6 +1,7 @@
 #pragma once
 // What the kernel makes of a scene: tool moves, the exact as-cut profile, the 3D surface with
 // feed marks, the comparison with the drawing, and findings. Plain values; mm and radians.
+#include "swarf/sim/causes.h"
 #include "swarf/sim/feed_marks.h"
 #include "swarf/sim/scene.h"
 
@@ -141,6 +142,9 @@ struct CutResult {
     double leftoverVolumeMm3 = 0, overcutVolumeMm3 = 0;
     double rtUm = 0, raUm = 0; ///< roughness of the finishing pass's marks, measured (µm)
     int finishingPass = -1;    ///< the pass whose marks rtUm and raUm measure (−1: none)
+    /// What moved the main cone, largest first (causes.h); empty until findCauses fills it
+    /// (`swarf run` and `swarf view` do; simulate() alone does not).
+    std::vector<Cause> causes;
 };
 
 } // namespace swarf

@@ -278,6 +278,8 @@ struct Expect {
     std::optional<bool> withinTolerance; ///< verdict, if the scene states one
     std::vector<std::string> findings;   ///< finding kinds that must be raised ("left_on", ...)
     bool noFindings = false;             ///< true: no finding may be raised
+    /// The main cause of the cone's error (a source name of causes.h), if the scene states one.
+    std::string cause;
     SourceLoc where;
 };
 
