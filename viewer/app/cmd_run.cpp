@@ -6,6 +6,7 @@
 #include "swarf/app/display.h"
 #include "swarf/app/memory.h"
 #include "swarf/app/progress.h"
+#include "swarf/geometry/hollow.h"
 #include "swarf/geometry/reference_cut.h"
 #include "swarf/geometry/run_solids.h"
 #include "swarf/io/output_file.h"
@@ -14,7 +15,6 @@
 #include "swarf/io/scene_reader.h"
 #include "swarf/sim/caution.h"
 #include "swarf/sim/error.h"
-#include "swarf/sim/inside_work.h"
 #include "swarf/sim/kernel.h"
 #include "swarf/sim/result_figures.h"
 #include "swarf/sim/run_budget.h"
@@ -91,7 +91,6 @@ void registerRun(CLI::App& app, int& exitCode) {
     cmd->callback([scene, outDir, noStep, noPictures, stl, reference, &exitCode] {
         // Read first: a bad scene writes nothing; nor does one the machine cannot hold.
         const Scene s = io::readScene(*scene);
-        refuseInsideWork(s, "run");
         requireFits(s, {true, !*noStep, !*noPictures}, availableMemoryBytes());
         if (s.plan.passes.empty())
             fmt::print(
@@ -143,7 +142,10 @@ void registerRun(CLI::App& app, int& exitCode) {
             const double kernelVolume = result.asCutVolumeMm3;
             const double rel = (ref.volumeMm3 - kernelVolume) / std::max(1e-12, ref.volumeMm3);
             double gaugeDiff = 0;
-            if (auto rr = ref.asCut.radiusAtZ(result.gaugeZMm))
+            // Inside work: the bore's radius at the gauge plane (the solid's inner radius).
+            const auto rr = result.bored ? geometry::innerRadiusAtZ(ref.asCut, result.gaugeZMm)
+                                         : ref.asCut.radiusAtZ(result.gaugeZMm);
+            if (rr)
                 gaugeDiff = 2.0 * *rr - result.gaugeAsCutDiameterMm;
             referenceNote = fmt::format(
                 "reference path (solid modeller): as-cut volume {:.3f} mm³ vs kernel {:.3f} mm³ "
