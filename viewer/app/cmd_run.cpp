@@ -128,7 +128,13 @@ void registerRun(CLI::App& app, int& exitCode) {
                             "distance from the kernel's profile {:.3f} µm",
                             rep.lineCount, rep.arcCount, rep.splineCount, rep.fitErrorMm * 1000.0);
         }
-        if (!*noPictures) {
+        std::string picturesNote;
+        if (!*noPictures && result.bored) {
+            // The viewer draws the outside only: pictures of a bored part would show the bar.
+            written.push_back(io::writeReport(s, result, *outDir, nullptr));
+            picturesNote = "pictures: none for a bored part yet (the viewer does not draw a bore); "
+                           "report.html has the figures and findings";
+        } else if (!*noPictures) {
             ensureDisplay();
             const viewer::SnapshotReport pics = viewer::renderSnapshots(s, result, *outDir);
             for (const std::string& f : pics.files())
@@ -158,6 +164,8 @@ void registerRun(CLI::App& app, int& exitCode) {
             fmt::print("{}\n", stepNote);
         if (!referenceNote.empty())
             fmt::print("{}\n", referenceNote);
+        if (!picturesNote.empty())
+            fmt::print("{}\n", picturesNote);
         fmt::print("wrote:\n");
         for (const std::string& f : written)
             fmt::print("  {}\n", f);
