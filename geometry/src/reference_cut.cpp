@@ -2,6 +2,7 @@
 
 #include "occt_support.h"
 
+#include "swarf/geometry/hollow.h"
 #include "swarf/geometry/revolve.h"
 #include "swarf/sim/tool_outline.h"
 
@@ -122,6 +123,28 @@ std::vector<P2> sweptRegion(const ToolOutline& outline, const std::vector<P2>& p
     return convexHull(std::move(pts));
 }
 
+// A boring tool's swept region: the insert's outline mirrored across its tip's z line (the nose
+// toward the wall), at both ends of the move, and everything from it down to the axis (the hole
+// and the chip), as the kernel takes the bore (sim/bore_sweep.h).
+Solid boringToolSolid(const ToolOutline& outline, const std::vector<P2>& polygon,
+                      const ToolMove& move, double h, const ReferenceOptions& options) {
+    const P2 it = outline.imaginaryTip();
+    std::vector<P2> pts;
+    double zMin = 1e300, zMax = -1e300;
+    for (const P2& p : polygon)
+        for (const P2& tip : {move.tipFrom, move.tipTo}) {
+            pts.emplace_back(tip.x() + (p.x() - it.x()), tip.y() - (p.y() - it.y()));
+            zMin = std::min(zMin, pts.back().x());
+            zMax = std::max(zMax, pts.back().x());
+        }
+    pts.emplace_back(zMin, 0.0);
+    pts.emplace_back(zMax, 0.0);
+    std::vector<P2> region = clipToAxis(convexHull(std::move(pts)));
+    if (h != 0)
+        region = offCentre(region, h, options.offCentreChordErrorMm);
+    return wrap(revolvePolygon(region));
+}
+
 } // namespace
 
 Solid sweptToolSolid(const Tool& tool, const ToolMove& move, double stockRadiusMm,
@@ -130,6 +153,8 @@ Solid sweptToolSolid(const Tool& tool, const ToolMove& move, double stockRadiusM
         const ToolOutline outline(tool);
         const std::vector<P2> polygon = outline.polygon(options.chordErrorMm);
         const double h = tool.tipHeightMm;
+        if (tool.kind == ToolKind::BoringBar)
+            return boringToolSolid(outline, polygon, move, h, options);
         std::vector<P2> region = sweptRegion(outline, polygon, move, stockRadiusMm + 1.0);
         double xMin = 1e300;
         for (const P2& p : region)
@@ -149,6 +174,8 @@ ReferenceResult referenceCut(const Scene& scene, const std::vector<ToolMove>& mo
     const double stockR = scene.stock.diameterMm / 2;
     const double zLo = scene.stock.freeEndZMm(), zHi = scene.stock.jawZMm();
     Solid part = stockSolid(scene.stock);
+    if (const Solid hole = holeSolid(scene.stock); !hole.empty())
+        part = part.minus(hole); // inside work: the bar as drilled
     for (const ToolMove& move : moves) {
         const Solid tool = sweptToolSolid(scene.tool, move, stockR, options);
         bool reaches = !tool.empty();

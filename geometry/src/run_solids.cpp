@@ -2,6 +2,7 @@
 
 #include "occt_support.h"
 
+#include "swarf/geometry/hollow.h"
 #include "swarf/geometry/step_file.h"
 #include "swarf/geometry/surface_stl.h"
 
@@ -25,9 +26,44 @@ Solid slab(double z0Mm, double z1Mm, double radiusMm) {
     });
 }
 
+// Inside work: the bar less its hole, the as-cut part less the as-cut bore, the drawing (its
+// outside features, or the bar over the drawing's extent) less the drawn bore.
+RunSolids makeHollowRunSolids(const Scene& scene, const CutResult& result,
+                              const ProfileFitOptions& fit) {
+    RunSolids s;
+    s.stock = stockSolid(scene.stock);
+    if (const Solid hole = holeSolid(scene.stock); !hole.empty())
+        s.stock = s.stock.minus(hole);
+    s.asCut = asCutSolid(scene.stock, result.asCut, fit);
+    double boreFitErrorMm = 0;
+    for (const Solid& piece : boreSolids(scene.stock, result.bore, fit, &boreFitErrorMm))
+        s.asCut.solid = s.asCut.solid.minus(piece);
+    s.asCut.maxFitErrorMm = std::max(s.asCut.maxFitErrorMm, boreFitErrorMm);
+    const Part outside = outsidePart(scene.part);
+    double rMax = scene.stock.diameterMm / 2;
+    for (double r : result.asCut.radiusMm)
+        rMax = std::max(rMax, r);
+    const double z0 = scene.part.zMinMm(), z1 = scene.part.zMaxMm();
+    s.nominal =
+        outside.features.empty() ? slab(z0, z1, scene.stock.diameterMm / 2) : nominalSolid(outside);
+    if (const Solid drawn = drawnBoreSolid(scene.part); !drawn.empty())
+        s.nominal = s.nominal.minus(drawn);
+    const Solid extent = slab(z0, z1, rMax + 1.0);
+    s.leftover = s.asCut.solid.common(extent).minus(s.nominal);
+    s.overcut = s.nominal.minus(s.asCut.solid);
+    s.stockVolumeMm3 = s.stock.volumeMm3();
+    s.nominalVolumeMm3 = s.nominal.volumeMm3();
+    s.asCutVolumeMm3 = s.asCut.solid.volumeMm3();
+    s.leftoverVolumeMm3 = s.leftover.volumeMm3();
+    s.overcutVolumeMm3 = s.overcut.volumeMm3();
+    return s;
+}
+
 } // namespace
 
 RunSolids makeRunSolids(const Scene& scene, const CutResult& result, const ProfileFitOptions& fit) {
+    if (result.bored)
+        return makeHollowRunSolids(scene, result, fit);
     RunSolids s;
     s.stock = stockSolid(scene.stock);
     s.nominal = nominalSolid(scene.part);

@@ -160,22 +160,28 @@ std::vector<bool> verdictMask(const Part& part, const Profile& grid, double nose
 std::vector<FeatureReport> compareFeatures(const Scene& scene, const Profile& asCut,
                                            const std::vector<double>& dev,
                                            const std::vector<double>& crestDev,
-                                           const std::vector<bool>& mask) {
+                                           const std::vector<bool>& mask, Side side) {
     const std::vector<double>& up = crestDev.size() == dev.size() ? crestDev : dev;
     const Part& part = scene.part;
     std::vector<int> owner(asCut.radiusMm.size());
     for (std::size_t i = 0; i < owner.size(); ++i)
-        owner[i] = featureAt(part, asCut.zAt(i));
+        owner[i] = part.radialFeatureOnSide(asCut.zAt(i), side);
 
     std::vector<FeatureReport> out;
     for (std::size_t fi = 0; fi < part.features.size(); ++fi) {
         const Feature& f = part.features[fi];
+        if (f.side != side)
+            continue;
         FeatureReport rep;
         rep.feature = static_cast<int>(fi);
         const double band = normalBandMm(f);
         if (f.kind == FeatureKind::Face) {
             rep.asCutDiameterMm = f.diameterMm;
             rep.withinTolerance = true;
+            if (side == Side::Inside) { // a step or the bottom of a bore: not checked
+                out.push_back(rep);
+                continue;
+            }
             // Only the datum end face is checked: metal standing beyond it is left on.
             if (std::abs(f.zStartMm - part.zMinMm()) < kEpsZ) {
                 const double thresh = noMetalRadiusMm(0.5 * f.diameterMm);

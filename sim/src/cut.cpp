@@ -35,16 +35,25 @@ const char* findingKindName(FindingKind kind) {
         return "coarse_finish";
     case FindingKind::CutBetweenPasses:
         return "cut_between_passes";
+    case FindingKind::BarRubsBore:
+        return "bar_rubs_bore";
+    case FindingKind::PastBoreBottom:
+        return "past_bore_bottom";
+    case FindingKind::LongOverhang:
+        return "long_overhang";
+    case FindingKind::BarTooBig:
+        return "bar_too_big";
     }
     return "unknown";
 }
 
 const std::vector<FindingKind>& allFindingKinds() {
     static const std::vector<FindingKind> kinds = {
-        FindingKind::LeftOn,       FindingKind::Overcut,         FindingKind::Rubbing,
-        FindingKind::JawCrash,     FindingKind::CrossesCentre,   FindingKind::CompoundTravel,
-        FindingKind::DepthOfCut,   FindingKind::AirCut,          FindingKind::CornerFillet,
-        FindingKind::CoarseFinish, FindingKind::CutBetweenPasses};
+        FindingKind::LeftOn,         FindingKind::Overcut,          FindingKind::Rubbing,
+        FindingKind::JawCrash,       FindingKind::CrossesCentre,    FindingKind::CompoundTravel,
+        FindingKind::DepthOfCut,     FindingKind::AirCut,           FindingKind::CornerFillet,
+        FindingKind::CoarseFinish,   FindingKind::CutBetweenPasses, FindingKind::BarRubsBore,
+        FindingKind::PastBoreBottom, FindingKind::LongOverhang,     FindingKind::BarTooBig};
     return kinds;
 }
 
@@ -79,6 +88,14 @@ const char* findingLabel(FindingKind kind) {
         return "coarse finishing feed";
     case FindingKind::CutBetweenPasses:
         return "cuts between passes";
+    case FindingKind::BarRubsBore:
+        return "boring bar rubs the bore";
+    case FindingKind::PastBoreBottom:
+        return "tool past the bottom of the hole";
+    case FindingKind::LongOverhang:
+        return "long boring-bar overhang";
+    case FindingKind::BarTooBig:
+        return "bar too big for the hole";
     }
     return "?";
 }

@@ -4,10 +4,13 @@
 #include "swarf/sim/between_passes.h"
 #include "swarf/sim/compare.h"
 #include "swarf/sim/findings.h"
+#include "swarf/sim/inside_kernel.h"
 #include "swarf/sim/machine.h"
 #include "swarf/sim/surface_roughness.h"
 #include "swarf/sim/sweep.h"
 #include "swarf/sim/tool_outline.h"
+
+#include "finishing_pass.h"
 
 #include <algorithm>
 #include <cmath>
@@ -23,7 +26,7 @@ Profile profileUpTo(const Scene& scene, const std::vector<ToolMove>& moves, std:
     return sweepExact(scene, outline, moves, count, std::clamp(fraction, 0.0, 1.0), false).asCut;
 }
 
-namespace {
+namespace detail {
 
 // The move that leaves most of the main feature's final surface, and the longest run of
 // samples within the feature that it leaves, trimmed by two feeds and a nose radius (along the
@@ -114,13 +117,15 @@ void checkFinishingFeed(const Scene& scene, const ToolMove& move, const Roughnes
     }
 }
 
-} // namespace
+} // namespace detail
 
 CutResult simulate(const Scene& scene, const ProgressFn& progress) {
     auto report = [&](double f) {
         if (progress)
             progress(f);
     };
+    if (scene.tool.kind == ToolKind::BoringBar)
+        return simulateInside(scene, progress); // inside work: the bore (inside_kernel.h)
     CutResult res;
     const ToolOutline outline(scene.tool);
     res.moves = planMoves(scene);
@@ -188,13 +193,14 @@ CutResult simulate(const Scene& scene, const ProgressFn& progress) {
 
     int fm = -1;
     double zLo = 0, zHi = 0;
-    if (finishingRegion(scene, sw, res.moves, fm, zLo, zHi) &&
+    if (detail::finishingRegion(scene, sw, res.moves, fm, zLo, zHi) &&
         res.moves[static_cast<std::size_t>(fm)].feedMmPerRev > 0) {
         const Roughness rough = measureRoughness(res.surface, fm, zLo, zHi);
         res.rtUm = rough.rtUm;
         res.raUm = rough.raUm;
         res.finishingPass = res.moves[static_cast<std::size_t>(fm)].pass;
-        checkFinishingFeed(scene, res.moves[static_cast<std::size_t>(fm)], rough, res.findings);
+        detail::checkFinishingFeed(scene, res.moves[static_cast<std::size_t>(fm)], rough,
+                                   res.findings);
     }
     std::stable_sort(res.findings.begin(), res.findings.end(),
                      [](const Finding& a, const Finding& b) { return a.pass < b.pass; });

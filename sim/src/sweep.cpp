@@ -83,10 +83,19 @@ Profile stockOnGrid(const Scene& scene, const Profile& grid) {
 ExactSweep sweepExact(const Scene& scene, const ToolOutline& outline,
                       const std::vector<ToolMove>& moves, std::size_t count, double fraction,
                       bool perPass) {
+    const Profile grid = sampleGrid(scene, outline, moves);
+    return sweepExactFrom(scene, outline, moves, count, fraction, perPass,
+                          stockOnGrid(scene, grid));
+}
+
+ExactSweep sweepExactFrom(const Scene& scene, const ToolOutline& outline,
+                          const std::vector<ToolMove>& moves, std::size_t count, double fraction,
+                          bool perPass, const Profile& start) {
     assert(count <= moves.size());
     ExactSweep out;
-    const Profile grid = sampleGrid(scene, outline, moves);
-    out.stock = stockOnGrid(scene, grid);
+    Profile grid = start;
+    std::fill(grid.radiusMm.begin(), grid.radiusMm.end(), 0.0);
+    out.stock = start;
     out.asCut = out.stock;
     const std::size_t n = grid.radiusMm.size();
     const double z0 = grid.z0Mm, dz = grid.dzMm, h = scene.tool.tipHeightMm;

@@ -43,11 +43,11 @@ TEST_CASE("swarf check prints the hole, the inside cone and the boring bar", "[c
     CHECK(r.out.find("OK: the scene is valid.") != std::string::npos);
 }
 
-TEST_CASE("run, plan, budget and view refuse inside work, writing nothing", "[cli][inside]") {
+TEST_CASE("plan, budget and view refuse inside work, writing nothing", "[cli][inside]") {
     const std::string scene = insideScene("collet-seat-1-10-bore.toml");
     const std::filesystem::path out =
         std::filesystem::temp_directory_path() / ("inside_cli_" + std::to_string(getpid()));
-    for (const char* command : {"run", "plan", "budget"}) {
+    for (const char* command : {"plan", "budget"}) {
         INFO(command);
         const Run r =
             runSwarf(std::string(command) + " " + scene + " --out '" + out.string() + "'");
@@ -63,4 +63,65 @@ TEST_CASE("run, plan, budget and view refuse inside work, writing nothing", "[cl
     CHECK(v.exitCode == 2);
     CHECK(v.err.find("swarf view does not simulate") != std::string::npos);
     CHECK_FALSE(std::filesystem::exists(out.string() + ".png"));
+}
+
+TEST_CASE("swarf run bores a socket: the bore in result.json and profile.csv, hollow STEP",
+          "[cli][inside][run]") {
+    const std::filesystem::path out =
+        std::filesystem::temp_directory_path() / ("inside_run_" + std::to_string(getpid()));
+    std::filesystem::remove_all(out);
+    const Run r =
+        runSwarf("run '" + std::string(SWARF_SCENES_DIR) + "/bore-socket-no-offset.toml' --out '" +
+                 out.string() + "' --no-pictures");
+    INFO(r.out << r.err);
+    REQUIRE(r.exitCode == 0);
+    // The gauge at the mouth 0.039 mm small: 2·r(1 + tanθ − secθ) with r = 0.4, θ = atan 0.05
+    // (references R1, mirrored inside; derived in the scene's header).
+    CHECK(r.out.find("diameter as cut 25.9610 mm, drawing 26.0000 mm (−39.0 µm)") !=
+          std::string::npos);
+    CHECK(r.out.find("metal left on, pass 6") != std::string::npos);
+    const std::string json = swarf::test::slurp(out / "result.json");
+    CHECK(json.find("\"side\": \"inside\"") != std::string::npos);
+    CHECK(json.find("\"bore\": {") != std::string::npos);
+    const std::string csv = swarf::test::slurp(out / "profile.csv");
+    CHECK(csv.rfind("z_mm,nominal_radius_mm,as_cut_radius_mm,deviation_mm,crest_radius_mm,"
+                    "crest_deviation_mm,bore_nominal_radius_mm,bore_radius_mm,",
+                    0) == 0);
+    CHECK(std::filesystem::exists(out / "as-cut.step"));
+    CHECK(std::filesystem::exists(out / "left-on.step"));
+    std::filesystem::remove_all(out);
+}
+
+TEST_CASE("bored sockets come out to the published tapers, within tolerance",
+          "[cli][inside][run]") {
+    const std::filesystem::path out =
+        std::filesystem::temp_directory_path() / ("inside_sockets_" + std::to_string(getpid()));
+    {
+        const Run r = runSwarf("run '" + std::string(SWARF_SCENES_DIR) +
+                               "/bore-morse-2-socket-inch.toml' --out '" + out.string() +
+                               "' --no-step --no-pictures");
+        INFO(r.out << r.err);
+        REQUIRE(r.exitCode == 0);
+        CHECK(r.out.find("verdict: within tolerance") != std::string::npos);
+        // Source: references R3, Machinery's Handbook Morse table: No. 2 gauge diameter
+        // 0.700 in, at the socket's mouth (ISO 296). Taper 1:20.020 on diameter: half angle
+        // atan(1/40.04) = 1°25′50.4″ (derived).
+        CHECK(r.out.find("drawing 0.70000 in") != std::string::npos);
+        CHECK(r.out.find("(drawing 1°25′50.4″)") != std::string::npos);
+        // The only finding: 2.9 in of a 7/16 in bar (common practice: about 4 diameters).
+        CHECK(r.out.find("long boring-bar overhang") != std::string::npos);
+        CHECK(r.out.find("boring bar rubs the bore") == std::string::npos);
+    }
+    {
+        const Run r = runSwarf("run '" + std::string(SWARF_SCENES_DIR) +
+                               "/bore-collet-seat-1-10.toml' --out '" + out.string() +
+                               "' --no-step --no-pictures");
+        INFO(r.out << r.err);
+        REQUIRE(r.exitCode == 0);
+        CHECK(r.out.find("verdict: within tolerance") != std::string::npos);
+        // Source: references R3, ISO 1119: 1:10 → 5°43′29.3176″ included, 2°51′44.66″ half.
+        CHECK(r.out.find("(drawing 2°51′44.7″)") != std::string::npos);
+        CHECK(r.out.find("findings: none") != std::string::npos);
+    }
+    std::filesystem::remove_all(out);
 }

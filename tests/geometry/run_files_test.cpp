@@ -65,10 +65,14 @@ TEST_CASE("result.json gives the volumes of the STEP solids written", "[geometry
             CHECK(v.at("left_on_mm3").get<double>() == Approx(0).margin(1e-6));
         if (over == 0)
             CHECK(v.at("overcut_mm3").get<double>() == Approx(0).margin(1e-6));
-        // The stock: a cylinder over the stick-out (derived).
-        const double r = s.stock.diameterMm / 2;
+        // The stock: a cylinder over the stick-out, less the drilled hole for inside work, a
+        // cylinder from the free end to its bottom or the jaws (derived).
+        const double r = s.stock.diameterMm / 2, rh = s.stock.boreDiameterMm / 2;
+        const double holeLength =
+            std::min(s.stock.boreBottomZMm(), s.stock.jawZMm()) - s.stock.freeEndZMm();
+        const double hole = s.stock.hasBore() ? std::acos(-1.0) * rh * rh * holeLength : 0.0;
         CHECK_THAT(v.at("stock_mm3").get<double>(),
-                   WithinRel(std::acos(-1.0) * r * r * s.stock.stickOutMm, 1e-9));
+                   WithinRel(std::acos(-1.0) * r * r * s.stock.stickOutMm - hole, 1e-9));
         CHECK_THAT(v.at("removed_mm3").get<double>(),
                    WithinAbs(v.at("stock_mm3").get<double>() - asCut, 1e-6 * asCut));
         fs::remove_all(dir);

@@ -1,5 +1,6 @@
 // Every scene in scenes/: the kernel against the reference path (solid booleans), and the
 // as-cut STEP file read back against the kernel.
+#include "swarf/geometry/hollow.h"
 #include "swarf/geometry/reference_cut.h"
 #include "swarf/geometry/run_solids.h"
 #include "swarf/geometry/step_file.h"
@@ -64,6 +65,8 @@ Scene withPasses(const Scene& scene) {
 // there to the jaws is uncut: the profile's volume plus that closed-form cylinder (derived).
 // The kernel's own as-cut volume covers the same stick-out.
 double kernelVolumeToJaws(const Scene& scene, const CutResult& kernel) {
+    if (kernel.bored)
+        return kernel.asCutVolumeMm3; // bar less bore: its own closed form (inside_kernel.cpp)
     const Profile& asCut = kernel.asCut;
     const double zEnd = asCut.zAt(asCut.radiusMm.size() - 1);
     const double r = scene.stock.diameterMm / 2;
@@ -86,19 +89,25 @@ TEST_CASE("scenes: reference path, kernel and STEP file agree",
             REQUIRE(ref.asCut.isValid());
             // The limits: volume within 1e-4 relative, profile within 1 µm.
             CHECK_THAT(ref.volumeMm3, WithinRel(kernelVolumeToJaws(scene, kernel), 1e-4));
-            const Feature* cone = mainSlope(scene.part);
+            // Inside work is checked on the bore: the solid's inner radius against the kernel's.
+            const bool bored = kernel.bored;
+            const Feature* cone = bored ? scene.part.mainInsideCone() : mainSlope(scene.part);
             REQUIRE(cone != nullptr);
-            const auto gauge = ref.asCut.radiusAtZ(kernel.gaugeZMm);
+            const Profile& side = bored ? kernel.bore : kernel.asCut;
+            auto radiusOf = [bored](const Solid& solid, double z) {
+                return bored ? innerRadiusAtZ(solid, z) : solid.radiusAtZ(z);
+            };
+            const auto gauge = radiusOf(ref.asCut, kernel.gaugeZMm);
             REQUIRE(gauge.has_value());
-            CHECK_THAT(*gauge, WithinAbs(kernel.asCut.radiusAt(kernel.gaugeZMm), 1e-3));
-            const double z0 = std::max(cone->zStartMm, kernel.asCut.z0Mm);
+            CHECK_THAT(*gauge, WithinAbs(side.radiusAt(kernel.gaugeZMm), 1e-3));
+            const double z0 = std::max(cone->zStartMm, side.z0Mm);
             for (int k = 0; k <= 20; ++k) {
                 // Off the sample grid on purpose: the kernel's radius is interpolated there.
                 const double z = z0 + 0.013 + (cone->zEndMm - z0 - 0.026) * k / 20.0;
-                const auto r = ref.asCut.radiusAtZ(z);
+                const auto r = radiusOf(ref.asCut, z);
                 REQUIRE(r.has_value());
                 INFO("z = " << z);
-                CHECK_THAT(*r, WithinAbs(kernel.asCut.radiusAt(z), 1e-3));
+                CHECK_THAT(*r, WithinAbs(side.radiusAt(z), 1e-3));
             }
 
             // The as-cut STEP file read back against the kernel.
@@ -111,13 +120,13 @@ TEST_CASE("scenes: reference path, kernel and STEP file agree",
             CHECK(report.fitErrorMm <= 0.5e-3);
             const Solid back = readStep(report.files.front());
             // One solid, unless the cut went through the centre and parted the bar.
-            REQUIRE(back.solidCount() == pieces(kernel.asCut));
+            REQUIRE(back.solidCount() == (bored ? 1 : pieces(kernel.asCut)));
             CHECK(back.isValid());
             CHECK_THAT(back.volumeMm3(), WithinRel(kernelVolumeToJaws(scene, kernel), 1e-6));
             const BoxMm b = back.bounds();
             CHECK_THAT(b.zMin, WithinAbs(scene.stock.freeEndZMm(), 1e-6));
             CHECK_THAT(b.zMax, WithinAbs(scene.stock.jawZMm(), 1e-6));
-            const auto rGauge = back.radiusAtZ(kernel.gaugeZMm);
+            const auto rGauge = radiusOf(back, kernel.gaugeZMm);
             REQUIRE(rGauge.has_value());
             CHECK_THAT(2 * *rGauge, WithinAbs(kernel.gaugeAsCutDiameterMm, 1e-3));
             // Leftover and overcut add up where the drawing has features (derived: volumes of

@@ -76,13 +76,25 @@ void checkVolumes(const Scene& s, const CutResult& r) {
     CHECK(r.volumeToZMm == s.stock.jawZMm());
     // The stock: a cylinder of the bar's radius over the stick-out, in closed form.
     const double R = s.stock.diameterMm / 2;
-    const double stock = kPi * R * R * s.stock.stickOutMm;
+    // Inside work: less the drilled hole, a cylinder from the free end to its bottom or the
+    // jaws (closed form); as cut, less the bore on the samples and the hole beyond them.
+    const double rh = s.stock.boreDiameterMm / 2;
+    const double holeEnd = std::min(s.stock.boreBottomZMm(), s.stock.jawZMm());
+    const double hole = s.stock.hasBore() ? kPi * rh * rh * (holeEnd - s.stock.freeEndZMm()) : 0;
+    const double holeTail = s.stock.hasBore() ? kPi * rh * rh * std::max(0.0, holeEnd - zLast) : 0;
+    if (r.bored)
+        REQUIRE(r.bore.radiusMm.size() == n);
+    const double stock = kPi * R * R * s.stock.stickOutMm - (r.bored ? hole : 0);
     CHECK(r.stockVolumeMm3 == Approx(stock).epsilon(1e-9)); // rounding over ~10⁵ terms
     // As cut: Simpson on the samples, within the gap derived above (plus rounding), and the bar
     // untouched from the last sample to the jaws.
     const double rest = kPi * R * R * (s.stock.jawZMm() - zLast);
-    const double asCut = simpsonVolumeMm3(r.asCut, 0, n - 1) + rest;
-    const double gap = quadratureGapMm3(r.asCut, 0, n - 1) + 1e-9 * stock;
+    double asCut = simpsonVolumeMm3(r.asCut, 0, n - 1) + rest;
+    double gap = quadratureGapMm3(r.asCut, 0, n - 1) + 1e-9 * stock;
+    if (r.bored) {
+        asCut -= simpsonVolumeMm3(r.bore, 0, n - 1) + holeTail;
+        gap += quadratureGapMm3(r.bore, 0, n - 1);
+    }
     INFO("as cut: kernel " << r.asCutVolumeMm3 << " mm3, Simpson " << asCut << " mm3, gap " << gap
                            << " mm3");
     CHECK(std::abs(r.asCutVolumeMm3 - asCut) <= gap);
@@ -218,12 +230,13 @@ TEST_CASE("a drawing cut within tolerance has the drawing's volume", "[corpus][k
         const CutResult r = simulate(s);
         REQUIRE(r.withinTolerance);
         ++checked;
-        const Profile& g = r.asCut;
-        const double R = s.stock.diameterMm / 2, rho = s.tool.noseRadiusMm, dz = g.dzMm;
+        const double R = s.stock.diameterMm / 2, rho = s.tool.noseRadiusMm, dz = r.asCut.dzMm;
         for (const Feature& f : s.part.features) {
             if (f.kind == FeatureKind::Face)
                 continue;
             INFO(f.name);
+            // An inside feature against the as-cut bore: the hole's volume, the same integral.
+            const Profile& g = f.side == Side::Inside ? r.bore : r.asCut;
             // The drawing in closed form: π R² h for a cylinder, π h (R² + R r + r²)/3 for a
             // cone or chamfer (a frustum), h the feature's length (derived).
             const double h = f.zEndMm - f.zStartMm, a = f.radiusAt(f.zStartMm),

@@ -7,6 +7,7 @@
 
 #include <nlohmann/json.hpp>
 
+#include <algorithm>
 #include <cmath>
 #include <cstdio>
 #include <vector>
@@ -109,6 +110,8 @@ std::string resultJson(const Scene& scene, const CutResult& r) {
                           {"max_left_on_mm", num(fr.maxLeftOnMm)},
                           {"max_overcut_mm", num(fr.maxOvercutMm)},
                           {"tolerance_mm", num(f.toleranceMm)}};
+        if (f.side == Side::Inside)
+            o["side"] = sideName(f.side); // outside features keep the layout they always had
         if (f.kind == FeatureKind::Cylinder) {
             o["nominal_diameter_mm"] = f.diameterMm;
             o["as_cut_diameter_mm"] = num(fr.asCutDiameterMm);
@@ -180,6 +183,23 @@ std::string resultJson(const Scene& scene, const CutResult& r) {
     j["profile"] = {{"samples", r.asCut.radiusMm.size()},
                     {"z0_mm", num(r.asCut.z0Mm)},
                     {"step_mm", r.asCut.dzMm}};
+    if (r.bored) {
+        // Inside work: the hole, as profile.csv's bore columns give it sample by sample.
+        double holeMm = 0, boreLeftOn = 0, boreOvercut = 0;
+        for (double x : r.boreStock.radiusMm)
+            holeMm = std::max(holeMm, 2.0 * x);
+        for (const FeatureReport& fr : r.features) {
+            if (scene.part.features.at(static_cast<std::size_t>(fr.feature)).side != Side::Inside)
+                continue;
+            boreLeftOn = std::max(boreLeftOn, fr.maxLeftOnMm);
+            boreOvercut = std::max(boreOvercut, fr.maxOvercutMm);
+        }
+        j["bore"] = {{"stock_diameter_mm", num(holeMm)},
+                     {"stock_depth_mm", num(scene.stock.boreDepthMm)},
+                     {"through", scene.stock.boreThrough()},
+                     {"max_left_on_mm", num(boreLeftOn)},
+                     {"max_overcut_mm", num(boreOvercut)}};
+    }
     j["surface"] = {{"marked_moves", r.surface.markedMoveCount()},
                     {"samples_per_feed", kFeedMarkProfileSamples},
                     {"angle_samples", scene.sim.angleSamples}};
@@ -189,9 +209,31 @@ std::string resultJson(const Scene& scene, const CutResult& r) {
     return j.dump(2) + "\n";
 }
 
+namespace {
+
+// The bore's five columns of sample i (inside work): a number, or empty where there is none.
+void appendBoreColumns(std::string& out, const CutResult& r, std::size_t i) {
+    auto at = [i](const std::vector<double>& v) { return i < v.size() ? v[i] : NAN; };
+    const double cols[] = {at(r.boreNominal.radiusMm), at(r.bore.radiusMm), at(r.boreDeviationMm),
+                           at(r.boreCrest.radiusMm), at(r.boreCrestDeviationMm)};
+    char buf[32];
+    for (double v : cols) {
+        out += ',';
+        if (std::isfinite(v)) {
+            const int len = std::snprintf(buf, sizeof buf, "%.7f", v);
+            out.append(buf, static_cast<std::size_t>(len));
+        }
+    }
+}
+
+} // namespace
+
 std::string profileCsv(const CutResult& r) {
     std::string out =
-        "z_mm,nominal_radius_mm,as_cut_radius_mm,deviation_mm,crest_radius_mm,crest_deviation_mm\n";
+        "z_mm,nominal_radius_mm,as_cut_radius_mm,deviation_mm,crest_radius_mm,crest_deviation_mm";
+    out += r.bored ? ",bore_nominal_radius_mm,bore_radius_mm,bore_deviation_mm,"
+                     "bore_crest_radius_mm,bore_crest_deviation_mm\n"
+                   : "\n";
     out.reserve(out.size() + r.asCut.radiusMm.size() * 72);
     char buf[128];
     for (std::size_t i = 0; i < r.asCut.radiusMm.size(); ++i) {
@@ -217,6 +259,8 @@ std::string profileCsv(const CutResult& r) {
             len = std::snprintf(buf, sizeof buf, "%.7f", cd);
             out.append(buf, static_cast<std::size_t>(len));
         }
+        if (r.bored)
+            appendBoreColumns(out, r, i);
         out += '\n';
     }
     return out;

@@ -4,8 +4,8 @@
 // axis, toward the wall), so its swept outline's upper envelope is the mirror of the lower
 // envelope sweep.h computes, column by column and exact at the samples. The as-cut bore is the
 // larger of the stock's hole and every move's cutRadiusMm(highest x, tip height): off centre the
-// bore is a hyperboloid as the outside is. Not yet used by simulate() (issue 14): the kernel's
-// results, compare and findings are still outside only.
+// bore is a hyperboloid as the outside is. simulate() computes the same bore through the outside
+// sweep on a twin (inside_kernel.h); the tests hold the two to each other.
 #include "swarf/sim/cut.h"
 #include "swarf/sim/scene.h"
 #include "swarf/sim/tool_outline.h"

@@ -1,7 +1,7 @@
 #pragma once
 // Geometric checks of a boring bar in its hole, at one tool position: how far the bar's shank
 // clears the bore behind the insert, and how far the tool runs past the bottom of a blind hole.
-// Pure geometry, values in and out; not yet turned into findings of simulate() (issue 14).
+// Pure geometry, values in and out; boring_findings.h turns them into findings of simulate().
 //
 // Where the shank sits: a maker's `min_bore` is the smallest bore the bar enters with its tip on
 // the wall; there the back of the shank touches the opposite wall, so the bar's axis lies

@@ -67,10 +67,13 @@ std::vector<bool> verdictMask(const Part& part, const Profile& grid, double nose
 /// gauge or micrometer touches; the valleys' `deviationMm` if it is empty) and largest overcut
 /// (from the valleys), diameter as cut (cylinder: mean; cone: at the gauge plane, both of the
 /// swept envelope), fitted half angle (least squares over the counted samples) and verdict.
+/// `side`: the features of that side only, against `asCut` of that side (inside: the as-cut
+/// bore, with the inside deviations; an inside face is reported within tolerance).
 std::vector<FeatureReport> compareFeatures(const Scene& scene, const Profile& asCut,
                                            const std::vector<double>& deviationMm,
                                            const std::vector<double>& crestDeviationMm,
-                                           const std::vector<bool>& mask);
+                                           const std::vector<bool>& mask,
+                                           Side side = Side::Outside);
 
 /// The largest metal left on and the largest overcut among signed deviations (NaN skipped).
 struct DeviationExtremes {

@@ -77,6 +77,10 @@ enum class FindingKind {
     CornerFillet,     ///< the nose leaves a fillet in an internal corner the drawing has sharp
     CoarseFinish,     ///< the finishing feed is more than a nose radius finishes well (f > r/2)
     CutBetweenPasses, ///< a move between passes (back-out, wind-back, feed-in) cuts metal
+    BarRubsBore,      ///< a boring bar's shank (behind the insert) touches the bore wall
+    PastBoreBottom,   ///< a boring tool runs past the bottom of a blind hole
+    LongOverhang,     ///< a boring bar overhangs more than about 4 bar diameters (steel bar)
+    BarTooBig,        ///< the boring bar does not enter the hole as it stands (min_bore larger)
 };
 
 /// Every finding kind, in the order above.
@@ -145,6 +149,18 @@ struct CutResult {
     /// What moved the main cone, largest first (causes.h); empty until findCauses fills it
     /// (`swarf run` and `swarf view` do; simulate() alone does not).
     std::vector<Cause> causes;
+
+    /// Inside work (a scene cut with a boring bar, inside_kernel.h). `asCut`, `stock`, `nominal`
+    /// and the deviations above stay the outside (a boring bar leaves it as the bar is); these
+    /// hold the hole, on the same samples. All empty for a scene with no hole.
+    bool bored = false;  ///< true if the plan was cut with a boring bar
+    Profile boreStock;   ///< the stock's hole before any pass (0: solid)
+    Profile bore;        ///< the exact as-cut bore (the marks' valleys; 0: solid)
+    Profile boreCrest;   ///< the feed marks' crests inside (≤ bore: nearest the axis)
+    Profile boreNominal; ///< the drawn bore (NaN where no inside feature is)
+    std::vector<Profile> boreAfterPass;  ///< the as-cut bore after each pass
+    std::vector<double> boreDeviationMm; ///< inside deviation (+ left on within the drawn bore)
+    std::vector<double> boreCrestDeviationMm; ///< the same for the crests: what a plug gauge meets
 };
 
 } // namespace swarf

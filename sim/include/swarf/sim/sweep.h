@@ -83,4 +83,11 @@ ExactSweep sweepExact(const Scene& scene, const ToolOutline& outline,
                       const std::vector<ToolMove>& moves, std::size_t count, double fraction,
                       bool perPass);
 
+/// As sweepExact, from `start` (radii on the scene's sample grid, sampleGrid) instead of the
+/// bar: the inside kernel sweeps a hole this way (inside_kernel.h). `start` must have the grid's
+/// samples.
+ExactSweep sweepExactFrom(const Scene& scene, const ToolOutline& outline,
+                          const std::vector<ToolMove>& moves, std::size_t count, double fraction,
+                          bool perPass, const Profile& start);
+
 } // namespace swarf

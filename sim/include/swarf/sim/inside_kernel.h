@@ -1,0 +1,34 @@
+#pragma once
+// The kernel for inside work: a plan cut with a boring bar (tool.kind = BoringBar).
+//
+// The sweep inside is the sweep outside seen from the wall. A boring tool's outline is the
+// turning outline mirrored across its tip's z line (bore_sweep.h); taking x' = C − x (C a length
+// larger than any x the tool reaches) turns it back into the turning outline at tip C − x, the
+// hole of radius R into "stock" of radius C − √(R² − h²), and the as-cut bore, the largest of the
+// hole and every move's upper envelope, into the smallest: the outside kernel's own exact
+// per-column sweep, per-pass profiles and feed-mark surface (feed_marks.h), run on that twin
+// with the tip on centre. Each radius is then brought back, x = C − x' and R = √(x² + h²): the
+// mapping is monotonic, so it commutes with the largest and the smallest and the tip height
+// gives the hyperboloid exactly (h the bar's axis height, where its tip sits).
+//
+// The result (cut.h, CutResult): the outside stays the bar (`asCut` = `stock`, compared with the
+// outside features); the bore, its crests, the drawn bore and the inside deviations are in the
+// `bore…` fields; features of both sides are reported; the gauge is the first inside cone's.
+// Findings: those of the moves (rubbing, depth of cut, air cut, jaw, compound travel, found on
+// the twin), left on and overcut per side, the finishing feed, and the boring findings
+// (boring_findings.h). The moves between passes are not made or checked for a boring bar yet
+// (`between` is empty): the machine model backs the cross-slide out away from the axis, which
+// inside is into the wall.
+#include "swarf/sim/kernel.h"
+
+namespace swarf {
+
+/// The whole kernel for a scene whose tool is a boring bar. Precondition: the scene is valid
+/// and tool.kind == BoringBar (simulate() calls it for such a scene).
+CutResult simulateInside(const Scene& scene, const ProgressFn& progress = {});
+
+/// The length C of the twin above for a scene, mm: the bar's diameter plus 10 mm, beyond any x
+/// a boring tool reaches in the bar.
+double insideTwinOffsetMm(const Scene& scene);
+
+} // namespace swarf
