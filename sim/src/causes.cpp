@@ -401,6 +401,24 @@ const std::vector<std::string>& causeSourceNames() {
     return names;
 }
 
+std::string causeLabel(const std::string& source) {
+    static const std::vector<std::pair<std::string, std::string>> labels{
+        {"nose_offset", "the nose-radius offset"},
+        {"tip_height", "the tip's height off centre"},
+        {"cross_backlash", "the cross-slide's backlash"},
+        {"compound_backlash", "the compound's backlash"},
+        {"saddle_backlash", "the saddle's backlash"},
+        {"compound_angle", "the compound's angle"},
+        {"compound_scale", "the compound set on the other scale"},
+        {"dial_mode", "the cross-slide dial read in the other mode (diameter or radius)"},
+        {"feed_marks", "the feed marks"},
+        {"other", "everything else"}};
+    for (const auto& [key, label] : labels)
+        if (key == source)
+            return label;
+    return source;
+}
+
 std::vector<const Cause*> causesOfPass(const std::vector<Cause>& causes, int pass) {
     std::vector<const Cause*> out;
     for (const Cause& c : causes)

@@ -99,8 +99,20 @@ Correction correctPlan(const Scene& plan, const Measurements& m) {
     c.revealedErrorRad = thFit - intendedAngleRad(plan.setup, last);
     c.compoundChangeRad = c.plannedAngleRad - thFit;
     c.oldCompoundReadingRad = lastSetup.compoundReadingRad;
-    c.newCompoundReadingRad =
-        compoundScaleReadingRad(c.plannedAngleRad - c.revealedErrorRad, lastSetup.compoundScale);
+    // The angle to set: the planned one less the error the cut revealed. An error larger than
+    // the angle itself (or one that would stand the compound past square) is no error of
+    // setting: the compound is left as it is and the note says why (found by fuzzing).
+    const double toSetRad = c.plannedAngleRad - c.revealedErrorRad;
+    if (toSetRad >= 0 && toSetRad <= kPi / 2) {
+        c.newCompoundReadingRad = compoundScaleReadingRad(toSetRad, lastSetup.compoundScale);
+    } else {
+        c.newCompoundReadingRad = c.oldCompoundReadingRad;
+        c.notes.push_back("the cone measures " + formatDms(thFit) + " against the " +
+                          formatDms(c.plannedAngleRad) +
+                          " the compound was set to: no setting of the compound makes up that "
+                          "difference, so it is left as it is; measure again, and check the "
+                          "readings against the set-up sheet");
+    }
     c.indicatorTravelMm =
         std::min(plan.setup.compound.travelMm, u == Units::Inch ? 2 * kMmPerInch : 50.0);
     c.indicatorChangeMm = c.indicatorTravelMm * (std::sin(c.plannedAngleRad) - std::sin(thFit));

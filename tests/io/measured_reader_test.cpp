@@ -3,11 +3,13 @@
 // bad scenes), read against the planned 1:20 arbor.
 #include "swarf/io/measured_reader.h"
 #include "swarf/io/scene_reader.h"
+#include "swarf/sim/correction.h"
 #include "swarf/sim/error.h"
 #include "swarf/sim/planner.h"
 
 #include <catch2/catch.hpp>
 
+#include <cmath>
 #include <filesystem>
 #include <fstream>
 
@@ -114,4 +116,25 @@ TEST_CASE("a measurement file in inch on a mm scene", "[io][measured]") {
     CHECK(m.diameters[0].zMm == Approx(25.4));
     CHECK(m.diameters[0].valueMm == Approx(22.86));
     CHECK(m.diameters[0].uncertaintyMm == Approx(0.00254)); // 0.0001 in
+}
+
+TEST_CASE("a cone measured far steeper than the plan leaves the compound as it is, with a note",
+          "[io][measured][correct]") {
+    // Found by fuzzing (tests/fuzz/run.sh measured): after pass 2 of the 1:20 arbor (half angle
+    // 1°25′56″), Ø20.8 at z 20 and Ø24.6 at z 49 fit a cone of 3°44′55″. The error revealed is
+    // larger than the angle set, and a compound swung past the axis is no correction: the
+    // correction kept the reading and must not stop on it (an assert did).
+    const std::string text = "after_pass = 2\n[[diameter]]\nat = 20.0\nvalue = 20.8\n"
+                             "[[diameter]]\nat = 49.0\nvalue = 24.6\n";
+    const Measurements m = io::readMeasurementsText(text, "steep.toml", plannedArbor());
+    const Correction c = correctPlan(plannedArbor(), m);
+    REQUIRE(c.fit.ok);
+    CHECK(radToDeg(c.fit.halfAngleRad) ==
+          Approx(std::atan(3.8 / 58.0) * 180.0 / kPi).epsilon(1e-3));
+    CHECK(c.newCompoundReadingRad == c.oldCompoundReadingRad);
+    bool said = false;
+    for (const std::string& n : c.notes)
+        said = said ||
+               n.find("no setting of the compound makes up that difference") != std::string::npos;
+    CHECK(said);
 }

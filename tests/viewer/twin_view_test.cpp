@@ -1,6 +1,9 @@
 // The twin in the window (key w): the ghost of the twin's as-cut part toggles, the panel shows
 // the differences, and without a twin the panel says there is none.
 #include "swarf/app/display.h"
+#include "swarf/io/scene_reader.h"
+#include "swarf/sim/causes.h"
+#include "swarf/sim/kernel.h"
 #include "swarf/sim/twin_difference.h"
 #include "swarf/viewer/viewer.h"
 
@@ -94,4 +97,24 @@ TEST_CASE("key w without a twin says so in the panel", "[viewer][twin]") {
     CHECK(view.twinShown());
     REQUIRE(view.pressKey("w"));
     CHECK_FALSE(contains(view.panelText(), "Twin: none"));
+}
+
+TEST_CASE("the panel names the cause at the pass that brought it in, in words",
+          "[viewer][causes]") {
+    // Lesson 1's mistake: the finishing pass (the last) set with the tip on the drawn line; the
+    // cone comes out 2ΔX = 0.039 mm large (references R1, the nose-radius offset).
+    app::ensureDisplay();
+    const Scene s =
+        io::readScene(std::string(SWARF_SCENES_DIR) + "/lessons/01-shallow-offset-mistake.toml");
+    CutResult r = simulate(s);
+    r.causes = findCauses(s, r);
+    REQUIRE_FALSE(r.causes.empty());
+    viewer::ViewerSession view(s, r, smallWindow());
+    const int last = static_cast<int>(s.plan.passes.size());
+    view.setPosition(last);
+    CHECK(contains(view.panelText(), "Brings in the nose-radius offset: cone 0.0390 mm larger"));
+    CHECK_FALSE(contains(view.panelText(), "nose_offset"));
+    // A roughing pass brought nothing in.
+    view.setPosition(1);
+    CHECK_FALSE(contains(view.panelText(), "Brings in"));
 }

@@ -1,6 +1,7 @@
 // The text of the window's panels (see panel_text.h).
 #include "panel_text.h"
 
+#include "swarf/sim/causes.h"
 #include "swarf/sim/compare.h"
 #include "swarf/sim/compound_sense.h"
 #include "swarf/sim/result_figures.h"
@@ -51,7 +52,8 @@ std::string momentPanelText(const Scene& scene, const CutResult& result, const M
         s += fmt::format("Feed {}/rev\n", formatLength(m.feedMmPerRev, u));
         // What this pass brought in (causes.h): the source and how far it moved the cone.
         for (const Cause* c : causesOfPass(result.causes, m.pass))
-            s += fmt::format("Brings in {}: cone {} {} on diameter at the gauge plane\n", c->source,
+            s += fmt::format("Brings in {}: cone {} {} on diameter at the gauge plane\n",
+                             causeLabel(c->source),
                              formatLength(std::fabs(c->gaugeDiameterChangeMm), u, Precision::Fine),
                              c->gaugeDiameterChangeMm >= 0 ? "larger" : "smaller");
     }

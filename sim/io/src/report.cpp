@@ -5,6 +5,7 @@
 #include "report_style.h"
 #include "swarf/io/html.h"
 #include "swarf/io/output_file.h"
+#include "swarf/sim/causes.h"
 #include "swarf/sim/caution.h"
 #include "swarf/sim/compare.h"
 #include "swarf/sim/result_figures.h"
@@ -18,6 +19,13 @@
 namespace swarf::io {
 
 namespace {
+
+// An angle change in arc seconds, signed, to 0.1″; a change under 0.05″ is 0.0″ (no "−0.0").
+std::string signedSeconds(double seconds) {
+    if (std::fabs(seconds) < 0.05)
+        return "0.0″";
+    return fmt::format("{}{:.1f}″", seconds > 0 ? "+" : "−", std::fabs(seconds));
+}
 
 std::string esc(const std::string& s) {
     return escapeHtml(s);
@@ -153,12 +161,13 @@ std::string reportHtml(const Scene& scene, const CutResult& result,
              "angle</th><th>What happened, and the fix</th></tr>\n";
         for (const Cause& c : result.causes)
             h += fmt::format(
-                "<tr><td>{}</td><td>{}</td><td>{}</td><td>{:+.4f}°</td><td>{}</td>"
+                "<tr><td>{}</td><td>{}</td><td>{}</td><td>{}</td><td>{}</td>"
                 "</tr>\n",
-                esc(c.source), c.pass >= 0 ? std::to_string(c.pass + 1) : std::string("—"),
+                esc(causeLabel(c.source)),
+                c.pass >= 0 ? std::to_string(c.pass + 1) : std::string("—"),
                 esc((c.gaugeDiameterChangeMm >= 0 ? "+" : "−") +
                     formatLength(std::fabs(c.gaugeDiameterChangeMm), scene.units, Precision::Fine)),
-                radToDeg(c.halfAngleChangeRad), esc(c.message));
+                signedSeconds(radToDeg(c.halfAngleChangeRad) * 3600.0), esc(c.message));
         h += "</table>\n";
     }
 

@@ -49,6 +49,10 @@ std::vector<Cause> findCauses(const Scene& scene, const CutResult& result);
 /// Every source name a cause may have, in the order RESULTS.md lists them.
 const std::vector<std::string>& causeSourceNames();
 
+/// A source for people ("the nose-radius offset", "the cross-slide's backlash", ...); the
+/// snake_case name stays in result.json. An unknown name is returned as it is.
+std::string causeLabel(const std::string& source);
+
 /// The causes that name pass `pass` (0-based), in the order of `causes`.
 std::vector<const Cause*> causesOfPass(const std::vector<Cause>& causes, int pass);
 
