@@ -17,6 +17,7 @@
 #include <fmt/format.h>
 #include <nlohmann/json.hpp>
 
+#include <cctype>
 #include <cmath>
 #include <cstdio>
 #include <filesystem>
@@ -176,6 +177,15 @@ TEST_CASE("swarf correct: the round trip after a trial cut", "[cli][correct]") {
             CHECK(fs::exists(t.dir / "out" / f));
         CHECK_THAT(slurp((t.dir / "out" / "setup-sheet.txt").string()),
                    Catch::Contains("stop the spindle before measuring"));
+        // The last step measures the finished cone, and says the spindle is stopped (the sheet
+        // wraps its lines: compared with each run of white space as one space).
+        std::string flat;
+        for (char ch : slurp((t.dir / "out" / "setup-sheet.txt").string()))
+            if (!(std::isspace(static_cast<unsigned char>(ch)) && !flat.empty() &&
+                  flat.back() == ' '))
+                flat += std::isspace(static_cast<unsigned char>(ch)) ? ' ' : ch;
+        CHECK_THAT(flat,
+                   Catch::Contains("measure the finished cone (spindle stopped, tool backed out)"));
         const std::string html = slurp((t.dir / "out" / "setup-sheet.html").string());
         CHECK_THAT(html, Catch::Contains("stop the spindle before measuring"));
         CHECK_THAT(html, Catch::Contains("<svg")); // the before-and-after chart

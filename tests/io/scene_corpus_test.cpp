@@ -24,7 +24,7 @@ namespace {
 // scenes/*.toml and the lessons' gallery, scenes/lessons/*.toml.
 std::vector<fs::path> sceneFiles() {
     std::vector<fs::path> files;
-    for (const fs::path dir : {fs::path(SWARF_SCENES_DIR), fs::path(SWARF_SCENES_DIR) / "lessons"})
+    for (const fs::path& dir : {fs::path(SWARF_SCENES_DIR), fs::path(SWARF_SCENES_DIR) / "lessons"})
         for (const auto& e : fs::directory_iterator(dir))
             if (e.path().extension() == ".toml")
                 files.push_back(e.path());

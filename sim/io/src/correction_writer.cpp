@@ -190,6 +190,12 @@ std::vector<SheetPart> correctionSheet(const Scene& plan, const Measurements& m,
                         formatLength(ps.toMm, u);
             rest.lines.push_back(line + ".");
         }
+        if (const Feature* cone = plan.part.mainCone())
+            rest.lines.push_back("Then stop the spindle and measure the finished cone (spindle "
+                                 "stopped, tool backed out): Ø" +
+                                 L(cone->cone.gaugeDiameterMm) + " ± " + L(cone->toleranceMm) +
+                                 " at the gauge plane, " + L(cone->cone.gaugeZMm) +
+                                 " from the datum face.");
         for (const std::string& n : c.notes)
             rest.lines.push_back(n + ".");
         rest.lines.push_back(std::string("swarf run on corrected.toml: ") +

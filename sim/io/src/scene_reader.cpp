@@ -104,10 +104,10 @@ PlanningOptions readPlanning(const Fields& root) {
         p.trialCut = *b;
         p.trialCutStated = true;
     }
-    if (auto t = f.number("in_tolerance_target", "the chance of a part within tolerance")) {
-        f.require(*t > 0 && *t < 1, "in_tolerance_target",
+    if (auto target = f.number("in_tolerance_target", "the chance of a part within tolerance")) {
+        f.require(*target > 0 && *target < 1, "in_tolerance_target",
                   "expected a chance between 0 and 1, e.g. 0.95 for 19 parts in 20");
-        p.inToleranceTarget = *t;
+        p.inToleranceTarget = *target;
     }
     if (auto s = f.choice("roughing", {"compound", "saddle_steps"}))
         p.roughing = *s == "compound" ? PlanningOptions::Roughing::Compound
