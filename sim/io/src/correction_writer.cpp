@@ -190,11 +190,11 @@ std::vector<SheetPart> correctionSheet(const Scene& plan, const Measurements& m,
                         formatLength(ps.toMm, u);
             rest.lines.push_back(line + ".");
         }
-        if (const Feature* cone = plan.part.mainCone())
+        if (const Feature* drawn = plan.part.mainCone())
             rest.lines.push_back("Then stop the spindle and measure the finished cone (spindle "
                                  "stopped, tool backed out): Ø" +
-                                 L(cone->cone.gaugeDiameterMm) + " ± " + L(cone->toleranceMm) +
-                                 " at the gauge plane, " + L(cone->cone.gaugeZMm) +
+                                 L(drawn->cone.gaugeDiameterMm) + " ± " + L(drawn->toleranceMm) +
+                                 " at the gauge plane, " + L(drawn->cone.gaugeZMm) +
                                  " from the datum face.");
         for (const std::string& n : c.notes)
             rest.lines.push_back(n + ".");
