@@ -1,6 +1,7 @@
 #pragma once
-// The finishing pass of a simulated plan, private to the kernel's sources (kernel.cpp defines
-// them; the outside kernel and the inside kernel use them).
+// The finishing pass of a simulated plan, and the totals of its features' verdicts: private to
+// the kernel's sources (kernel.cpp defines them; the outside kernel and the inside kernel use
+// them).
 #include "swarf/sim/cut.h"
 #include "swarf/sim/scene.h"
 #include "swarf/sim/surface_roughness.h"
@@ -21,5 +22,9 @@ bool finishingRegion(const Scene& scene, const ExactSweep& sw, const std::vector
 /// coarse_finish finding above r/2 (common practice).
 void checkFinishingFeed(const Scene& scene, const ToolMove& move, const Roughness& rough,
                         std::vector<Finding>& findings);
+
+/// The result's verdict and largest left-on and overcut from its features (res.features): within
+/// tolerance when there are features and every one is.
+void totalFeatureVerdicts(CutResult& res);
 
 } // namespace swarf::detail

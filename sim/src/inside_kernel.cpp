@@ -175,12 +175,7 @@ CutResult simulateInside(const Scene& scene, const ProgressFn& progress) {
               [](const FeatureReport& a, const FeatureReport& b) { return a.feature < b.feature; });
     res.features = reports;
 
-    res.withinTolerance = !res.features.empty();
-    for (const FeatureReport& f : res.features) {
-        res.withinTolerance = res.withinTolerance && f.withinTolerance;
-        res.maxLeftOnMm = std::max(res.maxLeftOnMm, f.maxLeftOnMm);
-        res.maxOvercutMm = std::max(res.maxOvercutMm, f.maxOvercutMm);
-    }
+    detail::totalFeatureVerdicts(res);
     if (const Feature* ic = scene.part.mainInsideCone()) {
         res.gaugeZMm = ic->cone.gaugeZMm;
         res.gaugeNominalDiameterMm = ic->cone.gaugeDiameterMm;

@@ -28,6 +28,15 @@ Profile profileUpTo(const Scene& scene, const std::vector<ToolMove>& moves, std:
 
 namespace detail {
 
+void totalFeatureVerdicts(CutResult& res) {
+    res.withinTolerance = !res.features.empty();
+    for (const FeatureReport& f : res.features) {
+        res.withinTolerance = res.withinTolerance && f.withinTolerance;
+        res.maxLeftOnMm = std::max(res.maxLeftOnMm, f.maxLeftOnMm);
+        res.maxOvercutMm = std::max(res.maxOvercutMm, f.maxOvercutMm);
+    }
+}
+
 // The move that leaves most of the main feature's final surface, and the longest run of
 // samples within the feature that it leaves, trimmed by two feeds and a nose radius (along the
 // move) at each end.
@@ -147,12 +156,7 @@ CutResult simulate(const Scene& scene, const ProgressFn& progress) {
     const std::vector<bool> mask = verdictMask(scene.part, res.asCut, outline.noseRadiusMm());
     res.features = compareFeatures(scene, res.asCut, res.deviationMm, res.crestDeviationMm, mask);
 
-    res.withinTolerance = !res.features.empty();
-    for (const FeatureReport& f : res.features) {
-        res.withinTolerance = res.withinTolerance && f.withinTolerance;
-        res.maxLeftOnMm = std::max(res.maxLeftOnMm, f.maxLeftOnMm);
-        res.maxOvercutMm = std::max(res.maxOvercutMm, f.maxOvercutMm);
-    }
+    detail::totalFeatureVerdicts(res);
     if (const Feature* c = scene.part.mainCone()) {
         res.gaugeZMm = c->cone.gaugeZMm;
         res.gaugeNominalDiameterMm = c->cone.gaugeDiameterMm;
