@@ -1,6 +1,7 @@
 // The kernel for inside work (inside_kernel.h): the outside kernel run on the twin x' = C − x.
 #include "swarf/sim/inside_kernel.h"
 
+#include "swarf/sim/between_passes.h"
 #include "swarf/sim/boring_findings.h"
 #include "swarf/sim/compare.h"
 #include "swarf/sim/findings.h"
@@ -234,6 +235,16 @@ CutResult simulateInside(const Scene& scene, const ProgressFn& progress) {
         res.findings.push_back(std::move(f));
     for (Finding& f : boringFindings(scene, outline, res.moves, res.boreStock, res.boreAfterPass))
         res.findings.push_back(std::move(f));
+    // The moves between passes (the bar comes off the wall toward the centre, machine.h), checked
+    // on the twin against the metal as it stands, as outside.
+    res.between = betweenPassMoves(scene);
+    std::vector<BetweenMove> twinBetween = res.between;
+    for (BetweenMove& b : twinBetween)
+        b.move = twinMove(b.move, c);
+    for (Finding& f : findCutsBetweenPasses(twin, outline, twinBetween, sw))
+        res.findings.push_back(std::move(f));
+    for (std::size_t i = 0; i < res.between.size(); ++i)
+        res.between[i].cutsMm = twinBetween[i].cutsMm;
     report(0.80);
 
     int fm = -1;

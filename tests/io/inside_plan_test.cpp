@@ -9,6 +9,7 @@
 
 #include <catch2/catch.hpp>
 
+#include <algorithm>
 #include <cmath>
 #include <string>
 
@@ -153,4 +154,28 @@ TEST_CASE("inside plans that cannot be made say why", "[plan][inside]") {
     CHECK_FALSE(p.planned);
     REQUIRE_FALSE(p.problems.empty());
     CHECK(p.problems.front().find("drill deeper") != std::string::npos);
+}
+
+TEST_CASE("a boring bar's moves between passes are checked against the metal", "[plan][inside]") {
+    // The collet seat's own plan: every move between passes stays off the metal.
+    Scene s = scene("bore-collet-seat-1-10.toml");
+    CutResult r = simulate(s);
+    REQUIRE_FALSE(r.between.empty());
+    for (const BetweenMove& m : r.between)
+        CHECK(m.cutsMm < 1e-6);
+    // A second pilot pass that starts 10 mm inside the bore: its reading is dialled there, so the
+    // insert is fed out into the wall between the passes (2 mm on diameter: 1 mm of radius).
+    REQUIRE(s.plan.passes[1].kind == PassKind::Saddle);
+    s.plan.passes[1].fromMm = 10.0;
+    s.plan.passes[1].crossMm = -3.0;
+    r = simulate(s);
+    bool found = false;
+    for (const Finding& f : r.findings)
+        found = found || (f.kind == FindingKind::CutBetweenPasses && f.pass == 1);
+    CHECK(found);
+    double deepest = 0;
+    for (const BetweenMove& m : r.between)
+        deepest = std::max(deepest, m.cutsMm);
+    // Derived: the bore stands at Ø21 after pass 1; the reading −3 puts the tip at Ø23.
+    CHECK(deepest == Approx(1.0).margin(0.01));
 }

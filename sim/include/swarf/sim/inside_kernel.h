@@ -16,9 +16,8 @@
 // `bore…` fields; features of both sides are reported; the gauge is the first inside cone's.
 // Findings: those of the moves (rubbing, depth of cut, air cut, jaw, compound travel, found on
 // the twin), left on and overcut per side, the finishing feed, and the boring findings
-// (boring_findings.h). The moves between passes are not made or checked for a boring bar yet
-// (`between` is empty): the machine model backs the cross-slide out away from the axis, which
-// inside is into the wall.
+// (boring_findings.h), and the moves between passes (`between`: the bar comes off the wall
+// toward the centre, machine.h) checked against the metal on the twin, as outside.
 #include "swarf/sim/kernel.h"
 
 namespace swarf {
