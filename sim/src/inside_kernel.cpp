@@ -33,16 +33,11 @@ Scene twinScene(const Scene& scene, double c) {
 }
 
 ToolMove twinMove(const ToolMove& m, double c) {
-    ToolMove t = m;
-    t.tipFrom.y() = c - m.tipFrom.y();
-    t.tipTo.y() = c - m.tipTo.y();
-    return t;
+    return insideTwinMove(m, c);
 }
 
-// x' on the twin back to a radius in the bore: x = C − x', R = √(x² + h²); no hole (x ≤ 0) is 0.
 double radiusFromTwin(double twinX, double c, double h) {
-    const double x = c - twinX;
-    return x > 1e-12 ? cutRadiusMm(x, h) : 0.0;
+    return boreRadiusFromTwin(twinX, c, h);
 }
 
 Profile fromTwin(const Profile& twin, double c, double h) {
@@ -64,20 +59,6 @@ Profile holeOnTwin(const Scene& scene, const Profile& grid, double c) {
         t.radiusMm[i] = inHole ? c - x : c;
     }
     return t;
-}
-
-// Samples of the bore that count toward the verdict: not within one nose radius of an inside
-// face (the bottom or a step keeps the nose's radius in its corner).
-std::vector<bool> insideMask(const Part& part, const Profile& grid, double noseRadiusMm) {
-    std::vector<bool> mask(grid.radiusMm.size(), true);
-    for (const Feature& f : part.features) {
-        if (f.side != Side::Inside || f.kind != FeatureKind::Face)
-            continue;
-        for (std::size_t i = 0; i < mask.size(); ++i)
-            if (std::abs(grid.zAt(i) - f.zStartMm) < noseRadiusMm)
-                mask[i] = false;
-    }
-    return mask;
 }
 
 // The hole's volume beyond the samples, to the jaws' face (a through hole), mm³.
@@ -113,6 +94,30 @@ Scene insideAsMain(const Scene& scene) {
 }
 
 } // namespace
+
+ToolMove insideTwinMove(const ToolMove& m, double c) {
+    ToolMove t = m;
+    t.tipFrom.y() = c - m.tipFrom.y();
+    t.tipTo.y() = c - m.tipTo.y();
+    return t;
+}
+
+double boreRadiusFromTwin(double twinX, double c, double h) {
+    const double x = c - twinX;
+    return x > 1e-12 ? cutRadiusMm(x, h) : 0.0;
+}
+
+std::vector<bool> insideVerdictMask(const Part& part, const Profile& grid, double noseRadiusMm) {
+    std::vector<bool> mask(grid.radiusMm.size(), true);
+    for (const Feature& f : part.features) {
+        if (f.side != Side::Inside || f.kind != FeatureKind::Face)
+            continue;
+        for (std::size_t i = 0; i < mask.size(); ++i)
+            if (std::abs(grid.zAt(i) - f.zStartMm) < noseRadiusMm)
+                mask[i] = false;
+    }
+    return mask;
+}
 
 double insideTwinOffsetMm(const Scene& scene) {
     return scene.stock.diameterMm + 10.0;
@@ -168,7 +173,7 @@ CutResult simulateInside(const Scene& scene, const ProgressFn& progress) {
     res.boreDeviationMm = normalDeviation(scene.part, res.boreNominal, res.bore, Side::Inside);
     res.boreCrestDeviationMm =
         normalDeviation(scene.part, res.boreNominal, res.boreCrest, Side::Inside);
-    const std::vector<bool> inMask = insideMask(scene.part, grid, outline.noseRadiusMm());
+    const std::vector<bool> inMask = insideVerdictMask(scene.part, grid, outline.noseRadiusMm());
     for (FeatureReport& r : compareFeatures(scene, res.bore, res.boreDeviationMm,
                                             res.boreCrestDeviationMm, inMask, Side::Inside))
         reports.push_back(r);

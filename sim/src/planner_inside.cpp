@@ -417,6 +417,16 @@ ConePlan planInsideCone(const Scene& scene) {
     }
     out.roughingPasses = n;
 
+    out.trialCut = scene.planning.trialCut;
+    if (out.trialCut)
+        step(out, PlanStep::Kind::Measure,
+             "Trial cut. Stop the spindle and measure the bore at " + L(out.checkZMm) +
+                 " from the datum face with an inside micrometer: it should be Ø" +
+                 L(out.checkDiameterRoughMm) + " (Ø" + L(out.checkDiameterFinishedMm) +
+                 " when finished). If it reads Ø d instead, add (d − " +
+                 L(out.checkDiameterRoughMm) + ")" + half +
+                 " to the finishing cross-slide reading below, to the nearest division (a bore "
+                 "that measures large takes a larger reading: less far out).");
     step(out, PlanStep::Kind::Measure,
          "Stop the spindle. Before finishing, measure the bore just inside the mouth (" +
              L(out.checkZMm) +

@@ -3,6 +3,7 @@
 #include "swarf/io/scene_reader.h"
 #include "swarf/io/setup_sheet.h"
 #include "swarf/sim/boring_checks.h"
+#include "swarf/sim/budget.h"
 #include "swarf/sim/kernel.h"
 #include "swarf/sim/machine.h"
 #include "swarf/sim/planner.h"
@@ -178,4 +179,45 @@ TEST_CASE("a boring bar's moves between passes are checked against the metal", "
         deepest = std::max(deepest, m.cutsMm);
     // Derived: the bore stands at Ø21 after pass 1; the reading −3 puts the tip at Ø23.
     CHECK(deepest == Approx(1.0).margin(0.01));
+}
+
+namespace {
+
+// The standard error of a sample sd from n draws (derived: the delta method on the variance).
+double sdError(double sigma, double excessKurtosis, int n) {
+    return sigma * std::sqrt((2.0 + excessKurtosis) / (4.0 * n));
+}
+
+BudgetOptions budgetOptions(int samples) {
+    BudgetOptions o;
+    o.samples = samples;
+    o.threads = 2;
+    o.shareSamples = samples;
+    return o;
+}
+
+} // namespace
+
+TEST_CASE("a bored socket's error budget: exact without uncertainty, the dial law with it",
+          "[budget][inside]") {
+    Scene s = scene("bore-collet-seat-1-10.toml");
+    REQUIRE(budgetRefusal(s).empty());
+    const CutResult r = simulate(s);
+    Budget b = runBudget(s, budgetOptions(2));
+    // The budget's part is the kernel's bore: the same gauge diameter, angle and verdict.
+    CHECK(b.exact.gaugeDiameterMm == Approx(r.gaugeAsCutDiameterMm).margin(1e-9));
+    CHECK(b.exact.halfAngleRad == Approx(r.features[0].asCutHalfAngleRad).margin(1e-6));
+    CHECK(b.exact.withinTolerance == r.features[0].withinTolerance);
+    CHECK(b.gaugeDiameterMm.sd == 0.0);
+
+    // Source: references R11 (JCGM 100: a rectangular distribution of half-width a has u =
+    // a/√3); the finishing reading of a diameter dial places the bore's gauge diameter one for
+    // one, inside as outside (derived).
+    const double e = 0.01;
+    s.uncertainty.crossReadingMm = e;
+    const int n = 2000;
+    b = runBudget(s, budgetOptions(n));
+    const double sigma = 2 * e / std::sqrt(12.0);
+    CHECK(std::abs(b.gaugeDiameterMm.sd - sigma) < 3 * sdError(sigma, -1.2, n));
+    CHECK(std::abs(b.gaugeDiameterMm.mean - b.exact.gaugeDiameterMm) < 3 * sigma / std::sqrt(n));
 }

@@ -44,9 +44,12 @@ int runBudgetCommand(const BudgetArgs& a) {
     if (a.seed < 0)
         badOption("--seed", a.seed, "expected a whole number 0 or more");
     Scene scene = io::readScene(a.scene); // bad input throws before anything is written
-    refuseInsideWork(scene, "budget");
+    const bool boring = scene.tool.kind == ToolKind::BoringBar;
+    if (!boring) // a boring bar budgets its inside cone
+        refuseInsideWork(scene, "budget");
     bool planned = false;
-    if (scene.part.mainCone() && scene.plan.passes.empty()) {
+    if ((boring ? scene.part.mainInsideCone() : scene.part.mainCone()) &&
+        scene.plan.passes.empty()) {
         // No passes of its own: budget the plan `swarf plan` would make.
         const ConePlan plan = planCone(scene);
         if (!plan.planned) {

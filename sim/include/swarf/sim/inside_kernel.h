@@ -30,4 +30,15 @@ CutResult simulateInside(const Scene& scene, const ProgressFn& progress = {});
 /// a boring tool reaches in the bar.
 double insideTwinOffsetMm(const Scene& scene);
 
+/// A move of the boring tool as the twin's turning tool makes it: tip x → C − x.
+ToolMove insideTwinMove(const ToolMove& m, double c);
+
+/// A radius x' on the twin back to the bore's radius: x = C − x', R = √(x² + h²) for a tip h
+/// off centre; 0 where x ≤ 0 (no hole).
+double boreRadiusFromTwin(double twinX, double c, double h);
+
+/// Samples of the bore that count toward the verdict: not within one nose radius of an inside
+/// face (the bottom or a step keeps the nose's radius in its corner).
+std::vector<bool> insideVerdictMask(const Part& part, const Profile& grid, double noseRadiusMm);
+
 } // namespace swarf
