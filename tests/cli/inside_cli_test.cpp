@@ -153,3 +153,16 @@ TEST_CASE("swarf budget of a bored socket", "[cli][inside][budget]") {
     CHECK(std::filesystem::exists(out / "budget.json"));
     std::filesystem::remove_all(out);
 }
+
+TEST_CASE("swarf correct refuses inside work, writing nothing", "[cli][inside]") {
+    const std::filesystem::path out =
+        std::filesystem::temp_directory_path() / ("inside_correct_" + std::to_string(getpid()));
+    std::filesystem::remove_all(out);
+    const Run r = runSwarf("correct '" + std::string(SWARF_SCENES_DIR) +
+                           "/bore-collet-seat-1-10.toml' --measured '" + SWARF_SCENES_DIR +
+                           "/measured/plan-1-20-after-pass-2.toml' --out '" + out.string() + "'");
+    INFO(r.out << r.err);
+    CHECK(r.exitCode == 2);
+    CHECK(r.err.find("swarf correct does not simulate") != std::string::npos);
+    CHECK_FALSE(std::filesystem::exists(out));
+}
