@@ -19,6 +19,9 @@ std::string measureBarText(const Scene& sc, double crossK, bool touchOff);
 void fillIndicator(ConePlan& out, const Scene& sc);
 std::string setCompoundText(const ConePlan& out, const Scene& sc);
 
+/// Appends a step in words (not a pass) to the plan's order of operations.
+void addStep(ConePlan& out, PlanStep::Kind kind, std::string text);
+
 /// Fills the checks of a plan (check plane and diameters, rolls, sine bar, roughness) for the
 /// feature being planned (planner_checks.cpp).
 void fillChecks(ConePlan& out, const Scene& sc, const Feature& f);

@@ -13,13 +13,6 @@
 namespace swarf {
 namespace {
 
-void step(ConePlan& out, PlanStep::Kind kind, std::string text) {
-    PlanStep s;
-    s.kind = kind;
-    s.text = std::move(text);
-    out.steps.push_back(std::move(s));
-}
-
 const Feature* coneToPlan(const Part& part, int& index) {
     const Feature* f = part.mainCone();
     if (!f) {
@@ -207,13 +200,14 @@ ConePlan planCone(const Scene& scene) {
     // on, when straight passes come first), the compound set, then the passes.
     detail::fillChecks(out, scene, f);
     detail::fillIndicator(out, scene);
-    step(out, PlanStep::Kind::Face, detail::faceText(scene));
-    step(out, PlanStep::Kind::CentreHeight, detail::centreHeightText(scene));
+    detail::addStep(out, PlanStep::Kind::Face, detail::faceText(scene));
+    detail::addStep(out, PlanStep::Kind::CentreHeight, detail::centreHeightText(scene));
     const bool stage0 =
         !cylinders.empty() || placing == PlanningOptions::Placing::ReferenceShoulder;
-    step(out, PlanStep::Kind::TouchOff, detail::measureBarText(scene, b.crossK(), stage0));
+    detail::addStep(out, PlanStep::Kind::TouchOff,
+                    detail::measureBarText(scene, b.crossK(), stage0));
     if (!stage0)
-        step(out, PlanStep::Kind::SetCompound, detail::setCompoundText(out, scene));
+        detail::addStep(out, PlanStep::Kind::SetCompound, detail::setCompoundText(out, scene));
 
     for (const Feature* c : cylinders) {
         const auto after = scene.part.nominalRadiusAt(c->zEndMm + 0.01);
@@ -227,34 +221,37 @@ ConePlan planCone(const Scene& scene) {
                        "turn the reference diameter Ø" + L(out.referenceDiameterMm) +
                            " up to a shoulder at " + L(out.referenceZMm),
                        0);
-        step(out, PlanStep::Kind::Measure,
-             "Stop the spindle. Measure the reference diameter with a micrometer: Ø" +
-                 L(out.referenceDiameterMm) + ". Check the shoulder stands " + L(out.referenceZMm) +
-                 " from the datum face.");
-        step(out, PlanStep::Kind::SetCompound, detail::setCompoundText(out, scene));
-        step(out, PlanStep::Kind::TouchOff,
-             "Work from the reference: touch the tool on the reference diameter and set the "
-             "cross-slide dial to 0 (if it measured Ø d instead, set the dial to read (" +
-                 L(out.referenceDiameterMm) + " − d)" + (b.crossK() < 1 ? "" : " / 2") +
-                 "); touch the shoulder face and zero the saddle dial.");
+        detail::addStep(out, PlanStep::Kind::Measure,
+                        "Stop the spindle. Measure the reference diameter with a micrometer: Ø" +
+                            L(out.referenceDiameterMm) + ". Check the shoulder stands " +
+                            L(out.referenceZMm) + " from the datum face.");
+        detail::addStep(out, PlanStep::Kind::SetCompound, detail::setCompoundText(out, scene));
+        detail::addStep(
+            out, PlanStep::Kind::TouchOff,
+            "Work from the reference: touch the tool on the reference diameter and set the "
+            "cross-slide dial to 0 (if it measured Ø d instead, set the dial to read (" +
+                L(out.referenceDiameterMm) + " − d)" + (b.crossK() < 1 ? "" : " / 2") +
+                "); touch the shoulder face and zero the saddle dial.");
     } else if (stage0) {
-        step(out, PlanStep::Kind::Measure,
-             "Stop the spindle. Measure the finished diameter with a micrometer: Ø" +
-                 L(out.referenceDiameterMm) + ".");
-        step(out, PlanStep::Kind::SetCompound, detail::setCompoundText(out, scene));
-        step(out, PlanStep::Kind::TouchOff,
-             "Work from the finished diameter: touch the tool on it and set the cross-slide dial "
-             "to 0 (if it measured Ø d instead, set the dial to read (" +
-                 L(out.referenceDiameterMm) + " − d)" + (b.crossK() < 1 ? "" : " / 2") +
-                 "); the saddle stays zeroed on the datum face.");
+        detail::addStep(out, PlanStep::Kind::Measure,
+                        "Stop the spindle. Measure the finished diameter with a micrometer: Ø" +
+                            L(out.referenceDiameterMm) + ".");
+        detail::addStep(out, PlanStep::Kind::SetCompound, detail::setCompoundText(out, scene));
+        detail::addStep(
+            out, PlanStep::Kind::TouchOff,
+            "Work from the finished diameter: touch the tool on it and set the cross-slide dial "
+            "to 0 (if it measured Ø d instead, set the dial to read (" +
+                L(out.referenceDiameterMm) + " − d)" + (b.crossK() < 1 ? "" : " / 2") +
+                "); the saddle stays zeroed on the datum face.");
     }
 
     if (!stage0)
-        step(out, PlanStep::Kind::TouchOff,
-             "Touch off with the compound at 0: touch the tool on the turning bar and set the "
-             "cross-slide dial to 0 (or from the bar's measured diameter, as above); touch the "
-             "end face and zero the saddle dial. Approach every reading from below (wind back "
-             "past it, then forward to it).");
+        detail::addStep(
+            out, PlanStep::Kind::TouchOff,
+            "Touch off with the compound at 0: touch the tool on the turning bar and set the "
+            "cross-slide dial to 0 (or from the bar's measured diameter, as above); touch the "
+            "end face and zero the saddle dial. Approach every reading from below (wind back "
+            "past it, then forward to it).");
 
     // Roughing.
     const double allowance = scene.planning.finishAllowanceMm;
@@ -292,34 +289,38 @@ ConePlan planCone(const Scene& scene) {
     // Checks before the finishing pass, then the finish.
     out.trialCut = scene.planning.trialCut;
     if (out.trialCut)
-        step(out, PlanStep::Kind::Measure,
-             "Trial cut. Stop the spindle and measure the diameter at " + L(out.checkZMm) +
-                 " from the datum face with a micrometer: it should be Ø" +
-                 L(out.checkDiameterRoughMm) + " (Ø" + L(out.checkDiameterFinishedMm) +
-                 " when finished). If it reads Ø d instead, add (d − " +
-                 L(out.checkDiameterRoughMm) + ")" + (b.crossK() < 1 ? "" : " / 2") +
-                 " to every finishing cross-slide reading below, to the nearest division (a "
-                 "cone that measures large takes a larger reading: further in).");
+        detail::addStep(
+            out, PlanStep::Kind::Measure,
+            "Trial cut. Stop the spindle and measure the diameter at " + L(out.checkZMm) +
+                " from the datum face with a micrometer: it should be Ø" +
+                L(out.checkDiameterRoughMm) + " (Ø" + L(out.checkDiameterFinishedMm) +
+                " when finished). If it reads Ø d instead, add (d − " +
+                L(out.checkDiameterRoughMm) + ")" + (b.crossK() < 1 ? "" : " / 2") +
+                " to every finishing cross-slide reading below, to the nearest division (a "
+                "cone that measures large takes a larger reading: further in).");
     else
-        step(out, PlanStep::Kind::Measure,
-             "Stop the spindle. Before finishing, check the diameter at " + L(out.checkZMm) +
-                 " from the datum face: Ø" + L(out.checkDiameterRoughMm) + " now (Ø" +
-                 L(out.checkDiameterFinishedMm) + " when finished).");
-    step(out, PlanStep::Kind::Measure,
-         "With the spindle stopped, check the angle over two Ø" + L(out.rolls.rollDiameterMm) +
-             " rolls with their centres at " + L(out.rolls.z1Mm) + " and " + L(out.rolls.z2Mm) +
-             " from the datum face (" + L(out.rolls.height1Mm) + " and " + L(out.rolls.height2Mm) +
-             " from the cone's small end): the readings must differ by " +
-             L(out.rolls.reading2Mm - out.rolls.reading1Mm) + " (now " +
-             L(out.rolls.reading1Mm + out.rolls.roughExtraMm) + " and " +
-             L(out.rolls.reading2Mm + out.rolls.roughExtraMm) + "; finished " +
-             L(out.rolls.reading1Mm) + " and " + L(out.rolls.reading2Mm) +
-             "). If the difference is off, correct the compound's angle before finishing.");
+        detail::addStep(out, PlanStep::Kind::Measure,
+                        "Stop the spindle. Before finishing, check the diameter at " +
+                            L(out.checkZMm) + " from the datum face: Ø" +
+                            L(out.checkDiameterRoughMm) + " now (Ø" +
+                            L(out.checkDiameterFinishedMm) + " when finished).");
+    detail::addStep(
+        out, PlanStep::Kind::Measure,
+        "With the spindle stopped, check the angle over two Ø" + L(out.rolls.rollDiameterMm) +
+            " rolls with their centres at " + L(out.rolls.z1Mm) + " and " + L(out.rolls.z2Mm) +
+            " from the datum face (" + L(out.rolls.height1Mm) + " and " + L(out.rolls.height2Mm) +
+            " from the cone's small end): the readings must differ by " +
+            L(out.rolls.reading2Mm - out.rolls.reading1Mm) + " (now " +
+            L(out.rolls.reading1Mm + out.rolls.roughExtraMm) + " and " +
+            L(out.rolls.reading2Mm + out.rolls.roughExtraMm) + "; finished " +
+            L(out.rolls.reading1Mm) + " and " + L(out.rolls.reading2Mm) +
+            "). If the difference is off, correct the compound's angle before finishing.");
     b.compoundPass(0.0, true, "cone finishing pass (nose-radius offset applied)", 1, 1);
-    step(out, PlanStep::Kind::Measure,
-         "Stop the spindle. Measure the finished cone: Ø" + L(out.checkDiameterFinishedMm) +
-             " at " + L(out.checkZMm) + ", over the rolls " + L(out.rolls.reading1Mm) + " and " +
-             L(out.rolls.reading2Mm) + ".");
+    detail::addStep(out, PlanStep::Kind::Measure,
+                    "Stop the spindle. Measure the finished cone: Ø" +
+                        L(out.checkDiameterFinishedMm) + " at " + L(out.checkZMm) +
+                        ", over the rolls " + L(out.rolls.reading1Mm) + " and " +
+                        L(out.rolls.reading2Mm) + ".");
 
     if (!scene.stock.tailstockSupport && scene.stock.stickOutMm > 3.0 * stockD)
         out.cautions.push_back("the bar sticks out " + L(scene.stock.stickOutMm) +

@@ -2,11 +2,8 @@
 // cone with the compound: roughing passes parallel to it, then a finishing pass with the inside
 // nose-radius offset; the checks of a socket (plug gauge, inside micrometer at the mouth, blue).
 //
-// Geometry: the machine model is the outside's (machine.h, tip x = zeroD/2 − k·c − p·sin α), so a
-// reading that opens the bore is a smaller one. The insert cuts the bore as a turning tool cuts
-// the twin bar x' = C − x (inside_kernel.h): the nose-radius offset is the outside one for the
-// twin's slope, −g·tan θ, and it puts the imaginary tip outside the drawn line, toward the wall
-// (references R1, mirrored). A tip h off centre cuts radius √(x² + h²) inside too (references R7).
+// The passes themselves are built by BoreBuilder (planner_bore.h, with the geometry).
+#include "planner_bore.h"
 #include "planner_build.h"
 
 #include "swarf/sim/compound_sense.h"
@@ -14,176 +11,12 @@
 #include "swarf/sim/inside_work.h"
 #include "swarf/sim/machine.h"
 #include "swarf/sim/nose_offset.h"
-#include "swarf/sim/tool_outline.h"
 
 #include <algorithm>
 #include <cmath>
 
 namespace swarf {
 namespace {
-
-void step(ConePlan& out, PlanStep::Kind kind, std::string text) {
-    PlanStep s;
-    s.kind = kind;
-    s.text = std::move(text);
-    out.steps.push_back(std::move(s));
-}
-
-// The passes of one inside cone, in the scene's zero (setZero) and the stage's own numbers.
-class BoreBuilder {
-  public:
-    BoreBuilder(const Scene& sc, ConePlan& out, const Feature& f) : sc_(sc), out_(out), f_(f) {
-        const Cone& cone = f.cone;
-        th_ = cone.halfAngleRad;
-        g_ = cone.growthSign();
-        a_ = sc.setup.compoundAdvanceToward == Widens::TowardChuck ? 1.0 : -1.0;
-        k_ = sc.setup.crossDial == DialMode::Diameter ? 0.5 : 1.0;
-        r_ = sc.tool.noseRadiusMm;
-        pilotR_ = 0.5 * sc.stock.boreDiameterMm;
-        // The twin's outline (a turning tool on the mirrored bar): the offset for its slope.
-        Tool turning = sc.tool;
-        turning.kind = ToolKind::Turning;
-        const ToolOutline outline(turning);
-        const double m = -g_ * std::tan(th_);
-        const Eigen::Vector2d tip = outline.imaginaryTip();
-        const Eigen::Vector2d sup = outline.support(m);
-        noseOut_ = -((tip.y() - m * tip.x()) - (sup.y() - m * sup.x()));
-    }
-
-    void setZero(double zeroDiameterMm, double zeroZMm) {
-        zeroD_ = zeroDiameterMm;
-        zeroZ_ = zeroZMm;
-    }
-    double noseOutMm() const { return noseOut_; }
-    double crossK() const { return k_; }
-
-    double coneR(double z) const { return 0.5 * f_.cone.diameterAt(z); }
-    // The tip's x that cuts radius R with the tip h off centre: √(R² − h²).
-    double tipXFor(double radiusMm) const {
-        const double h = sc_.tool.tipHeightMm;
-        return std::sqrt(std::max(0.0, radiusMm * radiusMm - h * h));
-    }
-    double crossFor(double tipX) const { return (0.5 * zeroD_ - tipX) / k_; }
-    // Where the bore stands now at z (after the saddle passes), radius.
-    double currentR(double z) const {
-        double r = 0.5 * sc_.stock.boreDiameterMm;
-        for (const auto& [zEnd, radius] : opened_)
-            if (z <= zEnd + 1e-9)
-                r = std::max(r, radius);
-        return r;
-    }
-
-    // Saddle passes opening the bore to `radiusMm` from the free end to zEndMm: roughing steps of
-    // at most max_depth, the last at the finishing feed (it is measured). Stage 0 readings count
-    // from the first touch-off (stage0CrossOffsetMm), 1 from the references.
-    void boreCylinder(double radiusMm, double zEndMm, const std::string& what, int stage) {
-        const Slide& cross = sc_.setup.cross;
-        const Slide& saddle = sc_.setup.saddle;
-        const double from = currentR(zEndMm);
-        const double depth = std::max(0.0, radiusMm - from);
-        const int n =
-            std::max(1, static_cast<int>(std::ceil(depth / sc_.planning.maxDepthMm - 1e-9)));
-        const double div = saddle.mmPerDivision;
-        const double z0 = sc_.stock.freeEndZMm();
-        const double sFrom = std::floor((z0 - r_ - 1.0 - saddle.backlashMm - zeroZ_) / div) * div;
-        // To a shoulder or short of the hole's end: never past zEndMm.
-        const double sTo = std::floor((zEndMm - zeroZ_) / div + 1e-9) * div;
-        const double off = stage == 0 ? out_.stage0CrossOffsetMm : 0.0;
-        for (int i = 1; i <= n; ++i) {
-            const bool last = i == n;
-            Pass p;
-            p.kind = PassKind::Saddle;
-            // Snapped to a nanometre: the stage's offset must not leave 1e-15 in the file.
-            p.crossMm =
-                std::round(
-                    (roundToDivision(cross, crossFor(tipXFor(from + depth * i / n)) + off) - off) *
-                    1e9) /
-                1e9;
-            p.compoundMm = 0;
-            p.fromMm = sFrom;
-            p.toMm = sTo;
-            p.feedMmPerRev =
-                last ? sc_.planning.finishFeedMmPerRev : sc_.planning.roughFeedMmPerRev;
-            p.note = what + (n > 1 ? ", pass " + std::to_string(i) + " of " + std::to_string(n)
-                                   : std::string());
-            PassDisplay d;
-            d.stage = stage;
-            add(p, d);
-        }
-        opened_.emplace_back(zEndMm, radiusMm);
-    }
-
-    // The compound's one setting: the saddle reading and the tip's z range of every cone pass.
-    bool planSetting(double zMouthMm, double zDeepMm) {
-        const double cosT = std::cos(th_);
-        const double div = sc_.setup.saddle.mmPerDivision;
-        const double zStart = a_ > 0 ? zMouthMm : zDeepMm, zEnd = a_ > 0 ? zDeepMm : zMouthMm;
-        const double raw = (zStart - zeroZ_) / div;
-        saddleMm_ = (a_ > 0 ? std::floor(raw + 1e-9) : std::ceil(raw - 1e-9)) * div;
-        const double base = zeroZ_ + saddleMm_;
-        const Slide& comp = sc_.setup.compound;
-        auto pAt = [&](double z) { return (z - base) / (a_ * cosT); };
-        pFrom_ =
-            std::max(0.0, std::floor(pAt(zStart) / comp.mmPerDivision + 1e-9) * comp.mmPerDivision);
-        pTo_ = std::ceil(pAt(zEnd) / comp.mmPerDivision - 1e-9) * comp.mmPerDivision;
-        out_.compoundRunMm = (zDeepMm - zMouthMm) / cosT;
-        return pTo_ <= comp.travelMm + 1e-9;
-    }
-
-    // The tip line for `leftMm` of metal left normal to the cone, at the setting's pivot.
-    double exactCross(double leftMm) const {
-        const double base = zeroZ_ + saddleMm_;
-        const double radius = coneR(base) + noseOut_ - leftMm / std::cos(th_);
-        return crossFor(tipXFor(radius));
-    }
-
-    void conePass(bool finish, const std::string& what, double readingMm) {
-        Pass p;
-        p.kind = PassKind::Compound;
-        p.saddleMm = saddleMm_;
-        p.crossMm = readingMm;
-        p.fromMm = pFrom_;
-        p.toMm = pTo_;
-        p.feedMmPerRev = finish ? sc_.planning.finishFeedMmPerRev : sc_.planning.roughFeedMmPerRev;
-        p.note = what;
-        PassDisplay d;
-        d.stage = 1;
-        d.coneFinish = finish;
-        d.coneRough = !finish;
-        add(p, d);
-    }
-
-    // The deepest metal between the bore as it stands and the cone, normal to the cone.
-    double thicknessMm() const {
-        double t = 0;
-        const int n = 400;
-        for (int i = 0; i <= n; ++i) {
-            const double z = f_.zStartMm + (f_.zEndMm - f_.zStartMm) * i / n;
-            t = std::max(t, (coneR(z) - currentR(z)) * std::cos(th_));
-        }
-        return t;
-    }
-
-    double saddleMm() const { return saddleMm_; }
-
-  private:
-    void add(const Pass& p, const PassDisplay& d) {
-        out_.scene.plan.passes.push_back(p);
-        out_.display.push_back(d);
-        PlanStep s;
-        s.kind = PlanStep::Kind::Pass;
-        s.pass = static_cast<int>(out_.scene.plan.passes.size()) - 1;
-        s.text = p.note;
-        out_.steps.push_back(s);
-    }
-
-    const Scene& sc_;
-    ConePlan& out_;
-    const Feature& f_;
-    double th_ = 0, g_ = -1, a_ = 1, k_ = 0.5, r_ = 0, pilotR_ = 0, noseOut_ = 0;
-    double zeroD_ = 0, zeroZ_ = 0, saddleMm_ = 0, pFrom_ = 0, pTo_ = 0;
-    std::vector<std::pair<double, double>> opened_; // (z end, radius) of each bored cylinder
-};
 
 int featureIndexOf(const Part& part, const Feature* f) {
     for (std::size_t i = 0; i < part.features.size(); ++i)
@@ -267,7 +100,7 @@ ConePlan planInsideCone(const Scene& scene) {
     if (fit.trailingEdge)
         out.cautions.push_back("the cone is cut with the trailing edge: " + fit.message);
 
-    BoreBuilder b(scene, out, f);
+    detail::BoreBuilder b(scene, out, f);
     out.noseOffsetRadialMm = b.noseOutMm();
     {
         const Widens twin =
@@ -346,19 +179,20 @@ ConePlan planInsideCone(const Scene& scene) {
 
     const double k = b.crossK();
     const std::string half = k < 1 ? "" : " / 2";
-    step(out, PlanStep::Kind::Face, detail::faceText(scene));
-    step(out, PlanStep::Kind::CentreHeight, detail::centreHeightText(scene));
-    step(out, PlanStep::Kind::TouchOff,
-         "Stop the spindle and measure the hole with an inside micrometer or a telescopic "
-         "gauge: Ø" +
-             L(st.boreDiameterMm) +
-             " nominal. With the compound at 0 and locked, touch the boring bar's tip on the "
-             "hole's wall and set the cross-slide dial to 0; if the hole measured Ø d instead, "
-             "set the dial to read (" +
-             L(st.boreDiameterMm) + " − d)" + half +
-             ". Touch the end face and zero the saddle dial. Inside, a smaller cross-slide "
-             "reading opens the bore: approach every reading outward, toward the wall (wind "
-             "in past it, then back out to it).");
+    detail::addStep(out, PlanStep::Kind::Face, detail::faceText(scene));
+    detail::addStep(out, PlanStep::Kind::CentreHeight, detail::centreHeightText(scene));
+    detail::addStep(
+        out, PlanStep::Kind::TouchOff,
+        "Stop the spindle and measure the hole with an inside micrometer or a telescopic "
+        "gauge: Ø" +
+            L(st.boreDiameterMm) +
+            " nominal. With the compound at 0 and locked, touch the boring bar's tip on the "
+            "hole's wall and set the cross-slide dial to 0; if the hole measured Ø d instead, "
+            "set the dial to read (" +
+            L(st.boreDiameterMm) + " − d)" + half +
+            ". Touch the end face and zero the saddle dial. Inside, a smaller cross-slide "
+            "reading opens the bore: approach every reading outward, toward the wall (wind "
+            "in past it, then back out to it).");
     if (pilotBored)
         b.boreCylinder(0.5 * pilotD, zDeep, "pilot bore to Ø" + L(pilotD), 0);
     else
@@ -368,26 +202,29 @@ ConePlan planInsideCone(const Scene& scene) {
     if (fromReference) {
         b.boreCylinder(0.5 * dRef, zRef,
                        "bore the reference Ø" + L(dRef) + " to a shoulder at " + L(zRef), 0);
-        step(out, PlanStep::Kind::Measure,
-             "Stop the spindle. Measure the reference bore with an inside micrometer or a "
-             "telescopic gauge: Ø" +
-                 L(dRef) + "; check its shoulder stands " + L(zRef) + " from the datum face.");
-        step(out, PlanStep::Kind::SetCompound, detail::setCompoundText(out, scene));
-        step(out, PlanStep::Kind::TouchOff,
-             "Work from the reference: touch the tip on the reference bore and set the "
-             "cross-slide dial to 0 (if it measured Ø d instead, set it to read (" +
-                 L(dRef) + " − d)" + half +
-                 "); touch the shoulder with the insert and zero the saddle dial.");
+        detail::addStep(
+            out, PlanStep::Kind::Measure,
+            "Stop the spindle. Measure the reference bore with an inside micrometer or a "
+            "telescopic gauge: Ø" +
+                L(dRef) + "; check its shoulder stands " + L(zRef) + " from the datum face.");
+        detail::addStep(out, PlanStep::Kind::SetCompound, detail::setCompoundText(out, scene));
+        detail::addStep(out, PlanStep::Kind::TouchOff,
+                        "Work from the reference: touch the tip on the reference bore and set the "
+                        "cross-slide dial to 0 (if it measured Ø d instead, set it to read (" +
+                            L(dRef) + " − d)" + half +
+                            "); touch the shoulder with the insert and zero the saddle dial.");
     } else {
-        step(out, PlanStep::Kind::Measure,
-             "Stop the spindle. Measure the pilot bore with an inside micrometer or a telescopic "
-             "gauge: Ø" +
-                 L(pilotD) + ".");
-        step(out, PlanStep::Kind::SetCompound, detail::setCompoundText(out, scene));
-        step(out, PlanStep::Kind::TouchOff,
-             "Work from the pilot bore: touch the tip on its wall and set the cross-slide dial "
-             "to 0 (if it measured Ø d instead, set it to read (" +
-                 L(pilotD) + " − d)" + half + "); the saddle stays zeroed on the datum face.");
+        detail::addStep(
+            out, PlanStep::Kind::Measure,
+            "Stop the spindle. Measure the pilot bore with an inside micrometer or a telescopic "
+            "gauge: Ø" +
+                L(pilotD) + ".");
+        detail::addStep(out, PlanStep::Kind::SetCompound, detail::setCompoundText(out, scene));
+        detail::addStep(
+            out, PlanStep::Kind::TouchOff,
+            "Work from the pilot bore: touch the tip on its wall and set the cross-slide dial "
+            "to 0 (if it measured Ø d instead, set it to read (" +
+                L(pilotD) + " − d)" + half + "); the saddle stays zeroed on the datum face.");
     }
 
     // The cone: one setting of the saddle, the tip from in front of the mouth to past the deep
@@ -419,29 +256,31 @@ ConePlan planInsideCone(const Scene& scene) {
 
     out.trialCut = scene.planning.trialCut;
     if (out.trialCut)
-        step(out, PlanStep::Kind::Measure,
-             "Trial cut. Stop the spindle and measure the bore at " + L(out.checkZMm) +
-                 " from the datum face with an inside micrometer: it should be Ø" +
-                 L(out.checkDiameterRoughMm) + " (Ø" + L(out.checkDiameterFinishedMm) +
-                 " when finished). If it reads Ø d instead, add (d − " +
-                 L(out.checkDiameterRoughMm) + ")" + half +
-                 " to the finishing cross-slide reading below, to the nearest division (a bore "
-                 "that measures large takes a larger reading: less far out).");
-    step(out, PlanStep::Kind::Measure,
-         "Stop the spindle. Before finishing, measure the bore just inside the mouth (" +
-             L(out.checkZMm) +
-             " from the datum face) with an inside micrometer or a telescopic "
-             "gauge: Ø" +
-             L(out.checkDiameterRoughMm) + " now (Ø" + L(out.checkDiameterFinishedMm) +
-             " when finished)." +
-             (out.bore.plugGauge
-                  ? " Try the plug gauge, blued thinly: its gauge line should stand about " +
-                        L(out.bore.roughStandOutMm) +
-                        " out from where it will sit when finished, and the blue should rub off "
-                        "along the whole length. Blue at the mouth only: the bore is shallower "
-                        "than the plug; deep only: steeper. Correct the compound's angle before "
-                        "finishing."
-                  : std::string()));
+        detail::addStep(
+            out, PlanStep::Kind::Measure,
+            "Trial cut. Stop the spindle and measure the bore at " + L(out.checkZMm) +
+                " from the datum face with an inside micrometer: it should be Ø" +
+                L(out.checkDiameterRoughMm) + " (Ø" + L(out.checkDiameterFinishedMm) +
+                " when finished). If it reads Ø d instead, add (d − " +
+                L(out.checkDiameterRoughMm) + ")" + half +
+                " to the finishing cross-slide reading below, to the nearest division (a bore "
+                "that measures large takes a larger reading: less far out).");
+    detail::addStep(
+        out, PlanStep::Kind::Measure,
+        "Stop the spindle. Before finishing, measure the bore just inside the mouth (" +
+            L(out.checkZMm) +
+            " from the datum face) with an inside micrometer or a telescopic "
+            "gauge: Ø" +
+            L(out.checkDiameterRoughMm) + " now (Ø" + L(out.checkDiameterFinishedMm) +
+            " when finished)." +
+            (out.bore.plugGauge
+                 ? " Try the plug gauge, blued thinly: its gauge line should stand about " +
+                       L(out.bore.roughStandOutMm) +
+                       " out from where it will sit when finished, and the blue should rub off "
+                       "along the whole length. Blue at the mouth only: the bore is shallower "
+                       "than the plug; deep only: steeper. Correct the compound's angle before "
+                       "finishing."
+                 : std::string()));
 
     // The finish: the nearest whole division, or half a division when a whole one would use
     // more than half the tolerance.
@@ -457,17 +296,18 @@ ConePlan planInsideCone(const Scene& scene) {
     out.finishPass = static_cast<int>(out.scene.plan.passes.size()) - 1;
     out.finishCrossMm = reading;
     out.finishPivotZMm = setup.zeroZMm + b.saddleMm();
-    step(out, PlanStep::Kind::Measure,
-         "Stop the spindle, back the bar out of the bore and clear the swarf. Measure the "
-         "finished bore: Ø" +
-             L(out.checkDiameterFinishedMm) + " at " + L(out.checkZMm) +
-             " with an inside micrometer" +
-             (out.bore.plugGauge
-                  ? "; the plug gauge's gauge line (Ø" + L(cone.gaugeDiameterMm) + ") at " +
-                        L(out.bore.gaugeLineZMm) + " from the datum face, within ±" +
-                        L(out.bore.bandMm) + ", with blue along the whole length"
-                  : std::string()) +
-             ".");
+    detail::addStep(
+        out, PlanStep::Kind::Measure,
+        "Stop the spindle, back the bar out of the bore and clear the swarf. Measure the "
+        "finished bore: Ø" +
+            L(out.checkDiameterFinishedMm) + " at " + L(out.checkZMm) +
+            " with an inside micrometer" +
+            (out.bore.plugGauge
+                 ? "; the plug gauge's gauge line (Ø" + L(cone.gaugeDiameterMm) + ") at " +
+                       L(out.bore.gaugeLineZMm) + " from the datum face, within ±" +
+                       L(out.bore.bandMm) + ", with blue along the whole length"
+                 : std::string()) +
+            ".");
 
     for (const std::string& note : insideWorkNotes(scene))
         out.cautions.push_back(note);
@@ -500,10 +340,10 @@ ConePlan planInsideCone(const Scene& scene) {
         for (const BetweenMove& m : betweenPassMoves(out.scene)) {
             if (m.step != ReturnStep::BackOut || m.afterPass < 0)
                 continue;
-            const auto k = static_cast<std::size_t>(m.afterPass);
-            const double off = out.display[k].stage == 0 ? out.stage0CrossOffsetMm : 0.0;
+            const auto after = static_cast<std::size_t>(m.afterPass);
+            const double off = out.display[after].stage == 0 ? out.stage0CrossOffsetMm : 0.0;
             const double shown = std::ceil((m.move.crossTo + off) / div - 1e-9) * div;
-            out.scene.plan.passes[k].retractToMm = std::round((shown - off) * 1e9) / 1e9;
+            out.scene.plan.passes[after].retractToMm = std::round((shown - off) * 1e9) / 1e9;
         }
     }
     out.scene.expect = Expect{};

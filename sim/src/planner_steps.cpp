@@ -26,6 +26,13 @@ double handwheelTurnsPerMinute(const Setup& setup, const Pass& pass) {
 
 namespace detail {
 
+void addStep(ConePlan& out, PlanStep::Kind kind, std::string text) {
+    PlanStep s;
+    s.kind = kind;
+    s.text = std::move(text);
+    out.steps.push_back(std::move(s));
+}
+
 std::string faceText(const Scene& sc) {
     const double allowance = sc.stock.faceAllowanceMm;
     return std::string("Face the end to length first: it is the datum face every axial reading "
