@@ -103,10 +103,8 @@ ConePlan planInsideCone(const Scene& scene) {
     detail::BoreBuilder b(scene, out, f);
     out.noseOffsetRadialMm = b.noseOutMm();
     {
-        const Widens twin =
-            cone.widens == Widens::TowardChuck ? Widens::TowardTailstock : Widens::TowardChuck;
         const TipSide side = tool.hand == Hand::L ? TipSide::TailstockSide : TipSide::ChuckSide;
-        const NoseOffsets no = noseRadiusOffsets(tool.noseRadiusMm, th, twin, side);
+        const NoseOffsets no = insideNoseRadiusOffsets(tool.noseRadiusMm, th, cone.widens, side);
         out.noseNormalErrorMm = no.normalErrorMm;
         out.noseOffsetAxialMm = no.zShiftSign * no.dzMm;
     }

@@ -6,6 +6,7 @@
 #include "swarf/sim/budget.h"
 #include "swarf/sim/kernel.h"
 #include "swarf/sim/machine.h"
+#include "swarf/sim/nose_offset.h"
 #include "swarf/sim/planner.h"
 
 #include <catch2/catch.hpp>
@@ -220,4 +221,19 @@ TEST_CASE("a bored socket's error budget: exact without uncertainty, the dial la
     const double sigma = 2 * e / std::sqrt(12.0);
     CHECK(std::abs(b.gaugeDiameterMm.sd - sigma) < 3 * sdError(sigma, -1.2, n));
     CHECK(std::abs(b.gaugeDiameterMm.mean - b.exact.gaugeDiameterMm) < 3 * sigma / std::sqrt(n));
+}
+
+TEST_CASE("the inside plan's offset agrees with the inside closed forms", "[plan][inside]") {
+    const Scene s = scene("bore-collet-seat-1-10.toml");
+    const ConePlan plan = planCone(s);
+    REQUIRE(plan.planned);
+    const Feature& f = insideCone(s);
+    // The planner's offset comes from the insert's outline on the twin; the closed forms of
+    // nose_offset.h (references R1 mirrored) give the same radial shift and the metal a tip on
+    // the drawn line would leave.
+    const NoseOffsets no =
+        insideNoseRadiusOffsets(s.tool.noseRadiusMm, f.cone.halfAngleRad, f.cone.widens);
+    CHECK(no.leftOn);
+    CHECK(plan.noseOffsetRadialMm == Approx(no.dxRadiusMm).margin(1e-9));
+    CHECK(plan.noseNormalErrorMm == Approx(no.normalErrorMm).margin(1e-12));
 }
