@@ -74,12 +74,15 @@ TEST_CASE("a bored socket is drawn hollow: the bore in the inside deviation's co
     const viewer::DeviationScale sc = viewer::deviationScale(s, r);
     double most = -1e9, farFromBore = 0;
     for (const Eigen::Vector3d& p : bore) {
-        // Every point lies on the kernel's bore at its row (the rows are its samples).
-        farFromBore = std::max(farFromBore, std::fabs(p.y() - r.bore.radiusAt(p.x())));
+        // Every point lies on the kernel's bore at its row (the rows are its samples; VTK keeps
+        // the points in single precision).
+        const auto row = static_cast<std::size_t>(std::lround((p.x() - r.bore.z0Mm) / r.bore.dzMm));
+        REQUIRE(row < r.bore.radiusMm.size());
+        farFromBore = std::max(farFromBore, std::fabs(p.y() - r.bore.radiusMm[row]));
         if (!std::isnan(p.z()))
             most = std::max(most, p.z());
     }
-    CHECK(farFromBore < 1e-6);
+    CHECK(farFromBore < 1e-5);
     // The bore's colours: + left on (red), as much as the result's largest left on (the crests
     // counted, as result.json) and beyond the band.
     CHECK(most > sc.toDisplay(sc.bandMm));
