@@ -180,3 +180,40 @@ TEST_CASE("pictures of a bored socket show the bore's left-on in the warm colour
     CHECK(share[0] > 0.5);
     CHECK(share[1] < 0.05);
 }
+
+TEST_CASE("the close-up of a finished bore shows its feed marks, raised toward the axis",
+          "[viewer][bore]") {
+    app::ensureDisplay();
+    const Scene s = scene("bore-collet-seat-1-10.toml");
+    const CutResult r = simulate(s);
+    REQUIRE(r.rtUm > 0);
+    viewer::ViewerSession view(s, r, small());
+    view.pressKey("c");
+    REQUIRE(view.closeUpShown());
+    const viewer::CloseUp close = viewer::closeUpOf(s, r);
+    // The patch along its first column: each point's height off the swept bore, mm.
+    double lo = 0, hi = -1e9;
+    std::vector<double> off;
+    for (const Eigen::Vector2d& p : view.drawnSection()) {
+        off.push_back(p.y() - r.bore.radiusAt(p.x()));
+        lo = std::min(lo, off.back());
+        hi = std::max(hi, off.back());
+    }
+    REQUIRE(off.size() > 100);
+    // Nothing stands into the wall past the swept bore (single-precision points), and the crests
+    // stand inward the kernel's Rt times the stated relief (derived: the patch and the roughness
+    // come from one surface).
+    CHECK(hi < 1e-4);
+    CHECK(-lo == Approx(close.reliefFactor * r.rtUm / 1000.0).epsilon(0.15));
+    // One crest per feed of the finishing pass over the stretch (the scene's feed, 0.06 mm).
+    int crests = 0;
+    bool in = false;
+    for (double d : off) {
+        if (!in && d < 0.5 * lo)
+            ++crests;
+        in = d < 0.5 * lo;
+    }
+    const double expected = (close.zToMm - close.zFromMm) / close.feedMmPerRev;
+    CHECK(std::abs(crests - expected) <= 2);
+    CHECK(view.closeUpText().find("feed marks 0.060 mm apart") != std::string::npos);
+}

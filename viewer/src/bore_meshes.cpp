@@ -2,6 +2,7 @@
 #include "bore_meshes.h"
 
 #include "swarf/sim/boring_checks.h"
+#include "swarf/sim/compare.h"
 
 #include <vtkCellArray.h>
 #include <vtkFloatArray.h>
@@ -77,6 +78,88 @@ vtkSmartPointer<vtkPolyData> endRing(double zMm, double innerMm, double outerMm,
     pd->SetPoints(points);
     pd->SetPolys(polys);
     pd->GetPointData()->SetNormals(normals);
+    return pd;
+}
+
+vtkSmartPointer<vtkPolyData> boreMarkPatch(const BoreMarks& marks, const Profile& smooth,
+                                           const Part& part, double zFromMm, double zToMm,
+                                           std::size_t rows, double phi0Rad, double phiSpanRad,
+                                           double stepRad, double reliefFactor, double toDisplay) {
+    auto pd = vtkSmartPointer<vtkPolyData>::New();
+    if (marks.surface.empty() || rows < 2 || !(zToMm > zFromMm) || !(stepRad > 0) ||
+        smooth.radiusMm.empty())
+        return pd;
+    // The rows as a profile (evenly spaced), so that each column's deviation is compare.h's own.
+    Profile column;
+    column.z0Mm = zFromMm;
+    column.dzMm = (zToMm - zFromMm) / static_cast<double>(rows - 1);
+    column.radiusMm.assign(rows, 0.0);
+    std::vector<double> rowZ(rows);
+    for (std::size_t i = 0; i < rows; ++i)
+        rowZ[i] = column.zAt(i);
+    const int nc = std::max(2, static_cast<int>(std::lround(phiSpanRad / stepRad)) + 1);
+    std::vector<double> colPhi(static_cast<std::size_t>(nc));
+    for (int c = 0; c < nc; ++c) {
+        // Within one turn, increasing (SurfaceGrid's columns).
+        colPhi[static_cast<std::size_t>(c)] = phi0Rad + phiSpanRad * c / (nc - 1);
+    }
+    const double turns = std::floor(colPhi.front() / (2 * kPi));
+    for (double& phi : colPhi)
+        phi -= turns * 2 * kPi;
+    const SurfaceGrid map = marks.surface.grid(rowZ, colPhi);
+    const Profile drawn = nominalOnGrid(part, column, Side::Inside);
+    const auto nr = static_cast<vtkIdType>(map.nz);
+    auto points = vtkSmartPointer<vtkPoints>::New();
+    points->SetNumberOfPoints(nr * nc);
+    auto dev = vtkSmartPointer<vtkFloatArray>::New();
+    dev->SetName("deviation");
+    dev->SetNumberOfTuples(points->GetNumberOfPoints());
+    for (int c = 0; c < nc; ++c) {
+        for (std::size_t i = 0; i < rows; ++i)
+            column.radiusMm[i] = marks.boreRadius(map.at(static_cast<int>(i), c));
+        const std::vector<double> d = normalDeviation(part, drawn, column, Side::Inside);
+        const double phi = colPhi[static_cast<std::size_t>(c)];
+        for (std::size_t i = 0; i < rows; ++i) {
+            const double base = smooth.radiusAt(rowZ[i]);
+            const double shown = base + reliefFactor * (column.radiusMm[i] - base);
+            const vtkIdType id = static_cast<vtkIdType>(i) * nc + c;
+            points->SetPoint(id, rowZ[i], shown * std::cos(phi), shown * std::sin(phi));
+            dev->SetValue(id, static_cast<float>(d[i] * toDisplay));
+        }
+    }
+    auto polys = vtkSmartPointer<vtkCellArray>::New();
+    for (vtkIdType i = 0; i + 1 < nr; ++i)
+        for (int c = 0; c + 1 < nc; ++c) {
+            const vtkIdType a = i * nc + c, b = a + 1;
+            const vtkIdType quad[4] = {a, a + nc, b + nc, b}; // facing the axis
+            polys->InsertNextCell(4, quad);
+        }
+    // Normals from the grid, toward the axis: the axial difference crossed with the
+    // circumferential one.
+    auto normals = vtkSmartPointer<vtkFloatArray>::New();
+    normals->SetNumberOfComponents(3);
+    normals->SetNumberOfTuples(points->GetNumberOfPoints());
+    for (vtkIdType i = 0; i < nr; ++i)
+        for (int c = 0; c < nc; ++c) {
+            double p0[3], p1[3], q0[3], q1[3];
+            points->GetPoint((i > 0 ? i - 1 : i) * nc + c, p0);
+            points->GetPoint((i + 1 < nr ? i + 1 : i) * nc + c, p1);
+            points->GetPoint(i * nc + (c > 0 ? c - 1 : c), q0);
+            points->GetPoint(i * nc + (c + 1 < nc ? c + 1 : c), q1);
+            const double a[3] = {p1[0] - p0[0], p1[1] - p0[1], p1[2] - p0[2]};
+            const double b[3] = {q1[0] - q0[0], q1[1] - q0[1], q1[2] - q0[2]};
+            double n[3] = {a[1] * b[2] - a[2] * b[1], a[2] * b[0] - a[0] * b[2],
+                           a[0] * b[1] - a[1] * b[0]};
+            const double len = std::sqrt(n[0] * n[0] + n[1] * n[1] + n[2] * n[2]);
+            if (len > 0)
+                for (double& v : n)
+                    v /= len;
+            normals->SetTuple(i * nc + c, n);
+        }
+    pd->SetPoints(points);
+    pd->SetPolys(polys);
+    pd->GetPointData()->SetNormals(normals);
+    pd->GetPointData()->SetScalars(dev);
     return pd;
 }
 

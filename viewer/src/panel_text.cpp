@@ -97,10 +97,11 @@ std::string closeUpPanelText(const Scene& scene, const CutResult& result, const 
                     formatLength(close.zFromMm, u), formatLength(close.zToMm, u));
     const bool marks = moment.finished && !result.surface.empty() && result.rtUm > 0;
     if (result.bored && moment.finished && result.rtUm > 0)
-        // The kernel measures the bore's marks; the viewer draws the bore without them.
-        s += fmt::format("\nThe bore's far wall, exact as swept; its feed marks, {} apart, {} high "
-                         "(Rt), are not drawn inside yet; colours are true to scale",
-                         formatLength(close.feedMmPerRev, u), resultFigures(scene, result).rt);
+        s += fmt::format(
+            "\nThe bore's far wall: feed marks {} apart, {} high (Rt), drawn {:g} times "
+            "as high; colours are true to scale",
+            formatLength(close.feedMmPerRev, u), resultFigures(scene, result).rt,
+            close.reliefFactor);
     else if (result.bored && moment.finished)
         s += "\nThe bore's far wall, exact as swept";
     else if (marks)

@@ -2,7 +2,7 @@
 // from the as-cut profile and its bore from the as-cut bore, each coloured by its own deviation
 // on the one colour scale (+ metal left on, inside as outside: within the drawn bore), the end
 // faces as rings, the cut-away faces through the wall; in the close-up, a stretch of the bore's
-// far wall, seen through the near half.
+// far wall, seen through the near half, with its feed marks raised at the finished part.
 #include "bore_meshes.h"
 #include "meshes.h"
 #include "part_scene_impl.h"
@@ -47,6 +47,14 @@ vtkSmartPointer<vtkPolyData> PartScene::Impl::boredSurface(const std::vector<dou
                 std::clamp(std::round((z - p.z0Mm) / p.dzMm), 0.0, static_cast<double>(n - 1)));
         };
         boreMapper->SetInputData(empty());
+        const double phi0 = closeBoreCentreRad() - 0.5 * kPi;
+        if (moment.finished && result.rtUm > 0) {
+            // The finished stretch with its feed marks raised, as outside.
+            if (!boreMarks)
+                boreMarks = std::make_unique<BoreMarks>(boreFeedMarks(scene));
+            return boreMarkPatch(*boreMarks, result.bore, scene.part, close.zFromMm, close.zToMm,
+                                 kCloseRows, phi0, kPi, kCloseFineStep, close.reliefFactor, toDisp);
+        }
         const auto rows = pickRows(index(close.zFromMm), index(close.zToMm), kCloseRows);
         return revolve(b, rows, &boreDev, kCloseColumns / 2, closeBoreCentreRad() - 0.5 * kPi, kPi,
                        true);

@@ -10,6 +10,7 @@
 // once; the section and chart get min/max-decimated lines.
 #include "part_scene.h"
 #include "plots.h"
+#include "swarf/sim/inside_kernel.h"
 #include "swarf/sim/twin_difference.h"
 
 #include <vtkActor.h>
@@ -87,6 +88,8 @@ struct PartScene::Impl {
     // Inside work: the bore's wall (coloured as the part) and the boring bar's shank.
     vtkSmartPointer<vtkPolyDataMapper> boreMapper, barMapper;
     vtkSmartPointer<vtkActor> boreActor, barActor;
+    // The bore's feed marks for the close-up: swept again the first time it shows them.
+    std::unique_ptr<BoreMarks> boreMarks;
     // The twin (key w): its scene and result, the difference, its finished deviation line along
     // the main cone (worked out once), and its ghost.
     struct Twin {

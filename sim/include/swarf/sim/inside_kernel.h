@@ -31,4 +31,20 @@ CutResult simulateInside(const Scene& scene, const ProgressFn& progress = {});
 /// a boring tool reaches in the bar.
 double insideTwinOffsetMm(const Scene& scene);
 
+/// The bore's feed marks, for pictures: the feed-mark surface (feed_marks.h) that simulateInside
+/// builds on the twin and does not keep in its result. Its radii are the twin's x′; boreRadius()
+/// turns one back into a radius of the bore.
+struct BoreMarks {
+    FeedMarkSurface surface; ///< on the twin: R′(z, φ) = x′
+    double twinOffsetMm = 0; ///< C
+    double tipHeightMm = 0;  ///< h
+    /// The bore's radius for a twin radius x′, mm: √((C − x′)² + h²); 0 where C − x′ ≤ 0 (solid).
+    double boreRadius(double twinRadiusMm) const;
+};
+
+/// The bore's feed marks of a scene cut with a boring bar (precondition as simulateInside): the
+/// twin swept again, as long as simulate() takes; the window and the pictures ask for it once,
+/// for the close-up of a finished bore.
+BoreMarks boreFeedMarks(const Scene& scene);
+
 } // namespace swarf
