@@ -123,6 +123,30 @@ double insideTwinOffsetMm(const Scene& scene) {
     return scene.stock.diameterMm + 10.0;
 }
 
+double BoreMarks::boreRadius(double twinRadiusMm) const {
+    return radiusFromTwin(twinRadiusMm, twinOffsetMm, tipHeightMm);
+}
+
+BoreMarks boreFeedMarks(const Scene& scene) {
+    BoreMarks marks;
+    marks.twinOffsetMm = insideTwinOffsetMm(scene);
+    marks.tipHeightMm = scene.tool.tipHeightMm;
+    const double c = marks.twinOffsetMm;
+    const ToolOutline outline(scene.tool);
+    const std::vector<ToolMove> moves = planMoves(scene);
+    const Scene twin = twinScene(scene, c);
+    std::vector<ToolMove> twinMoves;
+    twinMoves.reserve(moves.size());
+    for (const ToolMove& m : moves)
+        twinMoves.push_back(twinMove(m, c));
+    // As simulateInside: the same grid, the same start, the same sweep.
+    const Profile start = holeOnTwin(scene, sampleGrid(scene, outline, moves), c);
+    const ExactSweep sw =
+        sweepExactFrom(twin, outline, twinMoves, twinMoves.size(), 1.0, true, start);
+    marks.surface = FeedMarkSurface::build(twin, outline, twinMoves, sw);
+    return marks;
+}
+
 CutResult simulateInside(const Scene& scene, const ProgressFn& progress) {
     auto report = [&](double f) {
         if (progress)

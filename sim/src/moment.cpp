@@ -1,6 +1,7 @@
 // One moment of the plan (see moment.h).
 #include "swarf/sim/moment.h"
 
+#include "swarf/sim/bore_sweep.h"
 #include "swarf/sim/compare.h"
 #include "swarf/sim/kernel.h"
 
@@ -36,6 +37,28 @@ double moveLength(const ToolMove& m) {
 
 double lerp(double a, double b, double t) {
     return a + (b - a) * t;
+}
+
+// The bore at a moment of a bored result: whole passes from the kernel, part of a pass swept
+// again (boredProfile) with the first `count` moves, the last of them `fraction` of the way.
+Profile boreNow(const Scene& scene, const CutResult& result, const MomentView& v, bool partial,
+                std::size_t count, double fraction) {
+    auto after = [&](int k) -> const Profile& {
+        if (k < 0)
+            return result.boreStock;
+        if (static_cast<std::size_t>(k) < result.boreAfterPass.size())
+            return result.boreAfterPass[static_cast<std::size_t>(k)];
+        return result.bore;
+    };
+    if (v.finished && !result.bore.radiusMm.empty())
+        return result.bore;
+    if (!partial)
+        return v.passFraction >= 1 ? after(v.pass) : after(v.pass - 1);
+    std::vector<ToolMove> moves(result.moves.begin(),
+                                result.moves.begin() + static_cast<std::ptrdiff_t>(count));
+    ToolMove& last = moves.back();
+    last.tipTo = last.tipFrom + (last.tipTo - last.tipFrom) * fraction;
+    return boredProfile(scene, ToolOutline(scene.tool), moves, result.boreStock);
 }
 
 } // namespace
@@ -82,6 +105,9 @@ MomentView describeMoment(const Scene& scene, const CutResult& result, double po
     };
 
     const std::vector<std::size_t> mine = movesOfPass(result, v.pass);
+    bool partial = false; // part of a pass: the first cutCount moves, the last cutFraction along
+    std::size_t cutCount = 0;
+    double cutFraction = 1.0;
     if (v.pass < 0) {
         v.profile = result.stock;
     } else if (mine.empty()) {
@@ -112,10 +138,14 @@ MomentView describeMoment(const Scene& scene, const CutResult& result, double po
         v.crossMm = lerp(m.crossFrom, m.crossTo, local);
         v.compoundMm = lerp(m.compoundFrom, m.compoundTo, local);
         v.saddleMm = lerp(m.saddleFrom, m.saddleTo, local);
-        if (v.passFraction >= 1)
+        // A boring bar leaves the outside as the bar is (inside_kernel.h): the bore moves.
+        if (v.passFraction >= 1 || result.bored)
             v.profile = afterPass(v.pass);
         else
             v.profile = profileUpTo(scene, result.moves, k + 1, local);
+        partial = v.passFraction < 1;
+        cutCount = k + 1;
+        cutFraction = local;
     }
 
     if (v.finished && !result.asCut.radiusMm.empty())
@@ -127,6 +157,15 @@ MomentView describeMoment(const Scene& scene, const CutResult& result, double po
     else
         v.deviationMm =
             normalDeviation(scene.part, nominalOnGrid(scene.part, v.profile), v.profile);
+    if (result.bored) {
+        v.bore = boreNow(scene, result, v, partial, cutCount, cutFraction);
+        if (v.finished && result.boreDeviationMm.size() == v.bore.radiusMm.size())
+            v.boreDeviationMm =
+                markedDeviation(result.boreDeviationMm, result.boreCrestDeviationMm);
+        else if (result.boreNominal.radiusMm.size() == v.bore.radiusMm.size())
+            v.boreDeviationMm =
+                normalDeviation(scene.part, result.boreNominal, v.bore, Side::Inside);
+    }
     return v;
 }
 

@@ -1,7 +1,7 @@
 // Inside work from the command line (issue 14): `swarf check` reads and prints a bore, inside
-// features and a boring bar; `swarf plan` plans an inside cone with a boring bar; the commands
-// that do not simulate inside work yet refuse it with exit code 2, the message at its first piece,
-// and nothing written.
+// features and a boring bar; with a boring bar, `swarf run`, `view`, `plan` and `budget`
+// simulate, draw, plan and budget it; `swarf correct` does not handle inside work yet and
+// refuses it with exit code 2, the message at its first piece, and nothing written.
 #include "support/cli_run.h"
 
 #include <catch2/catch.hpp>
@@ -44,15 +44,19 @@ TEST_CASE("swarf check prints the hole, the inside cone and the boring bar", "[c
     CHECK(r.out.find("OK: the scene is valid.") != std::string::npos);
 }
 
-TEST_CASE("view refuses inside work, writing nothing", "[cli][inside]") {
-    const std::string scene = insideScene("collet-seat-1-10-bore.toml");
-    const std::filesystem::path out =
-        std::filesystem::temp_directory_path() / ("inside_cli_" + std::to_string(getpid()));
-    const Run v = runSwarf("view " + scene + " --screenshot '" + out.string() + ".png'");
+TEST_CASE("swarf view draws inside work: a screenshot of a bored socket", "[cli][inside][view]") {
+    const std::filesystem::path png = std::filesystem::temp_directory_path() /
+                                      ("inside_view_" + std::to_string(getpid()) + ".png");
+    std::filesystem::remove(png);
+    const Run v =
+        runSwarf("view '" + std::string(SWARF_SCENES_DIR) +
+                 "/bore-socket-no-offset.toml' --size 640x400 --camera cone --screenshot '" +
+                 png.string() + "'");
     INFO(v.out << v.err);
-    CHECK(v.exitCode == 2);
-    CHECK(v.err.find("swarf view does not simulate") != std::string::npos);
-    CHECK_FALSE(std::filesystem::exists(out.string() + ".png"));
+    CHECK(v.exitCode == 0);
+    CHECK(v.err.find("does not simulate") == std::string::npos);
+    CHECK(std::filesystem::file_size(png) > 10000);
+    std::filesystem::remove(png);
 }
 
 TEST_CASE("swarf run bores a socket: the bore in result.json and profile.csv, hollow STEP",
@@ -79,6 +83,29 @@ TEST_CASE("swarf run bores a socket: the bore in result.json and profile.csv, ho
                     0) == 0);
     CHECK(std::filesystem::exists(out / "as-cut.step"));
     CHECK(std::filesystem::exists(out / "left-on.step"));
+    std::filesystem::remove_all(out);
+}
+
+TEST_CASE("swarf run writes the pictures of a bored part, and --compare sets them side by side",
+          "[cli][inside][run][pictures]") {
+    const std::filesystem::path out =
+        std::filesystem::temp_directory_path() / ("inside_pictures_" + std::to_string(getpid()));
+    std::filesystem::remove_all(out);
+    const Run r =
+        runSwarf("run '" + std::string(SWARF_SCENES_DIR) + "/bore-socket-no-offset.toml' --out '" +
+                 out.string() + "' --no-step --compare '" + std::string(SWARF_SCENES_DIR) +
+                 "/bore-collet-seat-1-10.toml'");
+    INFO(r.out << r.err);
+    REQUIRE(r.exitCode == 0);
+    CHECK(r.out.find("pictures: none") == std::string::npos);
+    for (const char* side : {"scene", "other"})
+        for (const char* png : {"part.png", "cone.png", "section.png", "chart.png", "marks.png"}) {
+            INFO(side << "/" << png);
+            CHECK(std::filesystem::exists(out / side / png));
+        }
+    const std::string html = swarf::test::slurp(out / "compare.html");
+    CHECK(html.find("scene/cone.png") != std::string::npos);
+    CHECK(html.find("other/cone.png") != std::string::npos);
     std::filesystem::remove_all(out);
 }
 

@@ -95,8 +95,9 @@ TEST_CASE("the report and the window show result.json's figures, on every scene"
         INFO(panel);
         CHECK(contains(panel, "most left on " + e.leftOn + ", most overcut " + e.overcut));
         CHECK(contains(panel, "Rt " + e.rt + ", Ra " + e.ra));
-        // The close-up draws the outside's marks; the viewer does not draw a bore yet (issue 14).
-        if (r.rtUm > 0 && !r.bored) {
+        // The close-up's label gives the marks' height, outside and in a bore (where the marks
+        // are measured but the close-up draws the exact bore without them).
+        if (r.rtUm > 0) {
             view.pressKey("c");
             CHECK(contains(view.closeUpText(), e.rt + " high (Rt)"));
         }
@@ -107,8 +108,9 @@ TEST_CASE("the report and the window show result.json's figures, on every scene"
 
 TEST_CASE("the pictures carry the same figures", "[viewer][figures][snapshots]") {
     app::ensureDisplay();
-    // The demo, and a stepped pin (three features, a steep shoulder).
-    for (const char* name : {"fixture-arbor.toml", "finding-rubbing.toml"}) {
+    // The demo, a stepped pin (three features, a steep shoulder) and a bored socket.
+    for (const char* name :
+         {"fixture-arbor.toml", "finding-rubbing.toml", "bore-socket-no-offset.toml"}) {
         INFO(name);
         const Scene s = io::readScene(std::string(SWARF_SCENES_DIR) + "/" + name);
         const CutResult r = simulate(s);

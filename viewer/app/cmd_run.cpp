@@ -101,7 +101,7 @@ struct SceneRun {
     std::optional<geometry::RunSolids> solids;
     viewer::SnapshotReport pictures;
     std::vector<std::string> written;
-    std::string stepNote, referenceNote, picturesNote;
+    std::string stepNote, referenceNote;
 };
 
 // Simulates, and makes the solids (result.json reports their volumes): everything that can
@@ -144,12 +144,7 @@ void writeRun(SceneRun& run, const RunFlags& flags, const std::string& outDir) {
                         "distance from the kernel's profile {:.3f} µm",
                         rep.lineCount, rep.arcCount, rep.splineCount, rep.fitErrorMm * 1000.0);
     }
-    if (!flags.noPictures && result.bored) {
-        // The viewer draws the outside only: pictures of a bored part would show the bar.
-        run.written.push_back(io::writeReport(s, result, outDir, nullptr));
-        run.picturesNote = "pictures: none for a bored part yet (the viewer does not draw a "
-                           "bore); report.html has the figures and findings";
-    } else if (!flags.noPictures) {
+    if (!flags.noPictures) {
         ensureDisplay();
         run.pictures = viewer::renderSnapshots(s, result, outDir);
         for (const std::string& f : run.pictures.files())
@@ -182,8 +177,6 @@ void printRun(const SceneRun& run) {
         fmt::print("{}\n", run.stepNote);
     if (!run.referenceNote.empty())
         fmt::print("{}\n", run.referenceNote);
-    if (!run.picturesNote.empty())
-        fmt::print("{}\n", run.picturesNote);
 }
 
 } // namespace
@@ -246,10 +239,9 @@ void registerRun(CLI::App& app, int& exitCode) {
             writeRun(first, *flags, dirA);
             writeRun(*second, *flags, dirB);
             io::CompareSide a{&first.scene, &first.result, io::kCompareSceneFolder,
-                              flags->noPictures || first.result.bored ? nullptr : &first.pictures};
+                              flags->noPictures ? nullptr : &first.pictures};
             io::CompareSide b{&second->scene, &second->result, io::kCompareOtherFolder,
-                              flags->noPictures || second->result.bored ? nullptr
-                                                                        : &second->pictures};
+                              flags->noPictures ? nullptr : &second->pictures};
             written = first.written;
             written.insert(written.end(), second->written.begin(), second->written.end());
             written.push_back(io::writeCompareReport(a, b, *outDir));

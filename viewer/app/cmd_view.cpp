@@ -6,7 +6,6 @@
 #include "swarf/io/scene_reader.h"
 #include "swarf/sim/causes.h"
 #include "swarf/sim/error.h"
-#include "swarf/sim/inside_work.h"
 #include "swarf/sim/kernel.h"
 #include "swarf/sim/run_budget.h"
 #include "swarf/viewer/viewer.h"
@@ -91,7 +90,6 @@ void registerView(CLI::App& app, int& exitCode) {
         if (!args->camera.empty())
             args->options.startKeys = {cameras.at(args->camera)};
         const Scene scene = io::readScene(args->scene);
-        refuseInsideWork(scene, "view");
         // A slider position past the plan is said, with the range, before any work.
         const double passes = static_cast<double>(scene.plan.passes.size());
         const double at = args->options.startPosition;
@@ -107,7 +105,6 @@ void registerView(CLI::App& app, int& exitCode) {
         if (const auto twinFile = findTwin(args->scene, args->twin)) {
             twin.emplace();
             twin->scene = io::readScene(*twinFile);
-            refuseInsideWork(twin->scene, "view");
             // Both are held at once: the twin gets what the scene leaves.
             requireFits(twin->scene, {false, false, true},
                         availableMemoryBytes() - estimateRun(scene, {false, false, true}).bytes);
@@ -119,7 +116,10 @@ void registerView(CLI::App& app, int& exitCode) {
         args->options.noTwinNote = rule + ".";
         const auto result = std::make_shared<const CutResult>([&scene] {
             CutResult r = simulate(scene);
-            r.causes = findCauses(scene, r); // the panel names them at their pass
+            // The panel names them at their pass; measured on the outside cone (causes.h): none
+            // yet for a bored part, as `swarf run`.
+            if (!r.bored)
+                r.causes = findCauses(scene, r);
             return r;
         }());
         if (twin)

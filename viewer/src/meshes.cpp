@@ -42,7 +42,7 @@ double slopeAt(const Profile& p, std::size_t i) {
 
 vtkSmartPointer<vtkPolyData> revolve(const Profile& profile, const std::vector<std::size_t>& rows,
                                      const std::vector<double>* scalars, int nPhi, double phi0,
-                                     double phiSpan) {
+                                     double phiSpan, bool inward) {
     auto pd = vtkSmartPointer<vtkPolyData>::New();
     if (rows.size() < 2 || nPhi < 2)
         return pd;
@@ -70,7 +70,7 @@ vtkSmartPointer<vtkPolyData> revolve(const Profile& profile, const std::vector<s
         const double z = profile.zAt(i);
         const double r = std::max(0.0, profile.radiusMm[i]);
         const double s = slopeAt(profile, i);
-        const double k = 1 / std::sqrt(1 + s * s);
+        const double k = (inward ? -1.0 : 1.0) / std::sqrt(1 + s * s);
         const double d = scalars ? (*scalars)[i] : 0;
         for (int j = 0; j < cols; ++j, ++id) {
             points->SetPoint(id, z, r * cosPhi[j], r * sinPhi[j]);
@@ -86,9 +86,11 @@ vtkSmartPointer<vtkPolyData> revolve(const Profile& profile, const std::vector<s
             const int j1 = (j + 1) % cols;
             const vtkIdType a = static_cast<vtkIdType>(i) * cols + j;
             const vtkIdType b = static_cast<vtkIdType>(i) * cols + j1;
-            // Counter-clockwise seen from outside (z along, then φ): front faces outward.
-            const vtkIdType quad[4] = {a, b, b + cols, a + cols};
-            polys->InsertNextCell(4, quad);
+            // Counter-clockwise seen from outside (z along, then φ): front faces outward; the
+            // other way round for a bore.
+            const vtkIdType out[4] = {a, b, b + cols, a + cols};
+            const vtkIdType in[4] = {a, a + cols, b + cols, b};
+            polys->InsertNextCell(4, inward ? in : out);
         }
     }
     pd->SetPoints(points);

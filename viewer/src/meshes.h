@@ -16,10 +16,11 @@
 namespace swarf::viewer::detail {
 
 /// Surface of revolution of `profile` over the given rows, φ from phi0 over phiSpan (rad) in
-/// nPhi steps. Point scalars "deviation" (display units, NaN off the drawing) if given.
+/// nPhi steps. Point scalars "deviation" (display units, NaN off the drawing) if given. With
+/// `inward` the faces and normals point toward the axis (a bore's wall, seen from inside).
 vtkSmartPointer<vtkPolyData> revolve(const Profile& profile, const std::vector<std::size_t>& rows,
                                      const std::vector<double>* scalars, int nPhi, double phi0,
-                                     double phiSpan);
+                                     double phiSpan, bool inward = false);
 
 /// The finished surface with its feed marks over [zFromMm, zToMm], the whole way round: `rows`
 /// rows evenly spread in z; columns every fineStepRad within ±fineHalfWidthRad of

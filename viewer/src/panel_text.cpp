@@ -8,6 +8,7 @@
 
 #include <fmt/format.h>
 
+#include <algorithm>
 #include <cctype>
 #include <cmath>
 
@@ -74,8 +75,14 @@ std::string momentPanelText(const Scene& scene, const CutResult& result, const M
     }
     // Part-way: the swept profile now, counted as the verdict counts it (not within a nose
     // radius of an inside corner, where the nose leaves its fillet).
-    const DeviationExtremes now = deviationExtremes(
+    DeviationExtremes now = deviationExtremes(
         m.deviationMm, verdictMask(scene.part, m.profile, scene.tool.noseRadiusMm));
+    if (result.bored) {
+        // The bore too, as the section and chart show it.
+        const DeviationExtremes bore = deviationExtremes(m.boreDeviationMm);
+        now.leftOnMm = std::max(now.leftOnMm, bore.leftOnMm);
+        now.overcutMm = std::max(now.overcutMm, bore.overcutMm);
+    }
     s += fmt::format("Now: most left on {}, most overcut {} ({})",
                      formatSmallLength(now.leftOnMm, u), formatSmallLength(now.overcutMm, u),
                      bandWords(scene, scale));
@@ -85,10 +92,19 @@ std::string momentPanelText(const Scene& scene, const CutResult& result, const M
 std::string closeUpPanelText(const Scene& scene, const CutResult& result, const MomentView& moment,
                              const CloseUp& close) {
     const Units u = scene.units;
-    std::string s = fmt::format("Close-up at the gauge plane: z {} to {}",
-                                formatLength(close.zFromMm, u), formatLength(close.zToMm, u));
+    std::string s =
+        fmt::format("Close-up{} at the gauge plane: z {} to {}", result.bored ? " of the bore" : "",
+                    formatLength(close.zFromMm, u), formatLength(close.zToMm, u));
     const bool marks = moment.finished && !result.surface.empty() && result.rtUm > 0;
-    if (marks)
+    if (result.bored && moment.finished && result.rtUm > 0)
+        s += fmt::format(
+            "\nThe bore's far wall: feed marks {} apart, {} high (Rt), drawn {:g} times "
+            "as high; colours are true to scale",
+            formatLength(close.feedMmPerRev, u), resultFigures(scene, result).rt,
+            close.reliefFactor);
+    else if (result.bored && moment.finished)
+        s += "\nThe bore's far wall, exact as swept";
+    else if (marks)
         s += fmt::format("\nFeed marks {} apart, {} high (Rt), drawn {:g} times as high; "
                          "colours are true to scale",
                          formatLength(close.feedMmPerRev, u), resultFigures(scene, result).rt,

@@ -49,7 +49,9 @@ void PartScene::Impl::updatePart() {
     };
 
     vtkSmartPointer<vtkPolyData> surface;
-    if (closeUp && moment.finished && !result.surface.empty()) {
+    if (result.bored) {
+        surface = boredSurface(devDisplay);
+    } else if (closeUp && moment.finished && !result.surface.empty()) {
         // The finished stretch with its feed marks raised.
         surface = feedMarkPatch(result.surface, result.asCut, scene.part, close.zFromMm,
                                 close.zToMm, kCloseRows, kCloseLimb, kCloseFineHalfWidth,
@@ -81,6 +83,7 @@ void PartScene::Impl::updatePart() {
     partPolygons = static_cast<std::size_t>(surface->GetNumberOfPolys());
 
     insertActor->SetPosition(moment.tipZX.x(), moment.tipZX.y(), 0);
+    barActor->SetPosition(moment.tipZX.x(), moment.tipZX.y(), 0);
     pathMapper->SetInputData(toolPaths(result, scene.tool, moment.pass, moment.passFraction));
 }
 
@@ -119,6 +122,8 @@ void PartScene::Impl::applyLayers() {
     stockActor->SetVisibility(layers.stock && whole);
     jawsActor->SetVisibility(layers.jaws && whole);
     insertActor->SetVisibility(layers.insert && whole);
+    boreActor->SetVisibility(layers.part && whole && result.bored);
+    barActor->SetVisibility(layers.insert && whole && result.bored);
     pathActor->SetVisibility(layers.paths && whole);
     twinActor->SetVisibility(layers.twin && twin && whole);
     scalarBar->SetVisibility(layers.scalarBar);

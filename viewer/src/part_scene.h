@@ -91,6 +91,13 @@ class PartScene {
     /// The part mesh as handed to VTK, read back along its first meridian: (z, radius) of every
     /// drawn row, mm. For tests: the rendered part's profile.
     std::vector<Eigen::Vector2d> drawnSection() const;
+    /// A bored part's wall as handed to VTK: (z, radius, deviation in display units; NaN off
+    /// the inside drawing) of every point; empty for outside work and in the close-up (where the
+    /// part surface is the bore's stretch). For tests: the colours the bore is drawn in.
+    std::vector<Eigen::Vector3d> drawnBore() const;
+    /// World bounds (xmin, xmax, ymin, ymax, zmin, zmax; mm, X along the axis) of the boring
+    /// bar's shank as drawn now, or empty when there is none (outside work). Tests.
+    std::vector<double> barBounds() const;
     /// Number of polygons of the part surface as handed to VTK (benchmarks, tests).
     std::size_t partPolygons() const;
     /// The deviation line handed to the section now (tests).

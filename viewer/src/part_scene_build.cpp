@@ -1,5 +1,6 @@
 // Building the scene graph of a PartScene once: the colour map, the actors of the 3D view, the
 // drawing's ghost (see part_scene_impl.h).
+#include "bore_meshes.h"
 #include "meshes.h"
 #include "part_scene_impl.h"
 #include "swarf/viewer/keys.h"
@@ -98,6 +99,26 @@ void PartScene::Impl::buildMain() {
     insertActor->GetProperty()->SetColor(0.78, 0.62, 0.16);
     insertActor->GetProperty()->SetSpecular(0.4);
     insertMapper->ScalarVisibilityOff();
+    // A boring tool is the turning outline mirrored across its tip's z line (bore_sweep.h):
+    // its nose points out toward the wall.
+    if (scene.tool.kind == ToolKind::BoringBar)
+        insertActor->SetScale(1, -1, 1);
+
+    // Inside work: the bore's wall, coloured as the part, and the bar at its real size.
+    boreActor = makeActor(boreMapper);
+    boreMapper->SetLookupTable(lut);
+    boreMapper->UseLookupTableScalarRangeOn();
+    boreMapper->SetScalarModeToUsePointData();
+    boreMapper->ScalarVisibilityOn();
+    boreMapper->SetInputData(vtkSmartPointer<vtkPolyData>::New());
+    boreActor->GetProperty()->SetSpecular(0.25);
+    boreActor->GetProperty()->SetSpecularPower(30);
+    boreActor->GetProperty()->BackfaceCullingOff();
+    barActor = makeActor(barMapper);
+    barMapper->SetInputData(boringBarShank(scene.tool));
+    barActor->GetProperty()->SetColor(0.42, 0.45, 0.50);
+    barActor->GetProperty()->SetSpecular(0.3);
+    barMapper->ScalarVisibilityOff();
 
     pathActor = makeActor(pathMapper);
     vtkNew<vtkLookupTable> pathLut;
@@ -116,9 +137,9 @@ void PartScene::Impl::buildMain() {
     buildGhost();
     buildTwinActor();
 
-    for (auto* a :
-         {partActor.Get(), leftoverActor.Get(), coreActor.Get(), stockActor.Get(), jawsActor.Get(),
-          insertActor.Get(), pathActor.Get(), ghostActor.Get(), twinActor.Get()})
+    for (auto* a : {partActor.Get(), leftoverActor.Get(), coreActor.Get(), stockActor.Get(),
+                    jawsActor.Get(), insertActor.Get(), pathActor.Get(), boreActor.Get(),
+                    barActor.Get(), ghostActor.Get(), twinActor.Get()})
         main->AddActor(a);
 
     scalarBar = vtkSmartPointer<vtkScalarBarActor>::New();

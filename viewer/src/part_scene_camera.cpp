@@ -89,7 +89,15 @@ void PartScene::view(View v) {
         dir = kCloseDir;
         const double limb = kCloseLimb; // where the view grazes the surface
         const double z0 = d.close.zFromMm, z1 = d.close.zToMm, length = z1 - z0;
-        for (double z : {z0, z1}) {
+        // A bore: its far wall, face on, through the near half (part_scene_bore.cpp).
+        const double wall = closeBoreCentreRad();
+        for (double z : d.result.bored ? std::vector<double>{z0, z1} : std::vector<double>{}) {
+            const double rb = std::max(d.result.bore.radiusAt(z), 1e-3);
+            const double band = std::min(0.5, 0.5 * length / rb);
+            for (double a : {wall - band, wall, wall + band})
+                pts.emplace_back(z, rb * std::cos(a), rb * std::sin(a));
+        }
+        for (double z : d.result.bored ? std::vector<double>{} : std::vector<double>{z0, z1}) {
             const double rc = std::max(d.result.asCut.radiusAt(z), 1e-3);
             const double band = std::acos(std::clamp(1 - 0.25 * length / rc, -1.0, 1.0));
             for (double a : {limb, limb - band})
@@ -98,8 +106,10 @@ void PartScene::view(View v) {
             pts.emplace_back(z, sky * std::cos(limb), sky * std::sin(limb));
         }
     } else if (v == View::Cone) {
-        addCircle(pts, d.coneZ0, d.result.nominal.radiusAt(d.coneZ0 + 1e-6));
-        addCircle(pts, d.coneZ1, d.result.nominal.radiusAt(d.coneZ1 - 1e-6));
+        // A bored part's main cone is its bore's (trace.h): the wall round it, to the outside.
+        const Profile& nom = d.result.bored ? d.result.asCut : d.result.nominal;
+        addCircle(pts, d.coneZ0, nom.radiusAt(d.coneZ0 + 1e-6));
+        addCircle(pts, d.coneZ1, nom.radiusAt(d.coneZ1 - 1e-6));
         for (auto& p : pts)
             if (!p.allFinite())
                 p = Eigen::Vector3d(p.x(), 0, 0);

@@ -10,11 +10,13 @@
 // once; the section and chart get min/max-decimated lines.
 #include "part_scene.h"
 #include "plots.h"
+#include "swarf/sim/inside_kernel.h"
 #include "swarf/sim/twin_difference.h"
 
 #include <vtkActor.h>
 #include <vtkColorTransferFunction.h>
 #include <vtkLight.h>
+#include <vtkPolyData.h>
 #include <vtkPolyDataMapper.h>
 #include <vtkRenderer.h>
 #include <vtkScalarBarActor.h>
@@ -48,6 +50,9 @@ inline const double kCloseLimb = kPi - std::atan2(1.0, 0.35);
 // Points of the section's and chart's lines (min/max pairs): about two per pixel column.
 inline constexpr std::size_t kSectionPoints = 2400, kChartPoints = 1200;
 
+/// The middle of the bore's far wall the close-up looks at (φ, rad): square to kCloseDir.
+double closeBoreCentreRad();
+
 /// A new actor drawing through a new mapper (returned in `mapper`).
 vtkSmartPointer<vtkActor> makeActor(vtkSmartPointer<vtkPolyDataMapper>& mapper);
 
@@ -80,6 +85,11 @@ struct PartScene::Impl {
         stockMapper, jawsMapper, insertMapper, pathMapper;
     vtkSmartPointer<vtkActor> partActor, ghostActor, leftoverActor, coreActor, stockActor,
         jawsActor, insertActor, pathActor;
+    // Inside work: the bore's wall (coloured as the part) and the boring bar's shank.
+    vtkSmartPointer<vtkPolyDataMapper> boreMapper, barMapper;
+    vtkSmartPointer<vtkActor> boreActor, barActor;
+    // The bore's feed marks for the close-up: swept again the first time it shows them.
+    std::unique_ptr<BoreMarks> boreMarks;
     // The twin (key w): its scene and result, the difference, its finished deviation line along
     // the main cone (worked out once), and its ghost.
     struct Twin {
@@ -109,6 +119,10 @@ struct PartScene::Impl {
     const DeviationTrace* twinLine() const;
     void update();
     void updatePart();
+    /// A bored part at the moment (part_scene_bore.cpp): returns the outside's surface
+    /// (`outerDev`: its deviation per profile sample, display units) and sets the bore's wall,
+    /// the end rings and the cut-away faces; in the close-up, returns the bore's stretch.
+    vtkSmartPointer<vtkPolyData> boredSurface(const std::vector<double>& outerDev);
     void updatePlots();
     void applyLayers();
 };

@@ -125,6 +125,7 @@ void SectionView::show(const DeviationTrace& t, double magnification, const std:
     auto cutDev = vtkSmartPointer<vtkFloatArray>::New();
     cutDev->SetName("deviation");
     const double clampMm = 1.5 * scale_.limitMm;
+    const double inward = t.inside ? -1.0 : 1.0;
     bool offScale = false;
     std::vector<vtkIdType> ids;
     auto flush = [&] {
@@ -147,9 +148,11 @@ void SectionView::show(const DeviationTrace& t, double magnification, const std:
             }
             const double shown = std::clamp(twin->deviationMm[i], -clampMm, clampMm);
             offScale = offScale || shown != twin->deviationMm[i];
-            tids.push_back(twinPoints->InsertNextPoint(
-                twin->zMm[i], (unrolled ? 0.0 : twin->nominalMm[i]) + magnification * shown,
-                0.005));
+            tids.push_back(
+                twinPoints->InsertNextPoint(twin->zMm[i],
+                                            (unrolled ? 0.0 : twin->nominalMm[i]) +
+                                                (twin->inside ? -1 : 1) * magnification * shown,
+                                            0.005));
         }
     }
     auto twinPoly = vtkSmartPointer<vtkPolyData>::New();
@@ -165,7 +168,9 @@ void SectionView::show(const DeviationTrace& t, double magnification, const std:
         }
         const double shown = std::clamp(d, -clampMm, clampMm);
         offScale = offScale || shown != d;
-        ids.push_back(cutPoints->InsertNextPoint(t.zMm[i], base(i) + magnification * shown, 0.01));
+        // Inside, metal left on stands within the drawn bore: toward the axis.
+        ids.push_back(
+            cutPoints->InsertNextPoint(t.zMm[i], base(i) + inward * magnification * shown, 0.01));
         cutDev->InsertNextValue(static_cast<float>(scale_.toDisplay(d)));
     }
     flush();
@@ -181,8 +186,9 @@ void SectionView::show(const DeviationTrace& t, double magnification, const std:
     cutMapper_->SetInputData(cut);
     // Two short lines: the picture is half a window wide.
     title_->SetInput(
-        fmt::format("Section{}{}, deviation x{:g}{}\ngreen: drawing   yellow: tolerance +/-{}   "
+        fmt::format("{}{}{}, deviation x{:g}{}\ngreen: drawing   yellow: tolerance +/-{}   "
                     "coloured: as cut{}{}",
+                    t.inside ? "Section of the bore (axis below)" : "Section",
                     where.empty() ? "" : " " + where, unrolled ? " laid flat" : "", magnification,
                     t.feedMarks ? ", feed marks on the operator's side" : "",
                     formatSmallLength(scale_.bandMm, scale_.units), twin ? "   violet: twin" : "",
@@ -328,9 +334,9 @@ void DeviationChart::show(const DeviationTrace& t, const std::string& where, boo
         twinTable_->Modified();
         twinPlot_->SetVisible(twinRows > 0);
     }
-    chart_->SetTitle(
-        fmt::format("Deviation along the cone{} ({}): above 0 metal left on, below 0 overcut",
-                    where.empty() ? "" : " " + where, scale_.displayUnit()));
+    chart_->SetTitle(fmt::format(
+        "Deviation along the {}{} ({}): above 0 metal left on, below 0 overcut",
+        t.inside ? "bore" : "cone", where.empty() ? "" : " " + where, scale_.displayUnit()));
     chart_->RecalculateBounds();
     if (fitToTrace && hi >= lo) {
         const double pad = std::max(0.25 * (hi - lo), 1e-3 * l);

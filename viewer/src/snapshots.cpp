@@ -65,9 +65,10 @@ SnapshotReport renderSnapshots(const Scene& scene, const CutResult& result,
     shoot(part.main(), w, h, rep.part, [&] { part.view(detail::View::Iso); });
     rep.partLabel = part.panelText();
 
-    // The cone filling the picture: the deviation colours, nothing in front of them.
+    // The cone filling the picture: the deviation colours, nothing in front of them (a bored
+    // part keeps its cut-away: the bore's colours show through it).
     detail::Layers close = part.layers();
-    close.cutaway = false;
+    close.cutaway = result.bored;
     close.ghost = false;
     close.paths = false;
     close.stock = false;

@@ -181,6 +181,11 @@ void mainConeExtent(const Scene& scene, const CutResult& result, double& zFromMm
         zFromMm = scene.part.features.front().zStartMm;
         zToMm = scene.part.features.back().zEndMm;
     }
+    if (const Feature* inner = scene.part.mainInsideCone(); inner && result.bored) {
+        zFromMm = inner->zStartMm;
+        zToMm = inner->zEndMm;
+        return;
+    }
     for (const Feature& f : scene.part.features)
         if (f.kind == FeatureKind::Cone) {
             zFromMm = f.zStartMm;
@@ -206,14 +211,18 @@ DeviationTrace deviationTrace(const Scene& scene, const CutResult& result, const
             all.deviationMm.push_back(normalDeviationAt(scene.part, z, r));
         }
     } else {
-        const Profile& p = moment.profile;
+        // A bored part: the bore against the drawn bore.
+        all.inside = result.bored;
+        const Profile& p = all.inside ? moment.bore : moment.profile;
+        const Profile& drawn = all.inside ? result.boreNominal : result.nominal;
+        const std::vector<double>& dev = all.inside ? moment.boreDeviationMm : moment.deviationMm;
         for (std::size_t i = 0; i < p.radiusMm.size(); ++i) {
             const double z = p.zAt(i);
             if (z < zFromMm || z > zToMm)
                 continue;
             all.zMm.push_back(z);
-            all.nominalMm.push_back(result.nominal.radiusAt(z));
-            all.deviationMm.push_back(i < moment.deviationMm.size() ? moment.deviationMm[i] : kNaN);
+            all.nominalMm.push_back(drawn.radiusAt(z));
+            all.deviationMm.push_back(i < dev.size() ? dev[i] : kNaN);
         }
     }
     // A NaN nominal is a break too.
@@ -228,6 +237,7 @@ DeviationTrace decimateTrace(const DeviationTrace& all, std::size_t maxPoints) {
         return all;
     DeviationTrace out;
     out.feedMarks = all.feedMarks;
+    out.inside = all.inside;
     for (std::size_t i :
          minMaxSamples(all.zMm, all.deviationMm, std::max<std::size_t>(1, maxPoints / 2))) {
         out.zMm.push_back(all.zMm[i]);

@@ -345,6 +345,12 @@ void ViewerSession::saveSnapshot(const std::string& path) {
 std::vector<Eigen::Vector2d> ViewerSession::drawnSection() const {
     return impl_->part->drawnSection();
 }
+std::vector<Eigen::Vector3d> ViewerSession::drawnBore() const {
+    return impl_->part->drawnBore();
+}
+std::vector<double> ViewerSession::barBounds() const {
+    return impl_->part->barBounds();
+}
 
 std::string ViewerSession::panelText() const {
     return impl_->part->panelText();

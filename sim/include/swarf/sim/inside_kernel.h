@@ -41,4 +41,20 @@ double boreRadiusFromTwin(double twinX, double c, double h);
 /// face (the bottom or a step keeps the nose's radius in its corner).
 std::vector<bool> insideVerdictMask(const Part& part, const Profile& grid, double noseRadiusMm);
 
+/// The bore's feed marks, for pictures: the feed-mark surface (feed_marks.h) that simulateInside
+/// builds on the twin and does not keep in its result. Its radii are the twin's x′; boreRadius()
+/// turns one back into a radius of the bore.
+struct BoreMarks {
+    FeedMarkSurface surface; ///< on the twin: R′(z, φ) = x′
+    double twinOffsetMm = 0; ///< C
+    double tipHeightMm = 0;  ///< h
+    /// The bore's radius for a twin radius x′, mm: √((C − x′)² + h²); 0 where C − x′ ≤ 0 (solid).
+    double boreRadius(double twinRadiusMm) const;
+};
+
+/// The bore's feed marks of a scene cut with a boring bar (precondition as simulateInside): the
+/// twin swept again, as long as simulate() takes; the window and the pictures ask for it once,
+/// for the close-up of a finished bore.
+BoreMarks boreFeedMarks(const Scene& scene);
+
 } // namespace swarf

@@ -30,7 +30,13 @@ struct MomentView {
     /// feed marks' crests count where they stand out further than the valleys sink in
     /// (compare.h, markedDeviation): what the colours show.
     std::vector<double> deviationMm;
-    bool finished = false;       ///< true at position N: the part as the plan leaves it
+    bool finished = false; ///< true at position N: the part as the plan leaves it
+    /// Inside work (CutResult::bored): the bore at this moment (exact; 0 where the bar is solid)
+    /// and its signed deviation from the drawn bore per sample, mm (+ metal left on within the
+    /// drawn bore, − overcut into the wall; NaN off the inside drawing; at the finished part the
+    /// crests count as in `deviationMm`). Both empty for outside work.
+    Profile bore;
+    std::vector<double> boreDeviationMm;
     Eigen::Vector2d tipZX{0, 0}; ///< imaginary tip of the tool now (z, x), mm
     /// Dial readings now, mm of dial (interpolated along the current move).
     double crossMm = 0, compoundMm = 0, saddleMm = 0;
@@ -38,9 +44,9 @@ struct MomentView {
 
 /// Describes the moment at slider `position` (clamped to [0, N]). Whole positions use the
 /// kernel's afterPass profiles; positions inside a pass use profileUpTo(); position N uses
-/// the final asCut profile. The deviation is the kernel's (compare.h: normalDeviation). `result`
-/// must come from simulate() on the same scene (or be built with the same sampling: stock, nominal
-/// and afterPass on one grid).
+/// the final asCut profile (the bore likewise: boreAfterPass, boredProfile(), bore). The deviation
+/// is the kernel's (compare.h: normalDeviation). `result` must come from simulate() on the same
+/// scene (or be built with the same sampling: stock, nominal and afterPass on one grid).
 MomentView describeMoment(const Scene& scene, const CutResult& result, double position);
 
 /// Indices into result.moves of the moves that make pass `pass` (0-based), in order.

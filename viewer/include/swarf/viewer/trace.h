@@ -41,12 +41,16 @@ struct DeviationTrace {
     /// True if it follows the kernel's 3D surface along one meridian (φ = 0, the operator's
     /// side), feed marks included; false if it follows the moment's axisymmetric profile.
     bool feedMarks = false;
+    /// True if it follows a bore (a bored result): the drawing is the drawn bore and + left on
+    /// is metal within it, toward the axis.
+    bool inside = false;
 };
 
 /// The deviation line at a moment over [zFromMm, zToMm], with at most about `maxPoints` points
 /// (min/max decimated, see minMaxSamples; 0: every sample). At the finished part it follows the
 /// 3D surface (feed marks) along φ = 0 where the result has one, sampled at the rows that
 /// resolve the marks (FeedMarkSurface::markRows, at most 400 000), else the moment's profile.
+/// A bored result's line follows the moment's bore against the drawn bore (inside = true).
 DeviationTrace deviationTrace(const Scene& scene, const CutResult& result, const MomentView& moment,
                               double zFromMm, double zToMm, std::size_t maxPoints);
 
@@ -70,8 +74,8 @@ struct CloseUp {
 /// its gauge plane.
 CloseUp closeUpOf(const Scene& scene, const CutResult& result);
 
-/// The z extent of the main cone (first cone feature; else the whole drawing; else the result's
-/// grid), mm.
+/// The z extent of the main cone (a bored result: its first inside cone; else the first cone
+/// feature; else the whole drawing; else the result's grid), mm.
 void mainConeExtent(const Scene& scene, const CutResult& result, double& zFromMm, double& zToMm);
 
 } // namespace swarf::viewer

@@ -81,6 +81,13 @@ class ViewerSession {
     /// The part mesh handed to VTK, read back along one meridian: (z, radius) per drawn row,
     /// mm. Lets tests check what is drawn without looking at pixels.
     std::vector<Eigen::Vector2d> drawnSection() const;
+    /// A bored part's wall as drawn now: (z, radius, deviation in µm or thou, NaN off the inside
+    /// drawing) of every point handed to VTK; empty for outside work and in the close-up. Lets
+    /// tests check the bore's colours without pixels.
+    std::vector<Eigen::Vector3d> drawnBore() const;
+    /// The boring bar's shank as drawn now, world bounds (xmin, xmax, ymin, ymax, zmin, zmax; mm,
+    /// x along the axis, y toward the operator, z up); empty for a turning tool.
+    std::vector<double> barBounds() const;
     /// The panel's text now (top left of the 3D view): pass, readings and, at the finished part,
     /// the result's figures. For tests: the same text the pictures carry.
     std::string panelText() const;
