@@ -307,6 +307,12 @@ ConePlan planInsideCone(const Scene& scene) {
                  : std::string()) +
             ".");
 
+    for (const Feature& o : scene.part.features)
+        if (&o != &f && (o.kind == FeatureKind::Cone || o.kind == FeatureKind::Chamfer))
+            out.cautions.push_back(
+                "'" + o.name + "' is not planned here (one cone per plan" +
+                (o.side == Side::Outside ? ", and the boring bar cuts inside" : "") +
+                "): plan it on its own, or the simulation shows it as left on");
     for (const std::string& note : insideWorkNotes(scene))
         out.cautions.push_back(note);
     if (tool.tipHeightMm != 0)
