@@ -18,14 +18,8 @@ namespace swarf {
 
 namespace {
 
-// The cone a budget is of: the inside one for a boring bar (the cone it cuts), else the outside.
-const Feature* budgetCone(const Scene& scene) {
-    return scene.tool.kind == ToolKind::BoringBar ? scene.part.mainInsideCone()
-                                                  : scene.part.mainCone();
-}
-
 int mainConeIndex(const Scene& scene) {
-    const Feature* c = budgetCone(scene);
+    const Feature* c = scene.workedCone();
     return c ? static_cast<int>(c - scene.part.features.data()) : -1;
 }
 
@@ -173,7 +167,7 @@ Spread spreadOf(std::vector<double> v) {
 }
 
 std::string budgetRefusal(const Scene& scene) {
-    if (!budgetCone(scene))
+    if (!scene.workedCone())
         return scene.tool.kind == ToolKind::BoringBar
                    ? "the drawing has no inside cone for the boring bar: a budget is of a "
                      "cone's gauge diameter and half angle"

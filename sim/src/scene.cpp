@@ -116,6 +116,10 @@ const Feature* Part::mainCone() const {
     return nullptr;
 }
 
+const Feature* Scene::workedCone() const {
+    return tool.kind == ToolKind::BoringBar ? part.mainInsideCone() : part.mainCone();
+}
+
 const Feature* Part::mainInsideCone() const {
     for (const Feature& f : features)
         if (f.kind == FeatureKind::Cone && f.side == Side::Inside)

@@ -55,20 +55,16 @@ double DeviationScale::mapPosition(double deviationMm) const {
 DeviationScale deviationScale(const Scene& scene, const CutResult& result) {
     DeviationScale s;
     s.units = scene.units;
-    // The main cone: the first cone feature (as Part::mainCone defines it).
+    // The cone the tool cuts (Scene::workedCone: the bore's for a boring bar), else the first
+    // feature.
     double tolMm = 0;
     double halfAngle = 0;
-    bool found = false;
-    for (const Feature& f : scene.part.features) {
-        if (f.kind == FeatureKind::Cone) {
-            tolMm = f.toleranceMm;
-            halfAngle = f.cone.halfAngleRad;
-            found = true;
-            break;
-        }
-    }
-    if (!found && !scene.part.features.empty())
+    if (const Feature* f = scene.workedCone()) {
+        tolMm = f->toleranceMm;
+        halfAngle = f->cone.halfAngleRad;
+    } else if (!scene.part.features.empty()) {
         tolMm = scene.part.features.front().toleranceMm;
+    }
     // ± on diameter is ± half of it on radius; normal to a surface at α it is cos α of that.
     s.bandMm = tolMm > 0 ? 0.5 * tolMm * std::cos(halfAngle) : 0.01;
     // One fixed scale from the band, whatever the result: the same colour means the same

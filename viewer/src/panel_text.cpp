@@ -17,10 +17,11 @@ namespace swarf::viewer::detail {
 namespace {
 
 // The band the colours and figures are judged against, said as what it is: ± normal to the
-// surface, beside the drawing's own ± on diameter (the main cone's, else the first feature's).
+// surface, beside the drawing's own ± on diameter (the cone the tool cuts, else the first
+// feature's).
 std::string bandWords(const Scene& scene, const DeviationScale& scale) {
     const Units u = scene.units;
-    const Feature* f = scene.part.mainCone();
+    const Feature* f = scene.workedCone();
     if (!f && !scene.part.features.empty())
         f = &scene.part.features.front();
     std::string s = "band +/-" + formatSmallLength(scale.bandMm, u) + " normal to the surface";

@@ -314,6 +314,10 @@ struct Scene {
     /// Checks ranges and consistency, and the size of the plan (kMaxPasses, kMaxPathPoints);
     /// throws InputError naming the key and its location.
     void validate() const;
+
+    /// The cone this scene's tool cuts: the first inside cone for a boring bar
+    /// (Part::mainInsideCone), else the first outside one (Part::mainCone); null if none.
+    const Feature* workedCone() const;
 };
 
 } // namespace swarf
