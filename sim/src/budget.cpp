@@ -1,7 +1,9 @@
 // The error budget of a set-up: a Monte Carlo over its uncertainty (see budget.h).
 #include "swarf/sim/budget.h"
 
+#include "swarf/sim/bore_sweep.h"
 #include "swarf/sim/compare.h"
+#include "swarf/sim/inside_kernel.h"
 #include "swarf/sim/perturb.h"
 #include "swarf/sim/sweep.h"
 #include "swarf/sim/tool_outline.h"
@@ -156,6 +158,19 @@ PartOutcome partOutcome(const Scene& scene, int featureIndex) {
     const double last = std::floor((cone.zEndMm - z0) / asCut.dzMm + 1e-9);
     asCut.z0Mm = z0 + first * asCut.dzMm;
     const auto n = static_cast<std::size_t>(std::max(1.0, last - first + 1));
+    if (cone.side == Side::Inside) {
+        // A bored cone: the bore's sweep on the same samples (bore_sweep.h), against the drawn
+        // bore, metal left on being within it.
+        asCut.radiusMm.assign(n, 0.0);
+        const Profile bore = boredProfile(scene, outline, moves, asCut);
+        const Profile nominal = nominalOnGrid(scene.part, bore, Side::Inside);
+        const std::vector<double> dev = normalDeviation(scene.part, nominal, bore, Side::Inside);
+        const std::vector<bool> mask = insideVerdictMask(scene.part, bore, outline.noseRadiusMm());
+        for (const FeatureReport& r : compareFeatures(scene, bore, dev, {}, mask, Side::Inside))
+            if (r.feature == featureIndex)
+                return {r.asCutDiameterMm, r.asCutHalfAngleRad, r.withinTolerance};
+        return {};
+    }
     asCut.radiusMm.assign(n, 0.5 * scene.stock.diameterMm);
     for (const ToolMove& m : moves) {
         const MoveSweep sw = prepareMove(outline, m);

@@ -65,20 +65,6 @@ Profile holeOnTwin(const Scene& scene, const Profile& grid, double c) {
     return t;
 }
 
-// Samples of the bore that count toward the verdict: not within one nose radius of an inside
-// face (the bottom or a step keeps the nose's radius in its corner).
-std::vector<bool> insideMask(const Part& part, const Profile& grid, double noseRadiusMm) {
-    std::vector<bool> mask(grid.radiusMm.size(), true);
-    for (const Feature& f : part.features) {
-        if (f.side != Side::Inside || f.kind != FeatureKind::Face)
-            continue;
-        for (std::size_t i = 0; i < mask.size(); ++i)
-            if (std::abs(grid.zAt(i) - f.zStartMm) < noseRadiusMm)
-                mask[i] = false;
-    }
-    return mask;
-}
-
 // The hole's volume beyond the samples, to the jaws' face (a through hole), mm³.
 double holeBeyondSamplesMm3(const Scene& scene, double zLast) {
     const Stock& st = scene.stock;
@@ -112,6 +98,18 @@ Scene insideAsMain(const Scene& scene) {
 }
 
 } // namespace
+
+std::vector<bool> insideVerdictMask(const Part& part, const Profile& grid, double noseRadiusMm) {
+    std::vector<bool> mask(grid.radiusMm.size(), true);
+    for (const Feature& f : part.features) {
+        if (f.side != Side::Inside || f.kind != FeatureKind::Face)
+            continue;
+        for (std::size_t i = 0; i < mask.size(); ++i)
+            if (std::abs(grid.zAt(i) - f.zStartMm) < noseRadiusMm)
+                mask[i] = false;
+    }
+    return mask;
+}
 
 double insideTwinOffsetMm(const Scene& scene) {
     return scene.stock.diameterMm + 10.0;
@@ -167,7 +165,7 @@ CutResult simulateInside(const Scene& scene, const ProgressFn& progress) {
     res.boreDeviationMm = normalDeviation(scene.part, res.boreNominal, res.bore, Side::Inside);
     res.boreCrestDeviationMm =
         normalDeviation(scene.part, res.boreNominal, res.boreCrest, Side::Inside);
-    const std::vector<bool> inMask = insideMask(scene.part, grid, outline.noseRadiusMm());
+    const std::vector<bool> inMask = insideVerdictMask(scene.part, grid, outline.noseRadiusMm());
     for (FeatureReport& r : compareFeatures(scene, res.bore, res.boreDeviationMm,
                                             res.boreCrestDeviationMm, inMask, Side::Inside))
         reports.push_back(r);

@@ -86,7 +86,8 @@ std::string budgetRefusal(const Scene& scene);
 double budgetProfileStepMm(const Scene& scene);
 
 /// One part: the exact-profile kernel on `scene` (its sim.profileStepMm as given), and the cone
-/// feature `featureIndex` against the drawing.
+/// feature `featureIndex` against the drawing. An inside cone (a bore, cut with a boring bar) is
+/// taken from the bore's sweep (bore_sweep.h: boredProfile) against the drawn bore.
 PartOutcome partOutcome(const Scene& scene, int featureIndex);
 
 /// Runs the budget of `scene` (precondition: budgetRefusal(scene) is empty). `progress` is

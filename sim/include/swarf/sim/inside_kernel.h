@@ -31,4 +31,9 @@ CutResult simulateInside(const Scene& scene, const ProgressFn& progress = {});
 /// a boring tool reaches in the bar.
 double insideTwinOffsetMm(const Scene& scene);
 
+/// The samples of `grid` that count toward an inside feature's verdict: not within one nose
+/// radius of an inside face (the bottom of the bore or a step keeps the nose's radius in its
+/// corner).
+std::vector<bool> insideVerdictMask(const Part& part, const Profile& grid, double noseRadiusMm);
+
 } // namespace swarf
