@@ -6,6 +6,7 @@
 #include "swarf/sim/budget.h"
 #include "swarf/sim/cut.h"
 #include "swarf/sim/kernel.h"
+#include "swarf/sim/planner.h"
 #include "swarf/sim/units.h"
 
 #include <algorithm>
@@ -49,24 +50,47 @@ struct Removal {
     std::string what, fix;
 };
 
-// Which of the insert's straight edges the run found rubbing ("trailing" or "leading"), "" when
-// neither: the finding's own words (findings.cpp).
-std::string rubbingEdge(const CutResult& result) {
+// The insert's straight edge the run found rubbing: "trailing" or "leading" ("" when neither),
+// by the finding's own words (findings.cpp), and the steepest descent it was found on, rad.
+struct RubbingEdge {
     std::string edge;
+    double descentRad = 0;
+};
+
+RubbingEdge rubbingEdge(const CutResult& result) {
+    RubbingEdge trailing{"", 0}, leading{"", 0};
     for (const Finding& f : result.findings) {
         if (f.kind != FindingKind::Rubbing)
             continue;
-        if (f.message.rfind("the trailing edge", 0) == 0)
-            return "trailing";
-        if (f.message.rfind("the leading edge", 0) == 0)
-            edge = "leading";
+        const bool isTrailing = f.message.rfind("the trailing edge", 0) == 0;
+        RubbingEdge& e = isTrailing ? trailing : leading;
+        e.edge = isTrailing ? "trailing" : "leading";
+        if (std::isfinite(f.angleRad))
+            e.descentRad = std::max(e.descentRad, f.angleRad);
     }
-    return edge;
+    return trailing.edge.empty() ? leading : trailing;
+}
+
+// What to put in the holder instead: the first insert and holder suggestTools (planner.h) names
+// for the slope the edge rubbed on (outside; inside the run's slopes are the twin's).
+std::string edgeFix(const Scene& s, const RubbingEdge& e) {
+    std::string fix = "use an insert and holder whose " + e.edge + " edge clears the slope";
+    if (s.tool.kind == ToolKind::BoringBar || e.edge.empty())
+        return fix;
+    // A trailing edge rubs going in toward the chuck for a right-hand tool (a path that
+    // descends toward the chuck); a leading edge, or a left-hand tool, the other way.
+    const bool descendsTowardChuck = (e.edge == "trailing") == (s.tool.hand != Hand::L);
+    const double pathAngleRad = descendsTowardChuck ? -e.descentRad : e.descentRad;
+    const std::vector<std::string> tools = suggestTools(s.tool, pathAngleRad, 1);
+    if (!tools.empty())
+        fix += ", for example a " + tools.front().substr(0, tools.front().find(':'));
+    return fix;
 }
 
 std::vector<Removal> removals(const Scene& s, const CutResult& result) {
     const Units u = s.units;
-    const std::string edge = rubbingEdge(result);
+    const RubbingEdge rubbing = rubbingEdge(result);
+    const std::string& edge = rubbing.edge;
     auto slideWords = [&](const char* name, const Slide& sl) {
         return std::string("the ") + name + "'s " + formatLength(sl.backlashMm, u) +
                " backlash was not taken up at a reading (dialled to it from the wrong side, or "
@@ -112,8 +136,7 @@ std::vector<Removal> removals(const Scene& s, const CutResult& result) {
          "the insert's " + edge + " edge rubs: the pass runs in toward the " +
              (s.tool.kind == ToolKind::BoringBar ? "wall" : "axis") +
              " steeper than the insert and holder can follow, and the edge cuts behind the nose",
-         "use an insert and holder whose " + edge +
-             " edge clears the slope (the rubbing finding names them)"},
+         edgeFix(s, rubbing)},
     };
 }
 
