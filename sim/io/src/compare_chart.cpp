@@ -77,7 +77,13 @@ std::string chartSvg(const ChartLine& line, const CompareChartRange& range, Unit
     s += fmt::format("<line x1=\"{:.1f}\" x2=\"{:.1f}\" y1=\"{:.1f}\" y2=\"{:.1f}\" "
                      "stroke=\"#555\" stroke-dasharray=\"4 3\"/>\n",
                      left, w - right, Y(0), Y(0));
-    for (double v : {range.loSmall, 0.0, range.hiSmall})
+    // Zero, the range's ends and the band's edges, each where it stands clear of those before.
+    std::vector<double> ticks;
+    for (double v : {0.0, range.loSmall, range.hiSmall, -line.bandSmall, line.bandSmall})
+        if (std::none_of(ticks.begin(), ticks.end(),
+                         [&](double t) { return std::fabs(Y(t) - Y(v)) < 15; }))
+            ticks.push_back(v);
+    for (double v : ticks)
         s += fmt::format("<text x=\"{:.1f}\" y=\"{:.1f}\" text-anchor=\"end\">{:.1f}</text>\n",
                          left - 6, Y(v) + 4, v);
     std::string pts;
@@ -87,11 +93,11 @@ std::string chartSvg(const ChartLine& line, const CompareChartRange& range, Unit
         s += "<polyline fill=\"none\" stroke=\"#b02a2a\" stroke-width=\"2\" points=\"" + pts +
              "\"/>\n";
     s += fmt::format("<text x=\"{:.1f}\" y=\"{:.1f}\" text-anchor=\"middle\">z, {} ({} to {}); "
-                     "deviation normal to the surface, {} (+: metal left on)</text>\n",
+                     "deviation normal to the surface, {}</text>\n",
                      (left + w - right) / 2, h - 22, unitName(u), formatLengthNumber(z0, u),
                      formatLengthNumber(z1, u), smallUnitName(u));
-    s += fmt::format("<text x=\"{:.1f}\" y=\"{:.1f}\" text-anchor=\"middle\">green: the "
-                     "tolerance band; the same scale on both charts</text>\n",
+    s += fmt::format("<text x=\"{:.1f}\" y=\"{:.1f}\" text-anchor=\"middle\">+: metal left on; "
+                     "green: the tolerance band; one scale on both</text>\n",
                      (left + w - right) / 2, h - 6);
     return s + "</svg>\n";
 }
