@@ -73,16 +73,16 @@ TEST_CASE("run --compare: the no-offset arbor against the arbor, side by side", 
     // Both charts, drawn to one range (each run's own chart.png has its own scale, so the page
     // does not show those), and the range holds the metal the mistake leaves on: 2ΔX·cos θ/2
     // normal to the surface, 19.5 µm (references R1; derived).
-    std::smatch left, right;
-    REQUIRE(std::regex_search(html, left,
+    std::smatch chartLeft, chartRight;
+    REQUIRE(std::regex_search(html, chartLeft,
                               std::regex("id=\"chart-left\"[^>]*data-lo=\"([-0-9.e+]+)\" "
                                          "data-hi=\"([-0-9.e+]+)\"")));
-    REQUIRE(std::regex_search(html, right,
+    REQUIRE(std::regex_search(html, chartRight,
                               std::regex("id=\"chart-right\"[^>]*data-lo=\"([-0-9.e+]+)\" "
                                          "data-hi=\"([-0-9.e+]+)\"")));
-    CHECK(left[1].str() == right[1].str());
-    CHECK(left[2].str() == right[2].str());
-    CHECK(std::stod(left[2].str()) >= 0.5 * offsetOnDiameter * 1000 / secT);
+    CHECK(chartLeft[1].str() == chartRight[1].str());
+    CHECK(chartLeft[2].str() == chartRight[2].str());
+    CHECK(std::stod(chartLeft[2].str()) >= 0.5 * offsetOnDiameter * 1000 / secT);
     CHECK_FALSE(contains(html, "scene/chart.png"));
     CHECK(contains(html, "id=\"half-angle-change\""));
     CHECK(contains(html, "out of tolerance"));
