@@ -45,7 +45,8 @@ double readingFor(const Setup& su, double thetaRad) {
 CauseRepair compoundScaleRepair(const Feature& f) {
     const double theta = f.cone.halfAngleRad;
     return {
-        "compound_scale", [&f, theta](const Scene& s, std::string& msg) {
+        "compound_scale",
+        [&f, theta](const Scene& s, std::string& msg) {
             std::optional<Scene> none;
             const double tol = f.angleToleranceRad;
             Scene r = s;
@@ -74,12 +75,14 @@ CauseRepair compoundScaleRepair(const Feature& f) {
                   (fromAxis ? "from the axis" : "from the cross-slide") + "|set " +
                   formatDms(readingFor(s.setup, theta), 0) + " on this scale";
             return std::optional<Scene>(r);
-        }};
+        },
+        true};
 }
 
 // The cross-slide readings worked out for the other dial mode.
 CauseRepair dialModeRepair() {
-    return {"dial_mode", [](const Scene& s, std::string& msg) {
+    return {"dial_mode",
+            [](const Scene& s, std::string& msg) {
                 std::optional<Scene> none;
                 const bool manual =
                     std::any_of(s.plan.passes.begin(), s.plan.passes.end(),
@@ -94,7 +97,8 @@ CauseRepair dialModeRepair() {
                       (dia ? "diameter" : "radius") + "|work them out on " +
                       (dia ? "diameter" : "radius") + ", as the dial reads";
                 return std::optional<Scene>(r);
-            }};
+            },
+            true};
 }
 
 // The nose-radius offset: the finishing pass shifted to where the closed form puts the

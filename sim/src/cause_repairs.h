@@ -45,6 +45,11 @@ std::string coneChangeWords(double dMm, double dRad, Units u, bool inside);
 struct CauseRepair {
     std::string source;
     std::function<std::optional<Scene>(const Scene&, std::string&)> make;
+    /// A mistake that reads every reading another way (the compound's scale, the dial's mode)
+    /// is kept only when mending it takes away at least half the cone's distance from the
+    /// drawing: any change that cuts deeper brings a plan that stops short nearer, and would
+    /// otherwise be named for it.
+    bool explainsMost = false;
 };
 
 /// The repairs findCauses tries, in its order of preference: compound_scale, dial_mode,

@@ -184,7 +184,8 @@ std::vector<Cause> findCauses(const Scene& scene, const CutResult& result) {
     }
 
     // Repairs: on the clean machine, the best one first, each kept when it brings the cone
-    // nearer the drawing by more than a hundredth of a tolerance.
+    // nearer the drawing by more than a hundredth of a tolerance (a repair that reads every
+    // reading another way, by at least half the distance: cause_repairs.h).
     Outcome now = run(clean, t);
     std::vector<detail::CauseRepair> todo = detail::causeRepairs(t);
     while (!todo.empty()) {
@@ -194,18 +195,22 @@ std::vector<Cause> findCauses(const Scene& scene, const CutResult& result) {
         std::vector<std::optional<Scene>> scenes(todo.size());
         std::vector<Outcome> outcomes(todo.size());
         std::vector<std::string> msgs(todo.size());
-        double nearest = distance(now, t) - 0.01;
+        std::vector<bool> eligible(todo.size(), false);
+        const double from = distance(now, t);
+        double nearest = from - 0.01;
         for (std::size_t i = 0; i < todo.size(); ++i) {
             scenes[i] = todo[i].make(clean, msgs[i]);
             if (!scenes[i])
                 continue;
             outcomes[i] = run(*scenes[i], t);
-            nearest = std::min(nearest, distance(outcomes[i], t));
+            const double d = distance(outcomes[i], t);
+            eligible[i] = d < from - 0.01 && (!todo[i].explainsMost || d <= 0.5 * from);
+            if (eligible[i])
+                nearest = std::min(nearest, d);
         }
         std::size_t bestIndex = todo.size();
         for (std::size_t i = 0; i < todo.size() && bestIndex == todo.size(); ++i)
-            if (scenes[i] && distance(outcomes[i], t) <= nearest + 0.1 &&
-                distance(outcomes[i], t) < distance(now, t) - 0.01)
+            if (eligible[i] && distance(outcomes[i], t) <= nearest + 0.1)
                 bestIndex = i;
         const std::optional<Scene> bestScene =
             bestIndex < todo.size() ? scenes[bestIndex] : std::nullopt;

@@ -203,3 +203,20 @@ TEST_CASE("two sources in a bore at once are both named", "[sim][causes]") {
     const double x = 13.0 - insideOffsetMm();
     CHECK(tip->gaugeDiameterChangeMm == Approx(2 * (std::sqrt(x * x + 0.25) - x)).epsilon(0.01));
 }
+
+TEST_CASE("a bore whose plan stops short is not blamed on the dial", "[sim][causes]") {
+    // One roughing pass at c = −1.5 and no more: the tip at x = 10 + 1.5/2, the bore
+    // Ø21.5 − 2ΔX at the mouth, 4.5 mm small and more (derived; references R1 mirrored). Read as a
+    // radius dial the same reading would give Ø23: nearer, but a third of the way only, so the dial
+    // is not the mistake.
+    Scene s = socket();
+    s.plan.passes.resize(1);
+    s.plan.passes[0].crossMm = -1.5;
+    const CutResult r = simulate(s);
+    CHECK(r.gaugeAsCutDiameterMm == Approx(21.5 - 2 * insideOffsetMm()).margin(2e-4));
+    const std::vector<Cause> cs = findCauses(s, r);
+    for (const Cause& c : cs)
+        INFO(c.source << ": " << c.message);
+    CHECK(named(cs, "dial_mode") == nullptr);
+    CHECK(named(cs, "other") == nullptr); // nothing named, so nothing left over either
+}
