@@ -1,7 +1,6 @@
 // The error budget of a set-up: a Monte Carlo over its uncertainty (see budget.h).
 #include "swarf/sim/budget.h"
 
-#include "swarf/sim/bore_sweep.h"
 #include "swarf/sim/compare.h"
 #include "swarf/sim/inside_kernel.h"
 #include "swarf/sim/perturb.h"
@@ -19,9 +18,50 @@ namespace swarf {
 
 namespace {
 
+// The cone a budget is of: the inside one for a boring bar (the cone it cuts), else the outside.
+const Feature* budgetCone(const Scene& scene) {
+    return scene.tool.kind == ToolKind::BoringBar ? scene.part.mainInsideCone()
+                                                  : scene.part.mainCone();
+}
+
 int mainConeIndex(const Scene& scene) {
-    const Feature* c = scene.part.mainCone();
+    const Feature* c = budgetCone(scene);
     return c ? static_cast<int>(c - scene.part.features.data()) : -1;
+}
+
+// partOutcome for a bored cone: the same exact sweep on the twin x' = C − x (inside_kernel.h),
+// the hole as the twin's stock, each sample brought back to the bore's radius.
+PartOutcome boredOutcome(const Scene& scene, const Feature& cone, int featureIndex) {
+    const ToolOutline outline(scene.tool);
+    const std::vector<ToolMove> moves = planMoves(scene);
+    const double c = insideTwinOffsetMm(scene), h = scene.tool.tipHeightMm;
+    Profile twin;
+    twin.dzMm = scene.sim.profileStepMm;
+    const double z0 = scene.stock.freeEndZMm();
+    const double first = std::ceil((cone.zStartMm - z0) / twin.dzMm - 1e-9);
+    const double last = std::floor((cone.zEndMm - z0) / twin.dzMm + 1e-9);
+    twin.z0Mm = z0 + first * twin.dzMm;
+    const auto n = static_cast<std::size_t>(std::max(1.0, last - first + 1));
+    const double hole = 0.5 * scene.stock.boreDiameterMm;
+    twin.radiusMm.assign(n, c - std::sqrt(std::max(0.0, hole * hole - h * h)));
+    for (const ToolMove& m : moves) {
+        const MoveSweep sw = prepareMove(outline, insideTwinMove(m, c));
+        const double lo = std::max(0.0, std::ceil((sw.zLoMm - twin.z0Mm) / twin.dzMm));
+        const double hi =
+            std::min(static_cast<double>(n), std::floor((sw.zHiMm - twin.z0Mm) / twin.dzMm) + 1);
+        for (auto i = static_cast<std::size_t>(lo); static_cast<double>(i) < hi; ++i)
+            twin.radiusMm[i] = std::min(twin.radiusMm[i], sweptLowestX(outline, sw, twin.zAt(i)));
+    }
+    Profile bore = twin;
+    for (double& r : bore.radiusMm)
+        r = boreRadiusFromTwin(r, c, h);
+    const Profile nominal = nominalOnGrid(scene.part, bore, Side::Inside);
+    const std::vector<double> dev = normalDeviation(scene.part, nominal, bore, Side::Inside);
+    const std::vector<bool> mask = insideVerdictMask(scene.part, bore, outline.noseRadiusMm());
+    for (const FeatureReport& r : compareFeatures(scene, bore, dev, {}, mask, Side::Inside))
+        if (r.feature == featureIndex)
+            return {r.asCutDiameterMm, r.asCutHalfAngleRad, r.withinTolerance};
+    return {};
 }
 
 // Counts the parts made over the whole budget and reports the fraction from one thread.
@@ -133,8 +173,12 @@ Spread spreadOf(std::vector<double> v) {
 }
 
 std::string budgetRefusal(const Scene& scene) {
-    if (!scene.part.mainCone())
-        return "the drawing has no cone: a budget is of a cone's gauge diameter and half angle";
+    if (!budgetCone(scene))
+        return scene.tool.kind == ToolKind::BoringBar
+                   ? "the drawing has no inside cone for the boring bar: a budget is of a "
+                     "cone's gauge diameter and half angle"
+                   : "the drawing has no cone: a budget is of a cone's gauge diameter and half "
+                     "angle";
     if (scene.plan.passes.empty())
         return "the scene has no passes to cut the cone with";
     return "";
@@ -146,6 +190,8 @@ double budgetProfileStepMm(const Scene& scene) {
 
 PartOutcome partOutcome(const Scene& scene, int featureIndex) {
     const Feature& cone = scene.part.features.at(static_cast<std::size_t>(featureIndex));
+    if (scene.tool.kind == ToolKind::BoringBar)
+        return boredOutcome(scene, cone, featureIndex);
     const ToolOutline outline(scene.tool);
     const std::vector<ToolMove> moves = planMoves(scene);
     // The exact profile over the cone alone: each sample is the minimum of the bar and every
@@ -158,19 +204,6 @@ PartOutcome partOutcome(const Scene& scene, int featureIndex) {
     const double last = std::floor((cone.zEndMm - z0) / asCut.dzMm + 1e-9);
     asCut.z0Mm = z0 + first * asCut.dzMm;
     const auto n = static_cast<std::size_t>(std::max(1.0, last - first + 1));
-    if (cone.side == Side::Inside) {
-        // A bored cone: the bore's sweep on the same samples (bore_sweep.h), against the drawn
-        // bore, metal left on being within it.
-        asCut.radiusMm.assign(n, 0.0);
-        const Profile bore = boredProfile(scene, outline, moves, asCut);
-        const Profile nominal = nominalOnGrid(scene.part, bore, Side::Inside);
-        const std::vector<double> dev = normalDeviation(scene.part, nominal, bore, Side::Inside);
-        const std::vector<bool> mask = insideVerdictMask(scene.part, bore, outline.noseRadiusMm());
-        for (const FeatureReport& r : compareFeatures(scene, bore, dev, {}, mask, Side::Inside))
-            if (r.feature == featureIndex)
-                return {r.asCutDiameterMm, r.asCutHalfAngleRad, r.withinTolerance};
-        return {};
-    }
     asCut.radiusMm.assign(n, 0.5 * scene.stock.diameterMm);
     for (const ToolMove& m : moves) {
         const MoveSweep sw = prepareMove(outline, m);

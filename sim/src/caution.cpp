@@ -30,6 +30,19 @@ const std::vector<std::string>& safetyCautions() {
     return kCautions;
 }
 
+const std::vector<std::string>& boringCautions() {
+    static const std::vector<std::string> kBoring = {
+        "Boring: keep the bar's overhang as short as the bore allows (about four bar diameters "
+        "for a steel bar) and check, before starting the spindle, that the bar and its holder "
+        "clear the bore, the jaws and the chuck over the whole stroke.",
+        "In a blind hole, swarf packs behind the bar and can break the insert or throw the "
+        "bar: stop and clear it often, with the spindle stopped, using a hook or a brush.",
+        "Never put fingers, a rag or a brush into the bore while the spindle turns; measure "
+        "and clean the bore only with the spindle stopped.",
+    };
+    return kBoring;
+}
+
 std::optional<std::string> materialCaution(const std::string& material) {
     // Free-cutting leaded steels (11SMnPb30, 12L14), leaded brasses (CuZn39Pb3) and bronzes:
     // "Pb" in the designation, the word, or a common number for one (from memory: 1.0718 and

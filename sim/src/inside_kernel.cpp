@@ -1,6 +1,7 @@
 // The kernel for inside work (inside_kernel.h): the outside kernel run on the twin x' = C − x.
 #include "swarf/sim/inside_kernel.h"
 
+#include "swarf/sim/between_passes.h"
 #include "swarf/sim/boring_findings.h"
 #include "swarf/sim/compare.h"
 #include "swarf/sim/findings.h"
@@ -32,16 +33,11 @@ Scene twinScene(const Scene& scene, double c) {
 }
 
 ToolMove twinMove(const ToolMove& m, double c) {
-    ToolMove t = m;
-    t.tipFrom.y() = c - m.tipFrom.y();
-    t.tipTo.y() = c - m.tipTo.y();
-    return t;
+    return insideTwinMove(m, c);
 }
 
-// x' on the twin back to a radius in the bore: x = C − x', R = √(x² + h²); no hole (x ≤ 0) is 0.
 double radiusFromTwin(double twinX, double c, double h) {
-    const double x = c - twinX;
-    return x > 1e-12 ? cutRadiusMm(x, h) : 0.0;
+    return boreRadiusFromTwin(twinX, c, h);
 }
 
 Profile fromTwin(const Profile& twin, double c, double h) {
@@ -98,6 +94,18 @@ Scene insideAsMain(const Scene& scene) {
 }
 
 } // namespace
+
+ToolMove insideTwinMove(const ToolMove& m, double c) {
+    ToolMove t = m;
+    t.tipFrom.y() = c - m.tipFrom.y();
+    t.tipTo.y() = c - m.tipTo.y();
+    return t;
+}
+
+double boreRadiusFromTwin(double twinX, double c, double h) {
+    const double x = c - twinX;
+    return x > 1e-12 ? cutRadiusMm(x, h) : 0.0;
+}
 
 std::vector<bool> insideVerdictMask(const Part& part, const Profile& grid, double noseRadiusMm) {
     std::vector<bool> mask(grid.radiusMm.size(), true);
@@ -232,6 +240,16 @@ CutResult simulateInside(const Scene& scene, const ProgressFn& progress) {
         res.findings.push_back(std::move(f));
     for (Finding& f : boringFindings(scene, outline, res.moves, res.boreStock, res.boreAfterPass))
         res.findings.push_back(std::move(f));
+    // The moves between passes (the bar comes off the wall toward the centre, machine.h), checked
+    // on the twin against the metal as it stands, as outside.
+    res.between = betweenPassMoves(scene);
+    std::vector<BetweenMove> twinBetween = res.between;
+    for (BetweenMove& b : twinBetween)
+        b.move = twinMove(b.move, c);
+    for (Finding& f : findCutsBetweenPasses(twin, outline, twinBetween, sw))
+        res.findings.push_back(std::move(f));
+    for (std::size_t i = 0; i < res.between.size(); ++i)
+        res.between[i].cutsMm = twinBetween[i].cutsMm;
     report(0.80);
 
     int fm = -1;

@@ -3,6 +3,7 @@
 // from below), the moves between passes, and CNC paths.
 #include "swarf/sim/machine.h"
 
+#include "swarf/sim/boring_checks.h"
 #include "swarf/sim/kernel.h"
 
 #include <algorithm>
@@ -24,6 +25,41 @@ double turnMm(const Slide& slide) {
 
 double defaultRetractReadingMm(const Setup& setup, double endCrossMm, double nextCrossMm) {
     return std::min(endCrossMm, nextCrossMm) - turnMm(setup.cross);
+}
+
+double boringBackOffMm(const Scene& scene, double tipXMm) {
+    const double hole = 0.5 * scene.stock.boreDiameterMm;
+    const double room = barWallClearanceMm(scene.tool, tipXMm, hole);
+    const double turn = crossTravelFromReading(scene.setup, turnMm(scene.setup.cross));
+    return std::clamp(0.5 * room, 0.05, std::max(0.05, turn));
+}
+
+double boringRetractReadingMm(const Scene& scene, double tipXMm, double endCrossMm,
+                              double nextCrossMm) {
+    const double backOff = boringBackOffMm(scene, tipXMm);
+    const double reading = scene.setup.crossDial == DialMode::Diameter ? 2.0 * backOff : backOff;
+    return std::max(endCrossMm, nextCrossMm) + reading;
+}
+
+RetractLimit retractLimit(const Plan& plan, std::size_t i, bool boringBar) {
+    const Pass& p = plan.passes[i];
+    RetractLimit r;
+    r.atLeast = boringBar;
+    r.limitMm = passEndCrossMm(p);
+    if (i + 1 < plan.passes.size() && plan.passes[i + 1].kind != PassKind::Path) {
+        const double next = passStartCrossMm(plan.passes[i + 1]);
+        r.limitMm = boringBar ? std::max(r.limitMm, next) : std::min(r.limitMm, next);
+    }
+    return r;
+}
+
+std::string RetractLimit::expected(const std::string& limitText) const {
+    return atLeast ? "expected a boring bar's cross-slide reading off the wall, toward the "
+                     "centre, from this pass's end and the next pass's start: at least " +
+                         limitText
+                   : "expected a cross-slide reading out from this pass's end and the next "
+                     "pass's start: at most " +
+                         limitText;
 }
 
 double passStartCrossMm(const Pass& pass) {
@@ -146,6 +182,8 @@ class Walker {
         if (k + 1 < static_cast<int>(passes.size()) &&
             passes[static_cast<std::size_t>(k + 1)].kind != PassKind::Path)
             next = passStartCrossMm(passes[static_cast<std::size_t>(k + 1)]);
+        if (sc_.tool.kind == ToolKind::BoringBar) // off the wall, toward the axis
+            return boringRetractReadingMm(sc_, tip().y(), end, next);
         return defaultRetractReadingMm(su_, end, next);
     }
 
@@ -214,7 +252,15 @@ class Walker {
         const double xClear =
             0.5 * sc_.stock.diameterMm + crossTravelFromReading(su_, turnMm(su_.cross));
         const double clear = readingOf(SlideName::Cross, xNow - xClear);
-        const double entry = std::min(c - turnMm(su_.cross), clear);
+        // A boring bar comes into the hole off the wall, on the axis's side of its reading.
+        const double entry =
+            sc_.tool.kind == ToolKind::BoringBar
+                ? boringRetractReadingMm(sc_,
+                                         tipFromTravels(su_, crossTravelFromReading(su_, c),
+                                                        compound_.travel, saddle_.travel)
+                                             .y(),
+                                         c, c)
+                : std::min(c - turnMm(su_.cross), clear);
         cross_.handwheel = cross_.travel = crossTravelFromReading(su_, entry);
         lastPass_ = -1;
     }

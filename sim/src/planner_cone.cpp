@@ -62,6 +62,8 @@ void noteFinishPass(ConePlan& out) {
 } // namespace
 
 ConePlan planCone(const Scene& scene) {
+    if (scene.tool.kind == ToolKind::BoringBar)
+        return planInsideCone(scene);
     ConePlan out;
     out.scene = scene;
     out.scene.plan.passes.clear();

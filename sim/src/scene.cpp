@@ -1,6 +1,8 @@
 // Scene geometry helpers and the format-independent checks of a scene.
 #include "swarf/sim/scene.h"
 
+#include "swarf/sim/machine.h"
+
 #include "swarf/sim/inside_work.h"
 
 #include <algorithm>
@@ -314,18 +316,12 @@ void Scene::validate() const {
                       "spindle axis");
             }
             if (p.retractToMm) {
-                // Backed out: no further in than the pass ended or the next pass starts.
-                double limit = p.kind == PassKind::CrossSlide ? p.toMm : p.crossMm;
-                if (i + 1 < plan.passes.size() && plan.passes[i + 1].kind != PassKind::Path) {
-                    const Pass& n = plan.passes[i + 1];
-                    limit = std::min(limit, n.kind == PassKind::CrossSlide ? n.fromMm : n.crossMm);
-                }
+                // Backed out (a boring bar: off the wall) from the pass's end and the next start.
+                const RetractLimit lim = retractLimit(plan, i, tool.kind == ToolKind::BoringBar);
                 char buf[64];
-                std::snprintf(buf, sizeof buf, "%.6g", fromMm(limit, units));
-                c.len(*p.retractToMm <= limit + 1e-9, p.where, k + ".retract_to", *p.retractToMm,
-                      std::string("expected a cross-slide reading out from this pass's end and "
-                                  "the next pass's start: at most ") +
-                          buf + " " + u);
+                std::snprintf(buf, sizeof buf, "%.6g", fromMm(lim.limitMm, units));
+                c.len(lim.allows(*p.retractToMm), p.where, k + ".retract_to", *p.retractToMm,
+                      lim.expected(std::string(buf) + " " + u));
             }
         }
     }

@@ -1,6 +1,7 @@
 // A measured trial cut before finishing (see trial_cut.h).
 #include "swarf/sim/trial_cut.h"
 
+#include "swarf/sim/inside_kernel.h"
 #include "swarf/sim/kernel.h"
 #include "swarf/sim/sweep.h"
 #include "swarf/sim/tool_outline.h"
@@ -22,6 +23,20 @@ double asCutOutsideDiameterMm(const Scene& scene, double zMm) {
     return 2.0 * r;
 }
 
+double asCutBoreDiameterMm(const Scene& scene, double zMm) {
+    const ToolOutline outline(scene.tool);
+    const double c = insideTwinOffsetMm(scene), h = scene.tool.tipHeightMm;
+    const double hole = 0.5 * scene.stock.boreDiameterMm;
+    double twin = c - std::sqrt(std::max(0.0, hole * hole - h * h));
+    for (const ToolMove& m : planMoves(scene)) {
+        const MoveSweep sw = prepareMove(outline, insideTwinMove(m, c));
+        if (zMm < sw.zLoMm || zMm > sw.zHiMm)
+            continue;
+        twin = std::min(twin, sweptLowestX(outline, sw, zMm));
+    }
+    return 2.0 * boreRadiusFromTwin(twin, c, h);
+}
+
 double trialCutCorrectionMm(const Setup& setup, double offMm) {
     const double reading = setup.crossDial == DialMode::Diameter ? offMm : 0.5 * offMm;
     const double div = setup.cross.mmPerDivision;
@@ -32,7 +47,12 @@ Scene afterTrialCut(const Scene& scene, const TrialCut& trial, double measuremen
     Scene cut = scene;
     cut.plan.passes.resize(static_cast<std::size_t>(
         std::clamp<int>(trial.trialPasses, 0, static_cast<int>(scene.plan.passes.size()))));
-    const double measured = asCutOutsideDiameterMm(cut, trial.checkZMm) + measurementErrorMm;
+    // Outside a micrometer over the cone; inside an inside micrometer in the bore. Either way a
+    // diameter found large takes a larger reading (outside further in, inside less far out).
+    const double measured =
+        (scene.tool.kind == ToolKind::BoringBar ? asCutBoreDiameterMm(cut, trial.checkZMm)
+                                                : asCutOutsideDiameterMm(cut, trial.checkZMm)) +
+        measurementErrorMm;
     const double change = trialCutCorrectionMm(scene.setup, measured - trial.expectedDiameterMm);
     Scene out = scene;
     for (int k : trial.finishPasses) {

@@ -126,6 +126,33 @@ TEST_CASE("swarf plan --target chooses the way of working from the budget", "[cl
     CHECK(sheet.find("Trial cut. Stop the spindle") != std::string::npos);
     CHECK(slurp(dir / "planned.toml").find("trial_cut = true") != std::string::npos);
 
+    // The planned scene's budget keeps its trial cut: the same parts as the budget of the scene
+    // asking for that way of working (zero on the diameter, with a trial cut).
+    const fs::path withTrial = work / "arbor-trial-cut.toml";
+    {
+        std::string text = slurp(sceneFile);
+        const auto at = text.find("[planning]\n");
+        REQUIRE(at != std::string::npos);
+        text.insert(at + 11, "trial_cut = true\n");
+        std::ofstream(withTrial) << text;
+    }
+    const fs::path b1 = work / "budget-scene", b2 = work / "budget-planned";
+    const Run first = runSwarf("budget '" + withTrial.string() + "' --out '" + b1.string() +
+                               "' --samples 200 --no-pictures");
+    INFO(first.out << first.err);
+    REQUIRE(first.exitCode == 0);
+    CHECK(first.out.find("with the plan's measured trial cut") != std::string::npos);
+    const Run second = runSwarf("budget '" + (dir / "planned.toml").string() + "' --out '" +
+                                b2.string() + "' --samples 200 --no-pictures");
+    INFO(second.out << second.err);
+    REQUIRE(second.exitCode == 0);
+    CHECK(second.out.find("with the plan's measured trial cut") != std::string::npos);
+    const auto j1 = nlohmann::json::parse(slurp((b1 / "budget.json").string()));
+    const auto j2 = nlohmann::json::parse(slurp((b2 / "budget.json").string()));
+    CHECK(j2["gauge_diameter_mm"]["sd"].get<double>() ==
+          Approx(j1["gauge_diameter_mm"]["sd"].get<double>()).epsilon(1e-6));
+    CHECK(j2["p_in_tolerance"].get<double>() == Approx(j1["p_in_tolerance"].get<double>()));
+
     // A target without an [uncertainty]: exit 2, the option named, nothing written.
     const fs::path none = work / "none";
     const Run bare = runSwarf("plan " + scene("plan-1-20-chuck-out.toml") + " --out '" +

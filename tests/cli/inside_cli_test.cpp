@@ -1,6 +1,7 @@
 // Inside work from the command line (issue 14): `swarf check` reads and prints a bore, inside
-// features and a boring bar; the commands that do not simulate inside work yet refuse it with
-// exit code 2, the message at its first piece, and nothing written.
+// features and a boring bar; `swarf plan` plans an inside cone with a boring bar; the commands
+// that do not simulate inside work yet refuse it with exit code 2, the message at its first piece,
+// and nothing written.
 #include "support/cli_run.h"
 
 #include <catch2/catch.hpp>
@@ -43,21 +44,10 @@ TEST_CASE("swarf check prints the hole, the inside cone and the boring bar", "[c
     CHECK(r.out.find("OK: the scene is valid.") != std::string::npos);
 }
 
-TEST_CASE("plan, budget and view refuse inside work, writing nothing", "[cli][inside]") {
+TEST_CASE("view refuses inside work, writing nothing", "[cli][inside]") {
     const std::string scene = insideScene("collet-seat-1-10-bore.toml");
     const std::filesystem::path out =
         std::filesystem::temp_directory_path() / ("inside_cli_" + std::to_string(getpid()));
-    for (const char* command : {"plan", "budget"}) {
-        INFO(command);
-        const Run r =
-            runSwarf(std::string(command) + " " + scene + " --out '" + out.string() + "'");
-        INFO(r.out << r.err);
-        CHECK(r.exitCode == 2);
-        CHECK(r.err.find("part.feature[3].side") != std::string::npos);
-        CHECK(r.err.find(std::string("swarf ") + command + " does not simulate") !=
-              std::string::npos);
-        CHECK_FALSE(std::filesystem::exists(out));
-    }
     const Run v = runSwarf("view " + scene + " --screenshot '" + out.string() + ".png'");
     INFO(v.out << v.err);
     CHECK(v.exitCode == 2);
@@ -132,4 +122,55 @@ TEST_CASE("bored sockets come out to the published tapers, within tolerance",
         CHECK(r.out.find("findings: none") != std::string::npos);
     }
     std::filesystem::remove_all(out);
+}
+
+TEST_CASE("swarf plan bores a socket: pilot, cone, plug gauge, and the plan runs within tolerance",
+          "[cli][inside][plan]") {
+    const std::filesystem::path out =
+        std::filesystem::temp_directory_path() / ("inside_plan_" + std::to_string(getpid()));
+    std::filesystem::remove_all(out);
+    const Run r = runSwarf("plan '" + std::string(SWARF_SCENES_DIR) +
+                           "/bore-collet-seat-1-10.toml' --out '" + out.string() + "'");
+    INFO(r.out << r.err);
+    CHECK(r.exitCode == 0);
+    CHECK(r.out.find("simulated: within tolerance") != std::string::npos);
+    CHECK(r.out.find("no findings") != std::string::npos);
+    const std::string sheet = slurp((out / "setup-sheet.txt").string());
+    CHECK(sheet.find("pilot bore to") != std::string::npos);
+    CHECK(sheet.find("Plug gauge of the drawing's cone") != std::string::npos);
+    CHECK(sheet.find("Never put fingers") != std::string::npos);
+    // The planned scene runs as `swarf run` runs any scene: within tolerance, no findings.
+    const Run run = runSwarf("run '" + (out / "planned.toml").string() + "' --out '" +
+                             (out / "run").string() + "' --no-pictures");
+    INFO(run.out << run.err);
+    CHECK(run.exitCode == 0);
+    CHECK(run.out.find("within tolerance") != std::string::npos);
+    std::filesystem::remove_all(out);
+}
+
+TEST_CASE("swarf budget of a bored socket", "[cli][inside][budget]") {
+    const std::filesystem::path out =
+        std::filesystem::temp_directory_path() / ("inside_budget_" + std::to_string(getpid()));
+    std::filesystem::remove_all(out);
+    const Run r = runSwarf("budget '" + std::string(SWARF_SCENES_DIR) +
+                           "/bore-collet-seat-1-10.toml' --out '" + out.string() +
+                           "' --samples 200 --no-pictures");
+    INFO(r.out << r.err);
+    CHECK(r.exitCode == 0);
+    CHECK(r.out.find("gauge diameter: mean") != std::string::npos);
+    CHECK(std::filesystem::exists(out / "budget.json"));
+    std::filesystem::remove_all(out);
+}
+
+TEST_CASE("swarf correct refuses inside work, writing nothing", "[cli][inside]") {
+    const std::filesystem::path out =
+        std::filesystem::temp_directory_path() / ("inside_correct_" + std::to_string(getpid()));
+    std::filesystem::remove_all(out);
+    const Run r = runSwarf("correct '" + std::string(SWARF_SCENES_DIR) +
+                           "/bore-collet-seat-1-10.toml' --measured '" + SWARF_SCENES_DIR +
+                           "/measured/plan-1-20-after-pass-2.toml' --out '" + out.string() + "'");
+    INFO(r.out << r.err);
+    CHECK(r.exitCode == 2);
+    CHECK(r.err.find("swarf correct does not simulate") != std::string::npos);
+    CHECK_FALSE(std::filesystem::exists(out));
 }

@@ -14,13 +14,17 @@
 #include "swarf/sim/caution.h"
 #include "swarf/sim/error.h"
 #include "swarf/sim/inside_work.h"
+#include "swarf/sim/measurement.h"
+#include "swarf/sim/plan_choice.h"
 #include "swarf/sim/planner.h"
 #include "swarf/viewer/histogram.h"
 
 #include <fmt/core.h>
 
+#include <cmath>
 #include <filesystem>
 #include <memory>
+#include <optional>
 #include <string>
 
 namespace swarf::app {
@@ -38,15 +42,35 @@ struct BudgetArgs {
     throw InputError(SourceLoc{"command line", 0, 0}, option, std::to_string(value), expected);
 }
 
+// The same passes, reading for reading (a planned scene read back: to the file's precision).
+bool samePasses(const Plan& a, const Plan& b) {
+    if (a.passes.size() != b.passes.size())
+        return false;
+    auto near = [](double x, double y) { return std::fabs(x - y) < 1e-6; };
+    for (std::size_t k = 0; k < a.passes.size(); ++k) {
+        const Pass& p = a.passes[k];
+        const Pass& q = b.passes[k];
+        if (p.kind != q.kind || !near(p.crossMm, q.crossMm) || !near(p.compoundMm, q.compoundMm) ||
+            !near(p.saddleMm, q.saddleMm) || !near(p.fromMm, q.fromMm) || !near(p.toMm, q.toMm))
+            return false;
+    }
+    return true;
+}
+
 int runBudgetCommand(const BudgetArgs& a) {
     if (a.samples < 2 || a.samples > 1000000)
         badOption("--samples", a.samples, "expected a whole number of parts from 2 to 1000000");
     if (a.seed < 0)
         badOption("--seed", a.seed, "expected a whole number 0 or more");
     Scene scene = io::readScene(a.scene); // bad input throws before anything is written
-    refuseInsideWork(scene, "budget");
+    const bool boring = scene.tool.kind == ToolKind::BoringBar;
+    if (!boring) // a boring bar budgets its inside cone
+        refuseInsideWork(scene, "budget");
     bool planned = false;
-    if (scene.part.mainCone() && scene.plan.passes.empty()) {
+    std::optional<TrialCut> trial;
+    std::string trialNote;
+    if ((boring ? scene.part.mainInsideCone() : scene.part.mainCone()) &&
+        scene.plan.passes.empty()) {
         // No passes of its own: budget the plan `swarf plan` would make.
         const ConePlan plan = planCone(scene);
         if (!plan.planned) {
@@ -60,6 +84,17 @@ int runBudgetCommand(const BudgetArgs& a) {
         }
         scene = plan.scene;
         planned = true;
+        if (plan.trialCut)
+            trial = trialCutOf(plan, defaultMicrometerUncertaintyMm(scene.units == Units::Inch));
+    } else if (scene.planning.trialCut) {
+        // A scene planned with a trial cut (planned.toml): the cut is budgeted when its passes
+        // are still the plan's, so that the plan says which passes finish and what to measure.
+        const ConePlan plan = planCone(scene);
+        if (plan.planned && plan.trialCut && samePasses(plan.scene.plan, scene.plan))
+            trial = trialCutOf(plan, defaultMicrometerUncertaintyMm(scene.units == Units::Inch));
+        else
+            trialNote = "the scene asks for a trial cut, but its passes are not those swarf plan "
+                        "makes: budgeted without it";
     }
     if (const std::string why = budgetRefusal(scene); !why.empty())
         throw InputError(SourceLoc{scene.file, 0, 0}, "", "", "nothing to budget: " + why);
@@ -67,6 +102,7 @@ int runBudgetCommand(const BudgetArgs& a) {
     BudgetOptions opt;
     opt.samples = static_cast<int>(a.samples);
     opt.seed = static_cast<std::uint64_t>(a.seed);
+    opt.trialCut = trial;
     Budget b;
     {
         ProgressBar bar("drawing parts");
@@ -89,7 +125,10 @@ int runBudgetCommand(const BudgetArgs& a) {
         scene, b, a.outDir, png.empty() ? "" : fs::path(png).filename().string(), planned));
 
     const Units u = scene.units;
-    fmt::print("scene: {}{}\n", scene.name, planned ? " (passes planned by swarf plan)" : "");
+    fmt::print("scene: {}{}{}\n", scene.name, planned ? " (passes planned by swarf plan)" : "",
+               trial ? ", with the plan's measured trial cut before finishing" : "");
+    if (!trialNote.empty())
+        fmt::print("note: {}\n", trialNote);
     fmt::print("{} parts drawn (seed {}); gauge plane z = {}, drawing {} ± {}\n", b.samples, b.seed,
                formatLength(b.gaugeZMm, u), formatLength(b.nominalDiameterMm, u, Precision::Fine),
                formatLength(b.toleranceMm, u, Precision::Fine));
@@ -100,7 +139,9 @@ int runBudgetCommand(const BudgetArgs& a) {
                formatLength(b.gaugeDiameterMm.p97_5, u, Precision::Fine),
                formatLength(b.exact.gaugeDiameterMm, u, Precision::Fine));
     fmt::print("half angle: mean {}, sd {:.3g}′ (drawing {} ± {:.3g}′)\n",
-               formatDms(b.halfAngleRad.mean), radToDeg(b.halfAngleRad.sd) * 60.0,
+               formatDms(b.halfAngleRad.mean),
+               // Below a thousandth of a minute (0.06″) the spread is the fit's rounding: 0.
+               radToDeg(b.halfAngleRad.sd) * 60.0 < 1e-3 ? 0.0 : radToDeg(b.halfAngleRad.sd) * 60.0,
                formatDms(b.nominalHalfAngleRad), radToDeg(b.angleToleranceRad) * 60.0);
     fmt::print("within tolerance: the whole cone {:.1f} % of the parts (gauge diameter, half "
                "angle and form, as swarf run judges it); the gauge diameter alone {:.1f} %\n",

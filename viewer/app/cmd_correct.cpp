@@ -16,6 +16,7 @@
 #include "swarf/sim/caution.h"
 #include "swarf/sim/correction.h"
 #include "swarf/sim/error.h"
+#include "swarf/sim/inside_work.h"
 #include "swarf/sim/kernel.h"
 #include "swarf/sim/planner.h"
 #include "swarf/sim/run_budget.h"
@@ -36,6 +37,7 @@ struct CorrectArgs {
 
 int runCorrect(const CorrectArgs& a) {
     Scene scene = io::readScene(a.scene); // bad input throws before anything is written
+    refuseInsideWork(scene, "correct");   // the correction fits an outside cone only, so far
     bool planned = false;
     if (scene.part.mainCone() && scene.plan.passes.empty()) {
         const ConePlan plan = planCone(scene);

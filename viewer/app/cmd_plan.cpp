@@ -84,7 +84,8 @@ std::vector<std::string> headerFor(const ConePlan& plan, const std::string& from
 
 int runPlan(const PlanArgs& a) {
     const Scene scene = io::readScene(a.scene); // bad input throws before anything is written
-    refuseInsideWork(scene, "plan");
+    if (scene.tool.kind != ToolKind::BoringBar) // a boring bar plans the inside cone
+        refuseInsideWork(scene, "plan");
     if (a.target >= 0 && !(a.target > 0 && a.target < 1))
         throw InputError(SourceLoc{"command line", 0, 0}, "--target", fmt::format("{:g}", a.target),
                          "expected a chance between 0 and 1, e.g. 0.95 for 19 parts in 20");

@@ -2,6 +2,7 @@
 #include "scene_sections.h"
 
 #include "swarf/io/insert_codes.h"
+#include "swarf/sim/machine.h"
 
 #include <algorithm>
 #include <cctype>
@@ -275,7 +276,7 @@ Setup readSetup(const Fields& root) {
     return s;
 }
 
-Plan readPlan(const Fields& root) {
+Plan readPlan(const Fields& root, bool boringBar) {
     Plan plan;
     const toml::table* t = root.subtable("plan");
     if (!t)
@@ -389,18 +390,11 @@ Plan readPlan(const Fields& root) {
     // Backed out: no further in than the pass ends or the next pass starts (at the key itself;
     // Scene::validate checks the same for scenes built in code).
     for (const auto& r : retracts) {
-        const Pass& p = plan.passes[r.index];
-        double limit = p.kind == PassKind::CrossSlide ? p.toMm : p.crossMm;
-        if (r.index + 1 < plan.passes.size() && plan.passes[r.index + 1].kind != PassKind::Path) {
-            const Pass& n = plan.passes[r.index + 1];
-            limit = std::min(limit, n.kind == PassKind::CrossSlide ? n.fromMm : n.crossMm);
-        }
-        if (*p.retractToMm > limit + 1e-9)
+        const RetractLimit lim = retractLimit(plan, r.index, boringBar);
+        if (!lim.allows(*plan.passes[r.index].retractToMm))
             throw InputError(r.where, "plan.pass[" + std::to_string(r.index + 1) + "].retract_to",
                              r.value,
-                             "expected a cross-slide reading out from this pass's end and the "
-                             "next pass's start: at most " +
-                                 fmtNum(fromMm(limit, u)) + " " + unitName(u));
+                             lim.expected(fmtNum(fromMm(lim.limitMm, u)) + " " + unitName(u)));
     }
     return plan;
 }

@@ -292,7 +292,7 @@ Scene readSceneText(const std::string& text, const std::string& fileName) {
     scene.part = detail::readPart(root, scene.stock);
     scene.tool = detail::readTool(root);
     scene.setup = detail::readSetup(root);
-    scene.plan = detail::readPlan(root);
+    scene.plan = detail::readPlan(root, scene.tool.kind == ToolKind::BoringBar);
     scene.planning = readPlanning(root);
     scene.sim = readSim(root);
     scene.expect = readExpect(root, scene.readNotes);

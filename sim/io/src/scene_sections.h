@@ -16,8 +16,9 @@ Tool readTool(const Fields& root);
 void readToolKind(const Fields& f, Tool& tool);
 /// [setup] with [setup.compound], [setup.cross], [setup.saddle].
 Setup readSetup(const Fields& root);
-/// [[plan.pass]] (the [plan] table may be absent: an empty plan).
-Plan readPlan(const Fields& root);
+/// [[plan.pass]] (the [plan] table may be absent: an empty plan). `boringBar`: the tool is a
+/// boring bar, whose retract_to comes off the wall toward the centre (machine.h RetractLimit).
+Plan readPlan(const Fields& root, bool boringBar);
 
 /// [uncertainty] (every key optional: exact), with limits from the tool and the slides.
 Uncertainty readUncertainty(const Fields& root, const Tool& tool, const Setup& setup);

@@ -30,6 +30,9 @@ const char* towardName(Widens w) {
 
 Section safetySection(const Scene& scene) {
     std::vector<std::string> l = safetyCautions();
+    if (scene.tool.kind == ToolKind::BoringBar)
+        for (const std::string& b : boringCautions())
+            l.push_back(b);
     if (auto m = materialCaution(scene.stock.material))
         l.push_back(*m);
     return {"Safety first", {listBlock(l, Block::Kind::Warn)}};
@@ -128,8 +131,11 @@ Section compoundSection(const Ctx& c) {
         formatSmallLength(plan.noseNormalErrorMm, c.u) +
         " normal to the cone; the finishing readings already include the offset (tip line " +
         c.L(std::fabs(plan.noseOffsetRadialMm), Precision::Fine) + " on radius " +
-        (plan.noseOffsetRadialMm < 0 ? "inside" : "outside") + " the drawn line, the same as " +
-        c.L(std::fabs(plan.noseOffsetAxialMm), Precision::Fine) + " along the axis).");
+        (plan.inside                   ? "outside the drawn bore, toward the wall"
+         : plan.noseOffsetRadialMm < 0 ? "inside the drawn line"
+                                       : "outside the drawn line") +
+        ", the same as " + c.L(std::fabs(plan.noseOffsetAxialMm), Precision::Fine) +
+        " along the axis).");
     if (plan.trailingEdge)
         cl.push_back("The trailing edge cuts the cone (see the notes for this job).");
     return {"Compound and nose-radius offset", {listBlock(cl)}};
@@ -141,12 +147,17 @@ Section readingsSection(const Ctx& c) {
         "Readings are dial readings in " + std::string(c.u == Units::Inch ? "inches" : "mm") +
         "; in the table, [n t + d] means n whole turns from zero (negative: back from zero), then "
         "division d on the dial, which wraps every turn. Approach every reading "
-        "in its increasing direction (cross-slide: in toward the centre; compound: winding in, "
-        "which moves the tool " +
-        compoundSenseWords(c.su) +
+        "in its increasing direction (cross-slide: " +
+        std::string(c.plan.inside ? "out toward the bore's wall: its readings decrease, so wind "
+                                    "it in past the reading, then out to it"
+                                  : "in toward the centre") +
+        "; compound: winding in, which moves the tool " + compoundSenseWords(c.su) +
         "; saddle: toward the chuck): wind back past it, then forward to it. The readings then "
         "need no backlash correction. Lock the slides that do not move during a pass. Between "
-        "passes, back the cross-slide out before the tool goes back: each pass says where to."));
+        "passes, " +
+        (c.plan.inside ? "bring the bar off the wall, toward the centre, before it goes back"
+                       : "back the cross-slide out before the tool goes back") +
+        ": each pass says where to."));
     bool twoStages = false;
     for (const PassDisplay& d : c.plan.display)
         twoStages = twoStages || d.stage == 0;
@@ -154,18 +165,49 @@ Section readingsSection(const Ctx& c) {
                              ", the saddle reads 0 with the tip at " + c.L(c.su.zeroZMm) +
                              " from the datum face.";
     refs.blocks.push_back(paragraph(
-        twoStages
-            ? "Readings from the first touch-off count from the first touch-off on the bar (Ø" +
-                  c.L(c.sc.stock.diameterMm) +
-                  ") and its end face. Readings from the references count from the "
-                  "references: " +
-                  zero
-            : "Readings count from the touch-off: " + zero));
+        twoStages ? "Readings from the first touch-off count from the first touch-off on the " +
+                        (c.plan.inside ? "hole (Ø" + c.L(c.sc.stock.boreDiameterMm)
+                                       : "bar (Ø" + c.L(c.sc.stock.diameterMm)) +
+                        ") and its end face. Readings from the references count from the "
+                        "references: " +
+                        zero
+                  : "Readings count from the touch-off: " + zero));
     return refs;
+}
+
+// A bored cone's checks: the mouth with an inside micrometer, a plug gauge, blue.
+Section boreChecksSection(const Ctx& c) {
+    const ConePlan& plan = c.plan;
+    const BoreChecks& b = plan.bore;
+    const Feature& f = c.sc.part.features[static_cast<std::size_t>(plan.featureIndex)];
+    std::vector<std::string> l;
+    l.push_back("Diameter just inside the mouth, " + c.L(b.mouthZMm) +
+                " from the datum face, with an inside micrometer or a telescopic gauge: Ø" +
+                c.L(b.mouthDiameterRoughMm) + " before finishing, Ø" +
+                c.L(b.mouthDiameterFinishedMm) + " finished.");
+    if (b.plugGauge)
+        l.push_back("Plug gauge of the drawing's cone: its gauge line (Ø" +
+                    c.L(f.cone.gaugeDiameterMm) + ") stands at " + c.L(b.gaugeLineZMm) +
+                    " from the datum face when the bore is finished, within ±" + c.L(b.bandMm) +
+                    " (the drawing's ±" + c.L(f.toleranceMm) +
+                    " on diameter, divided by twice the taper's tan θ); before finishing it "
+                    "stands about " +
+                    c.L(b.roughStandOutMm) +
+                    " further out. Standing out: the bore is small, take more; going in past "
+                    "the band: the bore is large.");
+    l.push_back("Blue (common practice): wipe a thin film of engineer's blue on the plug, push "
+                "it in by hand, turn it a little and draw it out. Blue rubbed off along the "
+                "whole length: the angle is right. Only at the mouth: the bore's taper is "
+                "shallower than the plug's, so increase the compound's angle; only deep in: "
+                "steeper, so decrease it.");
+    l.push_back("Compound angle with the sine bar stack above, before the first cone pass.");
+    return {"Checks before the finishing pass (spindle stopped)", {listBlock(l)}};
 }
 
 Section checksSection(const Ctx& c) {
     const ConePlan& plan = c.plan;
+    if (plan.inside)
+        return boreChecksSection(c);
     const auto& rolls = plan.rolls;
     return {"Checks before the finishing pass (spindle stopped)",
             {listBlock({

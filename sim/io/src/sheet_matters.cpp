@@ -48,14 +48,23 @@ Section mattersSection(const SheetCtx& c) {
                     formatLengthNumber(s.roughDiameterMm, u) + ")" + dial + " instead of " +
                     formatLengthNumber(s.finishCrossMm, u) + ".");
     const double step = u == Units::Inch ? 0.001 * kMmPerInch : 0.01;
-    notes.push_back(
-        "If the roll readings differ by Δ′ instead of " + c.L(s.rollDifferenceMm) +
-        ", turn the compound by " + minutes(s.compoundPerRollMmRad * step) + " for every " +
-        c.L(step) + " of (Δ′ − " + formatLengthNumber(s.rollDifferenceMm, u) +
-        "): toward the spindle axis when Δ′ is larger (the cone is too steep), away from it when "
-        "smaller. With the indicator on the test bar, 1′ is " +
-        c.L(s.indicatorPerMinuteMm, Precision::Fine) + " over " + c.L(s.indicatorTravelMm) +
-        " of compound travel. Then recheck before the finishing pass.");
+    if (c.plan.inside)
+        notes.push_back("Inside there are no rolls to measure over: the blue on the plug gauge "
+                        "says which way the angle is off (see the checks). Turn the compound a "
+                        "minute or two at a time; with the indicator on the test bar, 1′ is " +
+                        c.L(s.indicatorPerMinuteMm, Precision::Fine) + " over " +
+                        c.L(s.indicatorTravelMm) +
+                        " of compound travel. Then try the plug again before the finishing pass.");
+    else
+        notes.push_back(
+            "If the roll readings differ by Δ′ instead of " + c.L(s.rollDifferenceMm) +
+            ", turn the compound by " + minutes(s.compoundPerRollMmRad * step) + " for every " +
+            c.L(step) + " of (Δ′ − " + formatLengthNumber(s.rollDifferenceMm, u) +
+            "): toward the spindle axis when Δ′ is larger (the cone is too steep), away from it "
+            "when "
+            "smaller. With the indicator on the test bar, 1′ is " +
+            c.L(s.indicatorPerMinuteMm, Precision::Fine) + " over " + c.L(s.indicatorTravelMm) +
+            " of compound travel. Then recheck before the finishing pass.");
     return {"What matters at the check plane",
             {paragraph("How much the diameter at the check plane (" + c.L(s.checkZMm) +
                        " from the datum face) moves for a small error in each thing you set or "

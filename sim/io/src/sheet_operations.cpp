@@ -55,13 +55,20 @@ std::string wayThere(const SheetCtx& c, const std::vector<BetweenMove>& between,
                          c.plan.display[static_cast<std::size_t>(k)].stage)
         for (const BetweenMove& m : between)
             if (m.afterPass == prev && m.beforePass == k && m.step == ReturnStep::BackOut)
-                parts.push_back("after touching off, back the cross-slide out to " + sh.to(m));
+                parts.push_back(std::string(c.plan.inside
+                                                ? "after touching off, bring the bar off the "
+                                                  "wall to "
+                                                : "after touching off, back the cross-slide out "
+                                                  "to ") +
+                                sh.to(m));
     for (std::size_t i = 0; i < between.size(); ++i) {
         const BetweenMove& m = between[i];
         if (m.beforePass != k || m.step == ReturnStep::BackOut)
             continue;
         if (m.afterPass < 0 && first)
-            parts.push_back("bring the tool to the start, clear of the bar");
+            parts.push_back(c.plan.inside ? "bring the bar into the hole, off its wall, in front "
+                                            "of the mouth"
+                                          : "bring the tool to the start, clear of the bar");
         first = false;
         switch (m.step) {
         case ReturnStep::WindBack: {
@@ -82,7 +89,9 @@ std::string wayThere(const SheetCtx& c, const std::vector<BetweenMove>& between,
             parts.push_back(std::string("dial the ") + slideWord(m.slide) + " to " + sh.to(m));
             break;
         case ReturnStep::FeedIn:
-            parts.push_back("feed the cross-slide in to " + sh.to(m));
+            parts.push_back(std::string(c.plan.inside ? "feed the cross-slide out to "
+                                                      : "feed the cross-slide in to ") +
+                            sh.to(m));
             break;
         case ReturnStep::BackOut:
             break;
@@ -137,7 +146,7 @@ Section operationsSection(const SheetCtx& c) {
                    "from",
                    "to",
                    "feed " + un + "/rev",
-                   "back out to"};
+                   plan.inside ? "off the wall to" : "back out to"};
     // Stages are named only when there are two (straight passes before the references).
     bool twoStages = false;
     for (const PassDisplay& d : plan.display)
@@ -179,7 +188,9 @@ Section operationsSection(const SheetCtx& c) {
                 dialCell(moving, p.fromMm + off, u) + " to " + dialCell(moving, p.toMm + off, u) +
                 " at " + c.feed(p.feedMmPerRev) + " " + un + "/rev" + pace(c, p) + ".";
         if (!back.empty())
-            line += " Then back the cross-slide out to " + back + ".";
+            line += (c.plan.inside ? " Then bring the bar off the wall to "
+                                   : " Then back the cross-slide out to ") +
+                    back + ".";
         numbered.push_back(line);
         passes.rows.push_back({std::to_string(stepNo), std::to_string(k + 1),
                                twoStages ? stage : "", passKindName(p.kind),

@@ -86,8 +86,7 @@ std::string budgetRefusal(const Scene& scene);
 double budgetProfileStepMm(const Scene& scene);
 
 /// One part: the exact-profile kernel on `scene` (its sim.profileStepMm as given), and the cone
-/// feature `featureIndex` against the drawing. An inside cone (a bore, cut with a boring bar) is
-/// taken from the bore's sweep (bore_sweep.h: boredProfile) against the drawn bore.
+/// feature `featureIndex` against the drawing.
 PartOutcome partOutcome(const Scene& scene, int featureIndex);
 
 /// Runs the budget of `scene` (precondition: budgetRefusal(scene) is empty). `progress` is

@@ -13,6 +13,10 @@ namespace swarf {
 /// model.
 const std::vector<std::string>& safetyCautions();
 
+/// The cautions boring adds, for a set-up with a boring bar: the bar's reach, swarf packing in a
+/// blind hole, and no fingers (or rag, or brush) in the bore while the spindle turns.
+const std::vector<std::string>& boringCautions();
+
 /// A caution the bar's material calls for, if any: for a leaded steel, brass or bronze (Pb in
 /// its designation, or "leaded"), washing hands and handling its swarf.
 std::optional<std::string> materialCaution(const std::string& material);

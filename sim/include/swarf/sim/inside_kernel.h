@@ -16,9 +16,8 @@
 // `bore…` fields; features of both sides are reported; the gauge is the first inside cone's.
 // Findings: those of the moves (rubbing, depth of cut, air cut, jaw, compound travel, found on
 // the twin), left on and overcut per side, the finishing feed, and the boring findings
-// (boring_findings.h). The moves between passes are not made or checked for a boring bar yet
-// (`between` is empty): the machine model backs the cross-slide out away from the axis, which
-// inside is into the wall.
+// (boring_findings.h), and the moves between passes (`between`: the bar comes off the wall
+// toward the centre, machine.h) checked against the metal on the twin, as outside.
 #include "swarf/sim/kernel.h"
 
 namespace swarf {
@@ -31,9 +30,15 @@ CutResult simulateInside(const Scene& scene, const ProgressFn& progress = {});
 /// a boring tool reaches in the bar.
 double insideTwinOffsetMm(const Scene& scene);
 
-/// The samples of `grid` that count toward an inside feature's verdict: not within one nose
-/// radius of an inside face (the bottom of the bore or a step keeps the nose's radius in its
-/// corner).
+/// A move of the boring tool as the twin's turning tool makes it: tip x → C − x.
+ToolMove insideTwinMove(const ToolMove& m, double c);
+
+/// A radius x' on the twin back to the bore's radius: x = C − x', R = √(x² + h²) for a tip h
+/// off centre; 0 where x ≤ 0 (no hole).
+double boreRadiusFromTwin(double twinX, double c, double h);
+
+/// Samples of the bore that count toward the verdict: not within one nose radius of an inside
+/// face (the bottom or a step keeps the nose's radius in its corner).
 std::vector<bool> insideVerdictMask(const Part& part, const Profile& grid, double noseRadiusMm);
 
 } // namespace swarf

@@ -23,6 +23,7 @@
 #include "swarf/sim/scene.h"
 
 #include <Eigen/Core>
+#include <string>
 #include <vector>
 
 namespace swarf {
@@ -49,6 +50,32 @@ double turnMm(const Slide& slide);
 /// (Pass::retractToMm): one turn out from the smaller of `endCrossMm` (the pass's last cross-slide
 /// reading) and `nextCrossMm` (the next pass's first; pass the same value when there is none).
 double defaultRetractReadingMm(const Setup& setup, double endCrossMm, double nextCrossMm);
+
+/// How far (mm of radius) a boring bar backs off the wall between passes: toward the work's
+/// axis, half the shank's clearance in the stock's hole with the tip at `tipXMm` (so the back of
+/// the bar stays off the far wall), at least 0.05 mm and at most one turn of the cross-slide.
+/// Precondition: scene.tool.kind == BoringBar.
+double boringBackOffMm(const Scene& scene, double tipXMm);
+
+/// The cross-slide reading a boring bar is backed off to after a pass (Pass::retractToMm not
+/// given): boringBackOffMm toward the axis from the larger of the two readings (inside, a larger
+/// reading is further from the wall).
+double boringRetractReadingMm(const Scene& scene, double tipXMm, double endCrossMm,
+                              double nextCrossMm);
+
+/// Where pass i's retract_to may stand: a turning tool backs out, no further in than the pass
+/// ends or the next pass starts (at most `limitMm`); a boring bar comes off the wall toward the
+/// centre, no nearer the wall than either (at least `limitMm`).
+struct RetractLimit {
+    double limitMm = 0;
+    bool atLeast = false; ///< true: retract_to ≥ limitMm (a boring bar); false: ≤ limitMm
+    bool allows(double retractMm) const {
+        return atLeast ? retractMm >= limitMm - 1e-9 : retractMm <= limitMm + 1e-9;
+    }
+    /// What a retract_to must be, in words, for an error (`limitText`: the limit as written).
+    std::string expected(const std::string& limitText) const;
+};
+RetractLimit retractLimit(const Plan& plan, std::size_t i, bool boringBar);
 
 /// The cross-slide reading a pass starts at (a cross-slide pass: its `from`), and ends at.
 double passStartCrossMm(const Pass& pass);

@@ -77,6 +77,18 @@ struct SineBarCheck {
     std::vector<double> baseBlocksMm;
 };
 
+/// The checks of a bored cone (a socket): a plug gauge's stand-off and the mouth's diameter.
+struct BoreChecks {
+    /// A plug gauge (of the drawing's cone) can go in: the bore widens toward the free end.
+    bool plugGauge = false;
+    double gaugeLineZMm = 0;    ///< where the plug's gauge line sits on a finished bore (z)
+    double bandMm = 0;          ///< ± along the axis the gauge line may stand: tol / (2 tan θ)
+    double roughStandOutMm = 0; ///< before finishing, the gauge line stands this much further out
+    double mouthZMm = 0;        ///< plane of the inside-micrometer check, just inside the mouth
+    double mouthDiameterFinishedMm = 0, mouthDiameterRoughMm = 0;
+    double pilotDiameterMm = 0; ///< the bore opened with saddle passes before the cone
+};
+
 /// The result of planning: either a planned scene or the reasons there is none.
 struct ConePlan {
     bool planned = false;                 ///< false: no passes (see problems, suggestions)
@@ -123,6 +135,10 @@ struct ConePlan {
     std::vector<int> halfDivisionPasses;
     /// The plan has a measured trial cut before finishing (PlanningOptions::trialCut).
     bool trialCut = false;
+    /// An inside cone, bored with a boring bar (planInsideCone); its checks are `bore`, not the
+    /// rolls. The nose offset is then outward, toward the wall (noseOffsetRadialMm > 0).
+    bool inside = false;
+    BoreChecks bore;
     /// How the plan was chosen from the scene's uncertainty (plan_choice.h), in lines for
     /// people: the target, each way of working tried with its chance; empty when not chosen.
     std::vector<std::string> choiceLines;
@@ -140,6 +156,12 @@ inline constexpr double kEdgeClearanceRad = 0.0872664626; // 5°
 /// follow: it returns planned == false with the reasons and suggestions. Precondition: the
 /// scene is validated.
 ConePlan planCone(const Scene& scene);
+
+/// Plans the drawing's main inside cone (Part::mainInsideCone) with the scene's boring bar: a
+/// pilot bore with saddle passes, then compound passes (roughing, then finishing with the inside
+/// nose-radius offset, outward toward the wall), with the checks of a socket (BoreChecks).
+/// planCone calls it for a scene whose tool is a boring bar. Same contract as planCone.
+ConePlan planInsideCone(const Scene& scene);
 
 /// Whether a tool can follow a straight path at angle pathAngleRad from +z (positive climbs
 /// outward toward the chuck) without its trailing or leading edge cutting behind the nose,

@@ -24,6 +24,10 @@ struct TrialCut {
 /// bar's, less every move's swept envelope there (sweep.h), with the tip's height (off_centre).
 double asCutOutsideDiameterMm(const Scene& scene, double zMm);
 
+/// The same for a bore cut with a boring bar: the hole's diameter, or the largest every move's
+/// swept envelope opens it to at `zMm` (inside_kernel.h's twin), with the tip's height.
+double asCutBoreDiameterMm(const Scene& scene, double zMm);
+
 /// The cross-slide reading change (mm of dial) a measured diameter `offMm` (measured minus
 /// expected, on diameter) calls for on `setup`'s dial: the difference on a diameter dial, half
 /// of it on a radius dial, rounded to the nearest whole division.
