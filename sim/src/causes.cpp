@@ -108,7 +108,11 @@ std::vector<Removal> removals(const Scene& s, const CutResult& result) {
              : "set the tip on centre (against a centre in the tailstock, or by facing to a pip)"},
         {"cross_backlash", s.setup.cross.backlashMm > 0,
          [](Scene& x) { x.setup.cross.backlashMm = 0; }, slideWords("cross-slide", s.setup.cross),
-         "come to every cross-slide reading from outside: back out past it and feed in"},
+         s.tool.kind == ToolKind::BoringBar
+             ? "take the backlash up the same way at every cross-slide reading: with the bar out "
+               "of the bore, wind past the reading and come back to it the way the dial was "
+               "zeroed"
+             : "come to every cross-slide reading from outside: back out past it and feed in"},
         {"compound_backlash", s.setup.compound.backlashMm > 0,
          [](Scene& x) { x.setup.compound.backlashMm = 0; },
          slideWords("compound", s.setup.compound),
