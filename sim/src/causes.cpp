@@ -1,11 +1,12 @@
 // What moved the cone: counterfactual runs, one source at a time (see causes.h).
 #include "swarf/sim/causes.h"
 
+#include "cause_repairs.h"
+
 #include "swarf/sim/budget.h"
 #include "swarf/sim/cut.h"
 #include "swarf/sim/kernel.h"
-#include "swarf/sim/machine.h"
-#include "swarf/sim/nose_offset.h"
+#include "swarf/sim/planner.h"
 #include "swarf/sim/units.h"
 
 #include <algorithm>
@@ -17,195 +18,28 @@ namespace swarf {
 
 namespace {
 
+using detail::CauseTarget;
+
 // A cone as one run cuts it.
 struct Outcome {
     double diameterMm = 0, halfAngleRad = 0;
 };
 
-// What the causes are measured against: the main cone of the drawing.
-struct Target {
-    int feature = -1;
-    const Feature* cone = nullptr;
-    double lengthMm = 0;
-    Units units = Units::Mm;
-};
-
-Outcome run(const Scene& s, const Target& t) {
+Outcome run(const Scene& s, const CauseTarget& t) {
     const PartOutcome o = partOutcome(s, t.feature);
     return {o.gaugeDiameterMm, o.halfAngleRad};
 }
 
 // How far a cone is from the drawing, in tolerances: |gauge error|/t + |half-angle error|/tθ.
-double distance(const Outcome& o, const Target& t) {
+double distance(const Outcome& o, const CauseTarget& t) {
     const Feature& f = *t.cone;
     return std::fabs(o.diameterMm - f.cone.gaugeDiameterMm) / f.toleranceMm +
            std::fabs(o.halfAngleRad - f.cone.halfAngleRad) / f.angleToleranceRad;
 }
 
 // A change worth naming: 0.1 µm on the gauge diameter, or on the cone's length by its angle.
-bool worthNaming(double dMm, double dRad, const Target& t) {
+bool worthNaming(double dMm, double dRad, const CauseTarget& t) {
     return std::fabs(dMm) >= 1e-4 || std::fabs(dRad) * t.lengthMm >= 1e-4;
-}
-
-// The cone's change in words: "the cone is 0.100 mm small on diameter at the gauge plane" and,
-// when the half angle moved by a second or more, its change too.
-std::string sizeWords(double dMm, double dRad, Units u) {
-    std::string s = "the cone is " + formatLength(std::fabs(dMm), u, Precision::Fine) +
-                    (dMm >= 0 ? " large" : " small") + " on diameter at the gauge plane";
-    if (std::fabs(dRad) >= degToRad(1.0 / 3600.0))
-        s += ", its half angle " + formatDms(std::fabs(dRad), 0) +
-             (dRad >= 0 ? " steeper" : " shallower");
-    return s;
-}
-
-// The finishing move at the gauge plane: the cutting move whose imaginary tip runs deepest
-// there. Returns its pass and the tip's x at the gauge plane.
-struct Finishing {
-    int pass = -1;
-    double tipXMm = 0;
-};
-
-std::optional<Finishing> finishingAt(const std::vector<ToolMove>& moves, double zMm) {
-    std::optional<Finishing> best;
-    for (const ToolMove& m : moves) {
-        const double z0 = m.tipFrom.x(), z1 = m.tipTo.x();
-        if (std::fabs(z1 - z0) < 1e-9 || zMm < std::min(z0, z1) || zMm > std::max(z0, z1))
-            continue;
-        const double x = m.tipFrom.y() + (zMm - z0) / (z1 - z0) * (m.tipTo.y() - m.tipFrom.y());
-        if (!best || x < best->tipXMm)
-            best = Finishing{m.pass, x};
-    }
-    return best;
-}
-
-// Moves pass k's cut by dxMm in radius (+: away from the axis), as a person does by setting the
-// cross-slide reading (or, on a CNC path, the points).
-void shiftPass(Scene& s, int k, double dxMm) {
-    Pass& p = s.plan.passes.at(static_cast<std::size_t>(k));
-    const double reading = s.setup.crossDial == DialMode::Diameter ? 2 * dxMm : dxMm;
-    switch (p.kind) {
-    case PassKind::Compound:
-    case PassKind::Saddle:
-        p.crossMm -= reading; // increasing readings move in
-        break;
-    case PassKind::CrossSlide:
-        p.fromMm -= reading;
-        p.toMm -= reading;
-        break;
-    case PassKind::Path:
-        for (auto& pt : p.pathZX)
-            pt.second += dxMm;
-        return;
-    }
-    if (p.retractToMm)
-        *p.retractToMm -= reading;
-}
-
-// The reading on the scene's own scale that sets the compound to half angle θ.
-double readingFor(const Setup& su, double thetaRad) {
-    return su.compoundScale == CompoundScale::FromAxis ? thetaRad : kPi / 2 - thetaRad;
-}
-
-// One repair: its name, and the scene it makes from the current one (empty: not a candidate).
-struct Repair {
-    std::string source;
-    std::function<std::optional<Scene>(const Scene&, std::string&)> make;
-};
-
-std::vector<Repair> repairs(const Target& t) {
-    const Feature& f = *t.cone;
-    const double theta = f.cone.halfAngleRad;
-    std::vector<Repair> out;
-    // The compound set to the reading the drawn half angle has on the other scale.
-    out.push_back(
-        {"compound_scale", [&f, theta](const Scene& s, std::string& msg) {
-             std::optional<Scene> none;
-             const double tol = f.angleToleranceRad;
-             Scene r = s;
-             bool any = false;
-             auto mend = [&](double& reading) {
-                 const double own =
-                     s.setup.compoundScale == CompoundScale::FromAxis ? reading : kPi / 2 - reading;
-                 const double other =
-                     s.setup.compoundScale == CompoundScale::FromAxis ? kPi / 2 - reading : reading;
-                 if (std::fabs(own - theta) > tol && std::fabs(other - theta) <= tol) {
-                     reading = readingFor(s.setup, theta);
-                     any = true;
-                 }
-             };
-             mend(r.setup.compoundReadingRad);
-             for (Pass& p : r.plan.passes)
-                 if (p.compoundAngleRad)
-                     mend(*p.compoundAngleRad);
-             if (!any)
-                 return none;
-             msg = std::string("the compound was set to ") +
-                   formatDms(s.setup.compoundReadingRad, 0) + ", the half angle as a scale read " +
-                   (s.setup.compoundScale == CompoundScale::FromAxis ? "from the cross-slide"
-                                                                     : "from the axis") +
-                   " shows it, on a scale read " +
-                   (s.setup.compoundScale == CompoundScale::FromAxis ? "from the axis"
-                                                                     : "from the cross-slide") +
-                   "|set " + formatDms(readingFor(s.setup, theta), 0) + " on this scale";
-             return std::optional<Scene>(r);
-         }});
-    // The cross-slide readings worked out for the other dial mode.
-    out.push_back({"dial_mode", [](const Scene& s, std::string& msg) {
-                       std::optional<Scene> none;
-                       const bool manual =
-                           std::any_of(s.plan.passes.begin(), s.plan.passes.end(),
-                                       [](const Pass& p) { return p.kind != PassKind::Path; });
-                       if (!manual)
-                           return none;
-                       Scene r = s;
-                       const bool dia = s.setup.crossDial == DialMode::Diameter;
-                       r.setup.crossDial = dia ? DialMode::Radius : DialMode::Diameter;
-                       msg = std::string("the cross-slide readings were worked out for a ") +
-                             (dia ? "radius" : "diameter") + " dial, and the dial reads " +
-                             (dia ? "diameter" : "radius") + "|work them out on " +
-                             (dia ? "diameter" : "radius") + ", as the dial reads";
-                       return std::optional<Scene>(r);
-                   }});
-    // The nose-radius offset: the finishing pass shifted to where the closed form puts the
-    // imaginary tip (references R1), less what its readings already applied. A candidate when
-    // the miss exceeds half a cross-slide division (finer than a person can set) and is no more
-    // than 2.5 offsets (missing, doubled, or on the wrong side; a larger miss is not the
-    // offset's).
-    out.push_back({"nose_offset", [&f, theta](const Scene& s, std::string& msg) {
-                       std::optional<Scene> none;
-                       const auto fin = finishingAt(planMoves(s), f.cone.gaugeZMm);
-                       if (!fin)
-                           return none;
-                       const TipSide side =
-                           s.tool.hand == Hand::L ? TipSide::TailstockSide : TipSide::ChuckSide;
-                       const NoseOffsets no =
-                           noseRadiusOffsets(s.tool.noseRadiusMm, theta, f.cone.widens, side);
-                       const double target =
-                           0.5 * f.cone.gaugeDiameterMm + no.xShiftSign * no.dxRadiusMm;
-                       const double miss = target - fin->tipXMm;
-                       const double halfDivision =
-                           0.5 * crossTravelFromReading(s.setup, s.setup.cross.mmPerDivision);
-                       if (std::fabs(miss) <= halfDivision || std::fabs(miss) > 2.5 * no.dxRadiusMm)
-                           return none;
-                       Scene r = s;
-                       shiftPass(r, fin->pass, miss);
-                       const double reading = s.setup.crossDial == DialMode::Diameter
-                                                  ? 2 * std::fabs(miss)
-                                                  : std::fabs(miss);
-                       msg = "the finishing pass " +
-                             std::string(std::fabs(miss) > 1.5 * no.dxRadiusMm
-                                             ? "had the nose-radius offset the wrong way"
-                                         : std::fabs(miss) > 0.5 * no.dxRadiusMm
-                                             ? "was set without the nose-radius offset"
-                                             : "had only part of the nose-radius offset") +
-                             " (" + formatLength(no.dxRadiusMm, s.units, Precision::Fine) +
-                             " on radius for this nose and angle, references R1)";
-                       msg += "|set the finishing reading " +
-                              formatLength(reading, s.units, Precision::Fine) +
-                              (miss < 0 ? " further in" : " further out") + " on the dial";
-                       return std::optional<Scene>(r);
-                   }});
-    return out;
 }
 
 // A removal: a source the machine model has, set to zero.
@@ -216,8 +50,47 @@ struct Removal {
     std::string what, fix;
 };
 
-std::vector<Removal> removals(const Scene& s) {
+// The insert's straight edge the run found rubbing: "trailing" or "leading" ("" when neither),
+// by the finding's own words (findings.cpp), and the steepest descent it was found on, rad.
+struct RubbingEdge {
+    std::string edge;
+    double descentRad = 0;
+};
+
+RubbingEdge rubbingEdge(const CutResult& result) {
+    RubbingEdge trailing{"", 0}, leading{"", 0};
+    for (const Finding& f : result.findings) {
+        if (f.kind != FindingKind::Rubbing)
+            continue;
+        const bool isTrailing = f.message.rfind("the trailing edge", 0) == 0;
+        RubbingEdge& e = isTrailing ? trailing : leading;
+        e.edge = isTrailing ? "trailing" : "leading";
+        if (std::isfinite(f.angleRad))
+            e.descentRad = std::max(e.descentRad, f.angleRad);
+    }
+    return trailing.edge.empty() ? leading : trailing;
+}
+
+// What to put in the holder instead: the first insert and holder suggestTools (planner.h) names
+// for the slope the edge rubbed on (outside; inside the run's slopes are the twin's).
+std::string edgeFix(const Scene& s, const RubbingEdge& e) {
+    std::string fix = "use an insert and holder whose " + e.edge + " edge clears the slope";
+    if (s.tool.kind == ToolKind::BoringBar || e.edge.empty())
+        return fix;
+    // A trailing edge rubs going in toward the chuck for a right-hand tool (a path that
+    // descends toward the chuck); a leading edge, or a left-hand tool, the other way.
+    const bool descendsTowardChuck = (e.edge == "trailing") == (s.tool.hand != Hand::L);
+    const double pathAngleRad = descendsTowardChuck ? -e.descentRad : e.descentRad;
+    const std::vector<std::string> tools = suggestTools(s.tool, pathAngleRad, 1);
+    if (!tools.empty())
+        fix += ", for example a " + tools.front().substr(0, tools.front().find(':'));
+    return fix;
+}
+
+std::vector<Removal> removals(const Scene& s, const CutResult& result) {
     const Units u = s.units;
+    const RubbingEdge rubbing = rubbingEdge(result);
+    const std::string& edge = rubbing.edge;
     auto slideWords = [&](const char* name, const Slide& sl) {
         return std::string("the ") + name + "'s " + formatLength(sl.backlashMm, u) +
                " backlash was not taken up at a reading (dialled to it from the wrong side, or "
@@ -230,10 +103,16 @@ std::vector<Removal> removals(const Scene& s) {
         {"tip_height", s.tool.tipHeightMm != 0, [](Scene& x) { x.tool.tipHeightMm = 0; },
          "the tip stands " + formatLength(std::fabs(s.tool.tipHeightMm), u) +
              (s.tool.tipHeightMm > 0 ? " above" : " below") + " centre",
-         "set the tip on centre (against a centre in the tailstock, or by facing to a pip)"},
+         s.tool.kind == ToolKind::BoringBar
+             ? "set the bar with its tip on centre (against a centre in the tailstock)"
+             : "set the tip on centre (against a centre in the tailstock, or by facing to a pip)"},
         {"cross_backlash", s.setup.cross.backlashMm > 0,
          [](Scene& x) { x.setup.cross.backlashMm = 0; }, slideWords("cross-slide", s.setup.cross),
-         "come to every cross-slide reading from outside: back out past it and feed in"},
+         s.tool.kind == ToolKind::BoringBar
+             ? "take the backlash up the same way at every cross-slide reading: with the bar out "
+               "of the bore, wind past the reading and come back to it the way the dial was "
+               "zeroed"
+             : "come to every cross-slide reading from outside: back out past it and feed in"},
         {"compound_backlash", s.setup.compound.backlashMm > 0,
          [](Scene& x) { x.setup.compound.backlashMm = 0; },
          slideWords("compound", s.setup.compound),
@@ -251,17 +130,29 @@ std::vector<Removal> removals(const Scene& s) {
          "the compound stands " + formatDms(std::fabs(s.setup.compoundErrorRad), 0) +
              " off the angle set",
          "set the compound from a sine bar or an indicator run along a master cone"},
+        // The insert reduced to its nose: a round insert of the same nose radius has the same
+        // imaginary tip and no straight edge behind the nose (tool_outline.h).
+        {edge + "_edge", !edge.empty(),
+         [](Scene& x) {
+             x.tool.shape = 'R';
+             x.tool.includedAngleRad = 0;
+         },
+         "the insert's " + edge + " edge rubs: the pass runs in toward the " +
+             (s.tool.kind == ToolKind::BoringBar ? "wall" : "axis") +
+             " steeper than the insert and holder can follow, and the edge cuts behind the nose",
+         edgeFix(s, rubbing)},
     };
 }
 
 Cause makeCause(const std::string& source, const Outcome& with, const Outcome& without, int pass,
-                const std::string& what, const std::string& fix, Units u) {
+                const std::string& what, const std::string& fix, Units u, bool inside) {
     Cause c;
     c.source = source;
     c.gaugeDiameterChangeMm = with.diameterMm - without.diameterMm;
     c.halfAngleChangeRad = with.halfAngleRad - without.halfAngleRad;
     c.pass = pass;
-    c.message = what + ": " + sizeWords(c.gaugeDiameterChangeMm, c.halfAngleChangeRad, u) +
+    c.message = what + ": " +
+                detail::coneChangeWords(c.gaugeDiameterChangeMm, c.halfAngleChangeRad, u, inside) +
                 (fix.empty() ? "" : "; " + fix);
     return c;
 }
@@ -270,40 +161,37 @@ Cause makeCause(const std::string& source, const Outcome& with, const Outcome& w
 
 std::vector<Cause> findCauses(const Scene& scene, const CutResult& result) {
     std::vector<Cause> out;
-    const Feature* cone = scene.part.mainCone();
-    if (!cone || scene.plan.passes.empty())
+    const CauseTarget t = detail::causeTarget(scene);
+    if (!t.cone || scene.plan.passes.empty())
         return out;
-    Target t;
-    t.feature = static_cast<int>(cone - scene.part.features.data());
-    t.cone = cone;
-    t.lengthMm = cone->zEndMm - cone->zStartMm;
-    t.units = scene.units;
+    const Feature* cone = t.cone;
     const Units u = scene.units;
 
     Scene base = scene;
     base.sim.profileStepMm = budgetProfileStepMm(scene);
     const Outcome given = run(base, t);
-    const auto fin = finishingAt(planMoves(base), cone->cone.gaugeZMm);
+    const auto fin = detail::finishingAt(planMoves(base), cone->cone.gaugeZMm, t.inside);
     const int finPass = fin ? fin->pass : -1;
 
     // Removals: each from the scene as given.
     Scene clean = base;
-    for (const Removal& r : removals(base)) {
+    for (const Removal& r : removals(base, result)) {
         if (!r.present)
             continue;
         Scene s = base;
         r.remove(s);
         r.remove(clean);
         const Outcome without = run(s, t);
-        Cause c = makeCause(r.source, given, without, finPass, r.what, r.fix, u);
+        Cause c = makeCause(r.source, given, without, finPass, r.what, r.fix, u, t.inside);
         if (worthNaming(c.gaugeDiameterChangeMm, c.halfAngleChangeRad, t))
             out.push_back(c);
     }
 
     // Repairs: on the clean machine, the best one first, each kept when it brings the cone
-    // nearer the drawing by more than a hundredth of a tolerance.
+    // nearer the drawing by more than a hundredth of a tolerance (a repair that reads every
+    // reading another way, by at least half the distance: cause_repairs.h).
     Outcome now = run(clean, t);
-    std::vector<Repair> todo = repairs(t);
+    std::vector<detail::CauseRepair> todo = detail::causeRepairs(t);
     while (!todo.empty()) {
         // Each candidate's mended cone; the one kept is the first (in the order compound_scale,
         // dial_mode, nose_offset: a reading read another way before a shift of the finishing
@@ -311,18 +199,22 @@ std::vector<Cause> findCauses(const Scene& scene, const CutResult& result) {
         std::vector<std::optional<Scene>> scenes(todo.size());
         std::vector<Outcome> outcomes(todo.size());
         std::vector<std::string> msgs(todo.size());
-        double nearest = distance(now, t) - 0.01;
+        std::vector<bool> eligible(todo.size(), false);
+        const double from = distance(now, t);
+        double nearest = from - 0.01;
         for (std::size_t i = 0; i < todo.size(); ++i) {
             scenes[i] = todo[i].make(clean, msgs[i]);
             if (!scenes[i])
                 continue;
             outcomes[i] = run(*scenes[i], t);
-            nearest = std::min(nearest, distance(outcomes[i], t));
+            const double d = distance(outcomes[i], t);
+            eligible[i] = d < from - 0.01 && (!todo[i].explainsMost || d <= 0.5 * from);
+            if (eligible[i])
+                nearest = std::min(nearest, d);
         }
         std::size_t bestIndex = todo.size();
         for (std::size_t i = 0; i < todo.size() && bestIndex == todo.size(); ++i)
-            if (scenes[i] && distance(outcomes[i], t) <= nearest + 0.1 &&
-                distance(outcomes[i], t) < distance(now, t) - 0.01)
+            if (eligible[i] && distance(outcomes[i], t) <= nearest + 0.1)
                 bestIndex = i;
         const std::optional<Scene> bestScene =
             bestIndex < todo.size() ? scenes[bestIndex] : std::nullopt;
@@ -333,7 +225,7 @@ std::vector<Cause> findCauses(const Scene& scene, const CutResult& result) {
         const std::size_t bar = bestMsg.find('|');
         Cause c =
             makeCause(todo[bestIndex].source, now, bestOutcome, finPass, bestMsg.substr(0, bar),
-                      bar == std::string::npos ? "" : bestMsg.substr(bar + 1), u);
+                      bar == std::string::npos ? "" : bestMsg.substr(bar + 1), u, t.inside);
         if (worthNaming(c.gaugeDiameterChangeMm, c.halfAngleChangeRad, t))
             out.push_back(c);
         clean = *bestScene;
@@ -356,7 +248,7 @@ std::vector<Cause> findCauses(const Scene& scene, const CutResult& result) {
             c.halfAngleChangeRad = dRad;
             c.message = "what the causes named do not account for (the readings' rounding to "
                         "a division, or causes acting together): " +
-                        sizeWords(dMm, dRad, u);
+                        detail::coneChangeWords(dMm, dRad, u, t.inside);
             out.push_back(c);
         }
     }
@@ -371,15 +263,18 @@ std::vector<Cause> findCauses(const Scene& scene, const CutResult& result) {
         const double feed = std::sqrt(8 * r * 0.25 * band);
         Cause c;
         c.source = "feed_marks";
-        c.gaugeDiameterChangeMm = 2 * rtMm / std::cos(cone->cone.halfAngleRad);
+        // Inside, the crests stand nearer the axis: a plug gauge finds the bore smaller.
+        c.gaugeDiameterChangeMm =
+            (t.inside ? -2.0 : 2.0) * rtMm / std::cos(cone->cone.halfAngleRad);
         c.pass = result.finishingPass;
         c.message = "the finishing feed of " + formatLength(p.feedMmPerRev, u) +
                     " a revolution leaves feed marks " + formatSmallLength(rtMm, u) +
                     " high (Rt), against a band of " + formatSmallLength(band, u) +
-                    " normal to the surface: a gauge on the crests finds the cone " +
-                    formatLength(c.gaugeDiameterChangeMm, u, Precision::Fine) +
-                    " larger on diameter; finish at " + formatLength(feed, u) +
-                    " a revolution or less";
+                    " normal to the surface: a gauge on the crests finds the " +
+                    (t.inside ? "bore " : "cone ") +
+                    formatLength(std::fabs(c.gaugeDiameterChangeMm), u, Precision::Fine) +
+                    (t.inside ? " smaller" : " larger") + " on diameter; finish at " +
+                    formatLength(feed, u) + " a revolution or less";
         out.push_back(c);
     }
 
@@ -397,7 +292,7 @@ const std::vector<std::string>& causeSourceNames() {
     static const std::vector<std::string> names{
         "nose_offset",     "tip_height",     "cross_backlash", "compound_backlash",
         "saddle_backlash", "compound_angle", "compound_scale", "dial_mode",
-        "feed_marks",      "other"};
+        "trailing_edge",   "leading_edge",   "feed_marks",     "other"};
     return names;
 }
 
@@ -411,6 +306,8 @@ std::string causeLabel(const std::string& source) {
         {"compound_angle", "the compound's angle"},
         {"compound_scale", "the compound set on the other scale"},
         {"dial_mode", "the cross-slide dial read in the other mode (diameter or radius)"},
+        {"trailing_edge", "the insert's trailing edge rubbing"},
+        {"leading_edge", "the insert's leading edge rubbing"},
         {"feed_marks", "the feed marks"},
         {"other", "everything else"}};
     for (const auto& [key, label] : labels)

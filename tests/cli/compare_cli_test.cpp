@@ -67,10 +67,23 @@ TEST_CASE("run --compare: the no-offset arbor against the arbor, side by side", 
     CHECK(std::abs(shown - offsetOnDiameter) <= 0.001 + 1e-6);
     CHECK(shown > 0); // no offset: metal left on, the cone large
 
-    // Both pictures, both charts, by their paths in the two folders; both verdicts.
-    for (const char* pic :
-         {"scene/part.png", "other/part.png", "scene/chart.png", "other/chart.png"})
+    // Both pictures, by their paths in the two folders; both verdicts.
+    for (const char* pic : {"scene/part.png", "other/part.png"})
         CHECK(contains(html, std::string("src=\"") + pic + "\""));
+    // Both charts, drawn to one range (each run's own chart.png has its own scale, so the page
+    // does not show those), and the range holds the metal the mistake leaves on: 2ΔX·cos θ/2
+    // normal to the surface, 19.5 µm (references R1; derived).
+    std::smatch chartLeft, chartRight;
+    REQUIRE(std::regex_search(html, chartLeft,
+                              std::regex("id=\"chart-left\"[^>]*data-lo=\"([-0-9.e+]+)\" "
+                                         "data-hi=\"([-0-9.e+]+)\"")));
+    REQUIRE(std::regex_search(html, chartRight,
+                              std::regex("id=\"chart-right\"[^>]*data-lo=\"([-0-9.e+]+)\" "
+                                         "data-hi=\"([-0-9.e+]+)\"")));
+    CHECK(chartLeft[1].str() == chartRight[1].str());
+    CHECK(chartLeft[2].str() == chartRight[2].str());
+    CHECK(std::stod(chartLeft[2].str()) >= 0.5 * offsetOnDiameter * 1000 / secT);
+    CHECK_FALSE(contains(html, "scene/chart.png"));
     CHECK(contains(html, "id=\"half-angle-change\""));
     CHECK(contains(html, "out of tolerance"));
     CHECK(contains(html, "within tolerance"));

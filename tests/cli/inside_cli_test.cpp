@@ -74,7 +74,15 @@ TEST_CASE("swarf run bores a socket: the bore in result.json and profile.csv, ho
     CHECK(r.out.find("diameter as cut 25.9610 mm, drawing 26.0000 mm (−39.0 µm)") !=
           std::string::npos);
     CHECK(r.out.find("metal left on, pass 6") != std::string::npos);
+    // And its cause named, on the bore: the missing inside offset, the bore small by the same
+    // 0.039 mm (references R1 mirrored, derived), with the fix toward the wall.
+    CHECK(r.out.find("what moved the cone") != std::string::npos);
+    CHECK(r.out.find("without the nose-radius offset") != std::string::npos);
+    CHECK(r.out.find("the bore is 0.0390 mm small on diameter") != std::string::npos);
+    CHECK(r.out.find("toward the wall") != std::string::npos);
     const std::string json = swarf::test::slurp(out / "result.json");
+    CHECK(json.find("\"source\": \"nose_offset\"") != std::string::npos);
+    CHECK(json.find("\"gauge_diameter_change_mm\": -0.039") != std::string::npos);
     CHECK(json.find("\"side\": \"inside\"") != std::string::npos);
     CHECK(json.find("\"bore\": {") != std::string::npos);
     const std::string csv = swarf::test::slurp(out / "profile.csv");

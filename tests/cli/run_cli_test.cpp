@@ -119,6 +119,29 @@ TEST_CASE("swarf run names findings in words and says when a scene has no passes
     fs::remove_all(dir);
 }
 
+TEST_CASE("swarf run names a trailing edge that rubs as the cause, and a holder that follows",
+          "[cli][run]") {
+    const fs::path dir =
+        fs::temp_directory_path() / ("swarf-run-cli-edge-" + std::to_string(getpid()));
+    fs::remove_all(dir);
+    const Run r = runSwarf("run '" + std::string(SWARF_SCENES_DIR) +
+                           "/lessons/11-steep-trailing-edge-mistake.toml' --out '" + dir.string() +
+                           "' --no-pictures --no-step");
+    INFO(r.out << r.err);
+    REQUIRE(r.exitCode == 0);
+    CHECK(contains(r.out, "the insert's trailing edge rubs"));
+    // derived (references R8): the edge of a 55° insert in a 93° holder slopes at 32°, the
+    // seat drawn at 45°: the edge leaves it 13° shallower.
+    CHECK(contains(r.out, "its half angle 13°00′00″ shallower"));
+    CHECK(contains(r.out, "style J holder")); // a V insert in it follows (the planner's list)
+    const nlohmann::json j = nlohmann::json::parse(slurp(dir / "result.json"));
+    REQUIRE_FALSE(j.at("causes").empty());
+    CHECK(j.at("causes")[0].at("source") == "trailing_edge");
+    CHECK(j.at("causes")[0].at("half_angle_change_deg").get<double>() ==
+          Approx(-13.0).margin(0.01));
+    fs::remove_all(dir);
+}
+
 TEST_CASE("swarf plan ends with the caution, planned or not", "[cli][plan]") {
     for (const char* scene : {"plan-lathe-centre.toml", "plan-valve-seat-rub.toml"}) {
         const fs::path dir =

@@ -68,7 +68,7 @@ void printSummary(const Scene& s, const CutResult& r) {
         // The three largest, and only those that matter beside the largest (5 % of it or more,
         // in tolerances): the readings' rounding stays in result.json.
         auto size = [&](const Cause& c) {
-            const Feature* cone = s.part.mainCone();
+            const Feature* cone = s.workedCone();
             return std::fabs(c.gaugeDiameterChangeMm) / cone->toleranceMm +
                    std::fabs(c.halfAngleChangeRad) / cone->angleToleranceRad;
         };
@@ -111,9 +111,8 @@ void simulateRun(SceneRun& run, const RunFlags& flags) {
         ProgressBar bar;
         run.result = simulate(run.scene, [&bar](double f) { bar.update(f); });
     }
-    // Causes are measured on the outside cone (causes.h): none yet for a bored part.
-    if (!run.result.bored)
-        run.result.causes = findCauses(run.scene, run.result);
+    // Causes are measured on the main cone, outside or bored (causes.h).
+    run.result.causes = findCauses(run.scene, run.result);
     if (!flags.noStep) {
         run.solids =
             geometry::makeRunSolids(run.scene, run.result, geometry::RunSolidsOptions{}.fit);

@@ -111,13 +111,20 @@ std::string compareReportHtml(const CompareSide& a, const CompareSide& b) {
         "<td></td>");
     h += "</table>\n";
 
+    // The charts, on one scale: the same height is the same deviation on both.
+    const CompareChartRange range = compareChartRange(a, b, u);
+    h += "<h2>Deviation along the cone, on one scale</h2>\n";
+    h += "<div class=\"side\"><figure>" + compareChartSvg(a, range, u, "chart-left") +
+         "<figcaption>Left: deviation along the main cone.</figcaption></figure></div>";
+    h += "<div class=\"side\"><figure>" + compareChartSvg(b, range, u, "chart-right") +
+         "<figcaption>Right: deviation along the main cone.</figcaption></figure></div>\n";
+
     if (a.pictures && b.pictures) {
         h += "<h2>Pictures</h2>\n";
         const std::pair<std::string ReportPictures::*, const char*> figs[] = {
             {&ReportPictures::part, "The part as cut, coloured by deviation from the drawing (red: "
                                     "metal left on, blue: overcut)."},
             {&ReportPictures::cone, "The cone filling the picture: the same colours."},
-            {&ReportPictures::chart, "Deviation along the cone with the tolerance lines."},
             {&ReportPictures::section, "Section through the axis with the deviation magnified."}};
         for (const auto& [member, caption] : figs) {
             h += "<div class=\"side\">" +

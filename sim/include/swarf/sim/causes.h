@@ -9,6 +9,10 @@
 //     scale's reading, cross-slide dial read in the other mode), is mended the way the mistake
 //     suggests, on the scene with every removal made, and kept only when it brings the cone
 //     nearer the drawing (the rule in findCauses).
+// The cone is the drawing's main outside cone, or, for a part bored with a boring bar, its main
+// inside cone (the bore: its gauge diameter is the bore's, metal left on makes it small).
+// A straight edge of the insert found rubbing (findings.h, rubbing) is a removal too: the run
+// again with the insert reduced to its nose (a round insert of the same radius).
 // The feed marks' crests are named apart (they do not move the swept envelope the gauge
 // diameter is taken on), and whatever the named causes leave is `other`.
 #include "swarf/sim/scene.h"
@@ -23,7 +27,8 @@ struct CutResult;
 /// One source of the cone's error.
 struct Cause {
     /// Our own snake_case name: nose_offset, tip_height, cross_backlash, compound_backlash,
-    /// saddle_backlash, compound_angle, compound_scale, dial_mode, feed_marks, other.
+    /// saddle_backlash, compound_angle, compound_scale, dial_mode, trailing_edge, leading_edge,
+    /// feed_marks, other.
     std::string source;
     /// The gauge diameter with the source minus without it, mm (+: the source made the cone
     /// larger there). feed_marks: what the crests add on diameter for a gauge that touches
@@ -38,7 +43,8 @@ struct Cause {
     std::string message;
 };
 
-/// The causes of the main cone's error in `result` (the run of `scene`), sorted by size: the
+/// The causes of the main cone's error in `result` (the run of `scene`; its findings say whether
+/// an edge rubbed, its roughness whether the feed marks matter), sorted by size: the
 /// gauge-diameter change over the tolerance plus the half-angle change over the angle
 /// tolerance, largest first. Empty when the drawing has no cone or the plan no passes. A
 /// source is listed only when it moves the gauge diameter by 0.1 µm or more, or the half angle

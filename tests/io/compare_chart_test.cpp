@@ -1,0 +1,84 @@
+// compare.html's charts (swarf/io/compare_report.h): the two runs' deviation drawn to one range,
+// so that the same height is the same deviation on both.
+#include "swarf/io/compare_report.h"
+#include "swarf/io/scene_reader.h"
+#include "swarf/sim/compare.h"
+#include "swarf/sim/kernel.h"
+
+#include <catch2/catch.hpp>
+
+#include <algorithm>
+#include <cmath>
+#include <regex>
+#include <string>
+
+using namespace swarf;
+
+namespace {
+
+// The chart's plot area (compare_chart.cpp): 260 px high, 14 above and 44 below.
+constexpr double kTopPx = 14, kPlotPx = 260 - 14 - 44;
+
+// The largest deviation a chart draws, read back from its polyline through the range it states.
+double largestDrawn(const std::string& svg) {
+    std::smatch m;
+    REQUIRE(
+        std::regex_search(svg, m, std::regex("data-lo=\"([-0-9.e+]+)\" data-hi=\"([-0-9.e+]+)\"")));
+    const double lo = std::stod(m[1].str()), hi = std::stod(m[2].str());
+    REQUIRE(std::regex_search(svg, m, std::regex("points=\"([^\"]+)\"")));
+    const std::string pts = m[1].str();
+    double top = 1e9;
+    const std::regex pair("[-0-9.]+,([-0-9.]+)");
+    for (auto it = std::sregex_iterator(pts.begin(), pts.end(), pair); it != std::sregex_iterator();
+         ++it)
+        top = std::min(top, std::stod((*it)[1].str()));
+    return hi - (top - kTopPx) / kPlotPx * (hi - lo);
+}
+
+// The largest marked deviation over the main cone, µm.
+double largestDeviationUm(const Scene& s, const CutResult& r) {
+    const Feature* cone = s.part.mainCone();
+    const std::vector<double> dev = markedDeviation(r.deviationMm, r.crestDeviationMm);
+    double top = -1e9;
+    for (std::size_t i = 0; i < dev.size(); ++i) {
+        const double z = r.asCut.zAt(i);
+        if (z >= cone->zStartMm && z <= cone->zEndMm && std::isfinite(dev[i]))
+            top = std::max(top, dev[i] * 1000);
+    }
+    return top;
+}
+
+} // namespace
+
+TEST_CASE("compare.html draws both charts to one range", "[io][compare]") {
+    const std::string dir = SWARF_SCENES_DIR;
+    const Scene wrong = io::readScene(dir + "/fixture-arbor-no-offset.toml");
+    const Scene right = io::readScene(dir + "/fixture-arbor.toml");
+    const CutResult rw = simulate(wrong), rr = simulate(right);
+    const io::CompareSide a{&wrong, &rw, "scene", nullptr}, b{&right, &rr, "other", nullptr};
+
+    const io::CompareChartRange range = io::compareChartRange(a, b, Units::Mm);
+    const io::CompareChartRange swapped = io::compareChartRange(b, a, Units::Mm);
+    CHECK(range.loSmall == swapped.loSmall);
+    CHECK(range.hiSmall == swapped.hiSmall);
+    // The range holds both runs' deviation and both tolerance bands.
+    const double mistakeUm = largestDeviationUm(wrong, rw), rightUm = largestDeviationUm(right, rr);
+    CHECK(range.hiSmall >= mistakeUm);
+    CHECK(range.hiSmall >= rightUm);
+    CHECK(range.loSmall <= -normalBandMm(*right.part.mainCone()) * 1000);
+    // derived from references R1: the tip on the drawn line leaves ΔX·cos θ normal to the
+    // surface, 19.5 µm for r = 0.4 mm on a 1:10 cone; the arbor done right stays in its band.
+    CHECK(mistakeUm == Approx(19.5).margin(1.5));
+    CHECK(rightUm < 10.0);
+
+    // Each chart, read back through the range it states, draws its own run's deviation: the
+    // same height is the same deviation on both (to a pixel of the plot).
+    const std::string left = io::compareChartSvg(a, range, Units::Mm, "chart-left");
+    const std::string other = io::compareChartSvg(b, range, Units::Mm, "chart-right");
+    const double umPerPx = (range.hiSmall - range.loSmall) / kPlotPx;
+    CHECK(std::fabs(largestDrawn(left) - mistakeUm) <= umPerPx);
+    CHECK(std::fabs(largestDrawn(other) - rightUm) <= umPerPx);
+    // The mistake's line stands higher than the right one's by their difference in deviation.
+    CHECK(largestDrawn(left) - largestDrawn(other) ==
+          Approx(mistakeUm - rightUm).margin(2 * umPerPx));
+}
