@@ -118,3 +118,19 @@ TEST_CASE("the panel names the cause at the pass that brought it in, in words",
     view.setPosition(1);
     CHECK_FALSE(contains(view.panelText(), "Brings in"));
 }
+
+TEST_CASE("the panel names a bored part's cause at its pass", "[viewer][causes][inside]") {
+    // The collet seat bored without the inside offset: the bore comes out 2ΔX = 0.039 mm small
+    // (references R1, mirrored inside).
+    app::ensureDisplay();
+    const Scene s = io::readScene(std::string(SWARF_SCENES_DIR) + "/bore-socket-no-offset.toml");
+    CutResult r = simulate(s);
+    r.causes = findCauses(s, r);
+    REQUIRE_FALSE(r.causes.empty());
+    CHECK(r.causes.front().source == "nose_offset");
+    viewer::ViewerSession view(s, r, smallWindow());
+    view.setPosition(static_cast<int>(s.plan.passes.size()));
+    INFO(view.panelText());
+    CHECK(contains(view.panelText(), "Brings in the nose-radius offset"));
+    CHECK(contains(view.panelText(), "0.0390 mm"));
+}

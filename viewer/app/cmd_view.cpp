@@ -116,10 +116,9 @@ void registerView(CLI::App& app, int& exitCode) {
         args->options.noTwinNote = rule + ".";
         const auto result = std::make_shared<const CutResult>([&scene] {
             CutResult r = simulate(scene);
-            // The panel names them at their pass; measured on the outside cone (causes.h): none
-            // yet for a bored part, as `swarf run`.
-            if (!r.bored)
-                r.causes = findCauses(scene, r);
+            // The panel names them at their pass; measured on the cone the tool cuts, outside or
+            // bored, as `swarf run` (causes.h).
+            r.causes = findCauses(scene, r);
             return r;
         }());
         if (twin)
