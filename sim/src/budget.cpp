@@ -23,29 +23,44 @@ int mainConeIndex(const Scene& scene) {
     return c ? static_cast<int>(c - scene.part.features.data()) : -1;
 }
 
+// The cone's samples on the scene's grid (z0 at the free end, every profile_step), each the
+// least of `start` and every move's swept envelope there (sweep.h) seen through `radiusOf`: so
+// these samples are those sweepExact makes, without the rest of the bar.
+template <class RadiusOf>
+Profile sweptOverCone(const Scene& scene, const Feature& cone, const std::vector<ToolMove>& moves,
+                      double start, RadiusOf radiusOf) {
+    const ToolOutline outline(scene.tool);
+    Profile p;
+    p.dzMm = scene.sim.profileStepMm;
+    const double z0 = scene.stock.freeEndZMm();
+    const double first = std::ceil((cone.zStartMm - z0) / p.dzMm - 1e-9);
+    const double last = std::floor((cone.zEndMm - z0) / p.dzMm + 1e-9);
+    p.z0Mm = z0 + first * p.dzMm;
+    const auto n = static_cast<std::size_t>(std::max(1.0, last - first + 1));
+    p.radiusMm.assign(n, start);
+    for (const ToolMove& m : moves) {
+        const MoveSweep sw = prepareMove(outline, m);
+        const double lo = std::max(0.0, std::ceil((sw.zLoMm - p.z0Mm) / p.dzMm));
+        const double hi =
+            std::min(static_cast<double>(n), std::floor((sw.zHiMm - p.z0Mm) / p.dzMm) + 1);
+        for (auto i = static_cast<std::size_t>(lo); static_cast<double>(i) < hi; ++i)
+            p.radiusMm[i] = std::min(p.radiusMm[i], radiusOf(sweptLowestX(outline, sw, p.zAt(i))));
+    }
+    return p;
+}
+
 // partOutcome for a bored cone: the same exact sweep on the twin x' = C − x (inside_kernel.h),
 // the hole as the twin's stock, each sample brought back to the bore's radius.
 PartOutcome boredOutcome(const Scene& scene, const Feature& cone, int featureIndex) {
     const ToolOutline outline(scene.tool);
-    const std::vector<ToolMove> moves = planMoves(scene);
     const double c = insideTwinOffsetMm(scene), h = scene.tool.tipHeightMm;
-    Profile twin;
-    twin.dzMm = scene.sim.profileStepMm;
-    const double z0 = scene.stock.freeEndZMm();
-    const double first = std::ceil((cone.zStartMm - z0) / twin.dzMm - 1e-9);
-    const double last = std::floor((cone.zEndMm - z0) / twin.dzMm + 1e-9);
-    twin.z0Mm = z0 + first * twin.dzMm;
-    const auto n = static_cast<std::size_t>(std::max(1.0, last - first + 1));
+    std::vector<ToolMove> moves = planMoves(scene);
+    for (ToolMove& m : moves)
+        m = insideTwinMove(m, c);
     const double hole = 0.5 * scene.stock.boreDiameterMm;
-    twin.radiusMm.assign(n, c - std::sqrt(std::max(0.0, hole * hole - h * h)));
-    for (const ToolMove& m : moves) {
-        const MoveSweep sw = prepareMove(outline, insideTwinMove(m, c));
-        const double lo = std::max(0.0, std::ceil((sw.zLoMm - twin.z0Mm) / twin.dzMm));
-        const double hi =
-            std::min(static_cast<double>(n), std::floor((sw.zHiMm - twin.z0Mm) / twin.dzMm) + 1);
-        for (auto i = static_cast<std::size_t>(lo); static_cast<double>(i) < hi; ++i)
-            twin.radiusMm[i] = std::min(twin.radiusMm[i], sweptLowestX(outline, sw, twin.zAt(i)));
-    }
+    const Profile twin =
+        sweptOverCone(scene, cone, moves, c - std::sqrt(std::max(0.0, hole * hole - h * h)),
+                      [](double x) { return x; });
     Profile bore = twin;
     for (double& r : bore.radiusMm)
         r = boreRadiusFromTwin(r, c, h);
@@ -187,28 +202,9 @@ PartOutcome partOutcome(const Scene& scene, int featureIndex) {
     if (scene.tool.kind == ToolKind::BoringBar)
         return boredOutcome(scene, cone, featureIndex);
     const ToolOutline outline(scene.tool);
-    const std::vector<ToolMove> moves = planMoves(scene);
-    // The exact profile over the cone alone: each sample is the minimum of the bar and every
-    // move's swept envelope there (sweep.h), so these samples are those sweepExact makes on the
-    // scene's grid (z0 at the free end, every profile_step), without the rest of the bar.
-    Profile asCut;
-    asCut.dzMm = scene.sim.profileStepMm;
-    const double z0 = scene.stock.freeEndZMm();
-    const double first = std::ceil((cone.zStartMm - z0) / asCut.dzMm - 1e-9);
-    const double last = std::floor((cone.zEndMm - z0) / asCut.dzMm + 1e-9);
-    asCut.z0Mm = z0 + first * asCut.dzMm;
-    const auto n = static_cast<std::size_t>(std::max(1.0, last - first + 1));
-    asCut.radiusMm.assign(n, 0.5 * scene.stock.diameterMm);
-    for (const ToolMove& m : moves) {
-        const MoveSweep sw = prepareMove(outline, m);
-        const double lo = std::max(0.0, std::ceil((sw.zLoMm - asCut.z0Mm) / asCut.dzMm));
-        const double hi =
-            std::min(static_cast<double>(n), std::floor((sw.zHiMm - asCut.z0Mm) / asCut.dzMm) + 1);
-        for (auto i = static_cast<std::size_t>(lo); static_cast<double>(i) < hi; ++i) {
-            const double x = sweptLowestX(outline, sw, asCut.zAt(i));
-            asCut.radiusMm[i] = std::min(asCut.radiusMm[i], cutRadiusMm(x, scene.tool.tipHeightMm));
-        }
-    }
+    const double h = scene.tool.tipHeightMm;
+    const Profile asCut = sweptOverCone(scene, cone, planMoves(scene), 0.5 * scene.stock.diameterMm,
+                                        [h](double x) { return cutRadiusMm(x, h); });
     const Profile nominal = nominalOnGrid(scene.part, asCut);
     const std::vector<double> dev = normalDeviation(scene.part, nominal, asCut);
     const std::vector<bool> mask = verdictMask(scene.part, asCut, outline.noseRadiusMm());

@@ -1,6 +1,7 @@
 #pragma once
 // Internal to the planner: the state used while a plan is built (see planner.cpp and
 // planner_cone.cpp). Not a public header.
+#include "swarf/sim/compound_sense.h"
 #include "swarf/sim/planner.h"
 
 #include <optional>
@@ -18,6 +19,12 @@ std::string centreHeightText(const Scene& sc);
 std::string measureBarText(const Scene& sc, double crossK, bool touchOff);
 void fillIndicator(ConePlan& out, const Scene& sc);
 std::string setCompoundText(const ConePlan& out, const Scene& sc);
+
+/// The compound as a plan sets it (both planners): readings taken up (approach "take_up", wound
+/// back far enough for the backlash), the half angle on the scene's scale, a note on an angle
+/// read off the other scale, and the trailing edge when it cuts. False, with the problem said,
+/// when the compound cannot cut the cone (`fit` from compoundFitForCone).
+bool setUpCompound(ConePlan& out, const Scene& scene, const Feature& cone, const CompoundFit& fit);
 
 /// Appends a step in words (not a pass) to the plan's order of operations.
 void addStep(ConePlan& out, PlanStep::Kind kind, std::string text);

@@ -89,26 +89,9 @@ ConePlan planCone(const Scene& scene) {
 
     // The compound as the scene describes it: its sense is the lathe's, never rewritten.
     const CompoundFit fit = compoundFitForCone(scene.setup, scene.tool, cone);
-    if (!fit.parallel) {
-        out.problems.push_back("the compound cannot cut this cone: " + fit.message +
-                               " Nothing was planned.");
+    if (!detail::setUpCompound(out, scene, f, fit))
         return out;
-    }
     Setup& setup = out.scene.setup;
-    // The sheet has every reading set before a pass approached from below, taking up backlash.
-    setup.approach = Approach::TakeUp;
-    // Wound back far enough to take up the backlash: quarter turns, more if a slide needs it.
-    while (setup.windBackTurns < 10 &&
-           (setup.windBackTurns * turnMm(setup.compound) <= setup.compound.backlashMm ||
-            setup.windBackTurns * turnMm(setup.saddle) <= setup.saddle.backlashMm))
-        setup.windBackTurns += 0.25;
-    if (auto other = otherScaleNote(scene.setup, f))
-        out.cautions.push_back("as the scene gives it, " + *other + " The plan sets it right.");
-    setup.compoundReadingRad = compoundScaleReadingRad(th, setup.compoundScale);
-    out.compoundReadingRad = setup.compoundReadingRad;
-    out.trailingEdge = fit.trailingEdge;
-    if (fit.trailingEdge)
-        out.cautions.push_back("the cone is cut with the trailing edge: " + fit.message);
 
     const TipSide side = scene.tool.hand == Hand::L ? TipSide::TailstockSide : TipSide::ChuckSide;
     const NoseOffsets no = noseRadiusOffsets(scene.tool.noseRadiusMm, th, cone.widens, side);

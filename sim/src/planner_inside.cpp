@@ -81,24 +81,9 @@ ConePlan planInsideCone(const Scene& scene) {
         return out;
     }
     const CompoundFit fit = compoundFitForCone(scene.setup, tool, cone);
-    if (!fit.parallel) {
-        out.problems.push_back("the compound cannot cut this cone: " + fit.message +
-                               " Nothing was planned.");
+    if (!detail::setUpCompound(out, scene, f, fit))
         return out;
-    }
     Setup& setup = out.scene.setup;
-    setup.approach = Approach::TakeUp;
-    while (setup.windBackTurns < 10 &&
-           (setup.windBackTurns * turnMm(setup.compound) <= setup.compound.backlashMm ||
-            setup.windBackTurns * turnMm(setup.saddle) <= setup.saddle.backlashMm))
-        setup.windBackTurns += 0.25;
-    if (auto other = otherScaleNote(scene.setup, f))
-        out.cautions.push_back("as the scene gives it, " + *other + " The plan sets it right.");
-    setup.compoundReadingRad = compoundScaleReadingRad(th, setup.compoundScale);
-    out.compoundReadingRad = setup.compoundReadingRad;
-    out.trailingEdge = fit.trailingEdge;
-    if (fit.trailingEdge)
-        out.cautions.push_back("the cone is cut with the trailing edge: " + fit.message);
 
     detail::BoreBuilder b(scene, out, f);
     out.noseOffsetRadialMm = b.noseOutMm();

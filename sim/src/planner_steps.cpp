@@ -4,6 +4,7 @@
 #include "planner_build.h"
 
 #include "swarf/sim/compound_sense.h"
+#include "swarf/sim/compound_setting.h"
 #include "swarf/sim/machine.h"
 
 #include <algorithm>
@@ -25,6 +26,30 @@ double handwheelTurnsPerMinute(const Setup& setup, const Pass& pass) {
 }
 
 namespace detail {
+
+bool setUpCompound(ConePlan& out, const Scene& scene, const Feature& cone, const CompoundFit& fit) {
+    if (!fit.parallel) {
+        out.problems.push_back("the compound cannot cut this cone: " + fit.message +
+                               " Nothing was planned.");
+        return false;
+    }
+    Setup& setup = out.scene.setup;
+    // The sheet has every reading set before a pass approached from below, taking up backlash.
+    setup.approach = Approach::TakeUp;
+    // Wound back far enough to take up the backlash: quarter turns, more if a slide needs it.
+    while (setup.windBackTurns < 10 &&
+           (setup.windBackTurns * turnMm(setup.compound) <= setup.compound.backlashMm ||
+            setup.windBackTurns * turnMm(setup.saddle) <= setup.saddle.backlashMm))
+        setup.windBackTurns += 0.25;
+    if (auto other = otherScaleNote(scene.setup, cone))
+        out.cautions.push_back("as the scene gives it, " + *other + " The plan sets it right.");
+    setup.compoundReadingRad = compoundScaleReadingRad(cone.cone.halfAngleRad, setup.compoundScale);
+    out.compoundReadingRad = setup.compoundReadingRad;
+    out.trailingEdge = fit.trailingEdge;
+    if (fit.trailingEdge)
+        out.cautions.push_back("the cone is cut with the trailing edge: " + fit.message);
+    return true;
+}
 
 void addStep(ConePlan& out, PlanStep::Kind kind, std::string text) {
     PlanStep s;
