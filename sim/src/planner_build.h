@@ -26,6 +26,11 @@ std::string setCompoundText(const ConePlan& out, const Scene& sc);
 /// when the compound cannot cut the cone (`fit` from compoundFitForCone).
 bool setUpCompound(ConePlan& out, const Scene& scene, const Feature& cone, const CompoundFit& fit);
 
+/// The end of either planner: a caution for a cross-slide reading beyond its travel, `planned`
+/// set, and a plan longer than kMaxPasses refused (the problem said, with `advice` on what else
+/// would shorten it, and the plan emptied): false then.
+bool settlePlanSize(ConePlan& out, const Scene& scene, const std::string& advice);
+
 /// Appends a step in words (not a pass) to the plan's order of operations.
 void addStep(ConePlan& out, PlanStep::Kind kind, std::string text);
 

@@ -315,25 +315,8 @@ ConePlan planCone(const Scene& scene) {
                                (scene.tool.tipHeightMm > 0 ? " above" : " below") +
                                " centre: a straight pass then cuts a slightly hollow cone; set it "
                                "on centre if you can");
-    for (const Pass& p : out.scene.plan.passes)
-        if (std::fabs(p.crossMm) > scene.setup.cross.travelMm) {
-            out.cautions.push_back("a cross-slide reading is beyond its travel");
-            break;
-        }
-    out.planned = !out.scene.plan.passes.empty();
-    if (out.scene.plan.passes.size() > kMaxPasses) {
-        // A scene holds at most kMaxPasses: say which setting makes the plan so long.
-        out.problems.push_back("the plan needs " + std::to_string(out.scene.plan.passes.size()) +
-                               " passes, more than the " + std::to_string(kMaxPasses) +
-                               " a scene may hold: take deeper cuts (planning.max_depth = " +
-                               L(scene.planning.maxDepthMm) +
-                               " now) or start from a bar closer to size");
-        out.planned = false;
-        out.scene.plan.passes.clear();
-        out.display.clear();
-        out.steps.clear();
+    if (!detail::settlePlanSize(out, scene, "or start from a bar closer to size"))
         return out;
-    }
     if (out.planned) {
         // Readings a person can set, checked by sweeping the plan; starts clear of the metal;
         // back-outs that keep the way back clear.

@@ -305,23 +305,8 @@ ConePlan planInsideCone(const Scene& scene) {
                                (tool.tipHeightMm > 0 ? " above" : " below") +
                                " centre: the readings allow for it at the gauge plane, but the "
                                "bore then comes out slightly curved; set it on centre if you can");
-    for (const Pass& p : out.scene.plan.passes)
-        if (std::fabs(p.crossMm) > scene.setup.cross.travelMm) {
-            out.cautions.push_back("a cross-slide reading is beyond its travel");
-            break;
-        }
-    out.planned = !out.scene.plan.passes.empty();
-    if (out.scene.plan.passes.size() > kMaxPasses) {
-        out.problems.push_back("the plan needs " + std::to_string(out.scene.plan.passes.size()) +
-                               " passes, more than the " + std::to_string(kMaxPasses) +
-                               " a scene may hold: take deeper cuts (planning.max_depth = " +
-                               L(scene.planning.maxDepthMm) + " now)");
-        out.planned = false;
-        out.scene.plan.passes.clear();
-        out.display.clear();
-        out.steps.clear();
+    if (!detail::settlePlanSize(out, scene, ""))
         return out;
-    }
     if (out.planned) {
         // Off the wall to a whole division as the stage reads it (machine.h's back-off, rounded
         // toward the centre).

@@ -51,6 +51,28 @@ bool setUpCompound(ConePlan& out, const Scene& scene, const Feature& cone, const
     return true;
 }
 
+bool settlePlanSize(ConePlan& out, const Scene& scene, const std::string& advice) {
+    for (const Pass& p : out.scene.plan.passes)
+        if (std::fabs(p.crossMm) > scene.setup.cross.travelMm) {
+            out.cautions.push_back("a cross-slide reading is beyond its travel");
+            break;
+        }
+    out.planned = !out.scene.plan.passes.empty();
+    if (out.scene.plan.passes.size() <= kMaxPasses)
+        return true;
+    // A scene holds at most kMaxPasses: say which setting makes the plan so long.
+    out.problems.push_back("the plan needs " + std::to_string(out.scene.plan.passes.size()) +
+                           " passes, more than the " + std::to_string(kMaxPasses) +
+                           " a scene may hold: take deeper cuts (planning.max_depth = " +
+                           formatLength(scene.planning.maxDepthMm, scene.units) + " now)" +
+                           (advice.empty() ? "" : " " + advice));
+    out.planned = false;
+    out.scene.plan.passes.clear();
+    out.display.clear();
+    out.steps.clear();
+    return false;
+}
+
 void addStep(ConePlan& out, PlanStep::Kind kind, std::string text) {
     PlanStep s;
     s.kind = kind;
