@@ -53,18 +53,30 @@ Section jobSection(const Ctx& c) {
     const Tool& t = c.sc.tool;
     const Setup& su = c.su;
     std::vector<std::string> jl;
-    jl.push_back("Cone '" + f.name + "': Ø" + c.L(cone.gaugeDiameterMm) + " ± " +
-                 c.L(f.toleranceMm) + " at the gauge plane " + c.L(cone.gaugeZMm) +
-                 " from the datum face; from " + c.L(f.zStartMm) + " to " + c.L(f.zEndMm) +
-                 ", widening toward the " + towardName(cone.widens) + ".");
+    jl.push_back(std::string(f.side == Side::Inside ? "Inside cone (a bore) '" : "Cone '") +
+                 f.name + "': Ø" + c.L(cone.gaugeDiameterMm) + " ± " + c.L(f.toleranceMm) +
+                 " at the gauge plane " + c.L(cone.gaugeZMm) + " from the datum face; from " +
+                 c.L(f.zStartMm) + " to " + c.L(f.zEndMm) + ", widening toward the " +
+                 towardName(cone.widens) + ".");
     char ratio[32];
     std::snprintf(ratio, sizeof ratio, "%.3f", cone.ratioK());
     jl.push_back("Half angle θ = " + formatDms(c.plan.halfAngleRad, 1) + " (included " +
                  formatDms(2 * c.plan.halfAngleRad, 1) + "; taper 1:" + ratio +
                  " on diameter), ± " + formatDms(f.angleToleranceRad, 0) + ".");
-    jl.push_back("Bar Ø" + c.L(c.sc.stock.diameterMm) + ", " + c.L(c.sc.stock.stickOutMm) +
-                 " out of the jaws" +
-                 (c.sc.stock.material.empty() ? "" : ", " + c.sc.stock.material) + ".");
+    const Stock& st = c.sc.stock;
+    jl.push_back("Bar Ø" + c.L(st.diameterMm) + ", " + c.L(st.stickOutMm) + " out of the jaws" +
+                 (st.hasBore() ? ", with a hole Ø" + c.L(st.boreDiameterMm) +
+                                     (st.boreThrough() ? " through the work"
+                                                       : " " + c.L(st.boreDepthMm) + " deep")
+                               : std::string()) +
+                 (st.material.empty() ? "" : ", " + st.material) + ".");
+    if (t.kind == ToolKind::BoringBar) {
+        char ratio2[32];
+        std::snprintf(ratio2, sizeof ratio2, "%.1f", t.overhangMm / t.barDiameterMm);
+        jl.push_back("Boring bar Ø" + c.L(t.barDiameterMm) + ", " + c.L(t.overhangMm) +
+                     " out of its holder (" + ratio2 + " bar diameters); it enters a bore of Ø" +
+                     c.L(t.minBoreMm) + " or more.");
+    }
     const char* hand = t.hand == Hand::L ? "L" : t.hand == Hand::N ? "N" : "R";
     jl.push_back(std::string("Insert shape ") + (t.shape ? std::string(1, t.shape) : "?") +
                  ", nose radius " + c.L(t.noseRadiusMm) + ", entering angle " +
