@@ -18,15 +18,25 @@ double bracketX(const ToolOutline& o, const MarkedMove& m, double zMm, double sS
 
 // G over one feed at a plane where s* is mid-move, and its exact largest value: where the two
 // bracketing positions cut equally deep (their difference grows with ψ: bisection).
-void tabulate(const ToolOutline& o, MarkedMove& m) {
+// False when the support point is the outline's very end (an edge's corner, found a hair past it
+// by rounding): then a straight edge, not the nose, forms the surface and leaves no scallops.
+bool tabulate(const ToolOutline& o, MarkedMove& m) {
     const double sStar = 0.5 * m.lenMm;
     const double z = m.c0.x() + m.supportZMm + sStar * m.dir.x();
     const double line = xAtPath(o, m, z, sStar);
+    if (!std::isfinite(line))
+        return false;
     m.table.resize(kMarkTableSamples + 1);
     for (int i = 0; i <= kMarkTableSamples; ++i) {
         const double psi = static_cast<double>(i) / kMarkTableSamples;
+        // A position with no edge at this plane gives the outline's "nothing here" (1e300): as
+        // a float that is infinity, written so, since the narrowing itself would overflow.
+        const double v = bracketX(o, m, z, sStar, psi) - line;
         m.table[static_cast<std::size_t>(i)] =
-            static_cast<float>(bracketX(o, m, z, sStar, psi) - line);
+            std::isfinite(v) && std::fabs(v) <= std::numeric_limits<float>::max()
+                ? static_cast<float>(v)
+                : (std::signbit(v) ? -std::numeric_limits<float>::infinity()
+                                   : std::numeric_limits<float>::infinity());
     }
     double lo = 0, hi = 1;
     for (int it = 0; it < 80; ++it) {
@@ -39,6 +49,7 @@ void tabulate(const ToolOutline& o, MarkedMove& m) {
             hi = mid;
     }
     m.crestMm = std::max(bracketX(o, m, z, sStar, lo), bracketX(o, m, z, sStar, hi)) - line;
+    return true;
 }
 
 } // namespace
@@ -68,8 +79,8 @@ MarkedMove prepareMarkedMove(const ToolOutline& outline, const std::vector<ToolM
         return m;
     }
     m.kind = MarkedMove::Kind::Marked;
-    if (m.lenMm >= 2.0 * m.feedMm)
-        tabulate(outline, m);
+    if (m.lenMm >= 2.0 * m.feedMm && !tabulate(outline, m))
+        m.kind = MarkedMove::Kind::Smooth;
     return m;
 }
 

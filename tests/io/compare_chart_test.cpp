@@ -9,7 +9,7 @@
 
 #include <algorithm>
 #include <cmath>
-#include <regex>
+#include <sstream>
 #include <string>
 
 using namespace swarf;
@@ -19,19 +19,35 @@ namespace {
 // The chart's plot area (compare_chart.cpp): 260 px high, 14 above and 44 below.
 constexpr double kTopPx = 14, kPlotPx = 260 - 14 - 44;
 
+// The text of attribute `name` (name="...") after `from` in `svg`; empty if there is none. Plain
+// string search: std::regex recurses once per character and a polyline of thousands of points
+// overflows the stack under the sanitizers.
+std::string attribute(const std::string& svg, const std::string& name, std::size_t from = 0) {
+    const std::string key = name + "=\"";
+    const std::size_t at = svg.find(key, from);
+    if (at == std::string::npos)
+        return "";
+    const std::size_t begin = at + key.size(), end = svg.find('"', begin);
+    return end == std::string::npos ? "" : svg.substr(begin, end - begin);
+}
+
 // The largest deviation a chart draws, read back from its polyline through the range it states.
 double largestDrawn(const std::string& svg) {
-    std::smatch m;
-    REQUIRE(
-        std::regex_search(svg, m, std::regex("data-lo=\"([-0-9.e+]+)\" data-hi=\"([-0-9.e+]+)\"")));
-    const double lo = std::stod(m[1].str()), hi = std::stod(m[2].str());
-    REQUIRE(std::regex_search(svg, m, std::regex("points=\"([^\"]+)\"")));
-    const std::string pts = m[1].str();
+    const std::string loText = attribute(svg, "data-lo"), hiText = attribute(svg, "data-hi");
+    REQUIRE_FALSE(loText.empty());
+    REQUIRE_FALSE(hiText.empty());
+    const double lo = std::stod(loText), hi = std::stod(hiText);
+    const std::string pts = attribute(svg, "points");
+    REQUIRE_FALSE(pts.empty());
     double top = 1e9;
-    const std::regex pair("[-0-9.]+,([-0-9.]+)");
-    for (auto it = std::sregex_iterator(pts.begin(), pts.end(), pair); it != std::sregex_iterator();
-         ++it)
-        top = std::min(top, std::stod((*it)[1].str()));
+    // "x,y x,y ...": the smallest y is the highest point drawn.
+    std::istringstream in(pts);
+    std::string pair;
+    while (in >> pair) {
+        const std::size_t comma = pair.find(',');
+        REQUIRE(comma != std::string::npos);
+        top = std::min(top, std::stod(pair.substr(comma + 1)));
+    }
     return hi - (top - kTopPx) / kPlotPx * (hi - lo);
 }
 
