@@ -1,5 +1,6 @@
 // The meshes of inside work (see bore_meshes.h).
 #include "bore_meshes.h"
+#include "meshes.h"
 
 #include "swarf/sim/boring_checks.h"
 #include "swarf/sim/compare.h"
@@ -134,28 +135,8 @@ vtkSmartPointer<vtkPolyData> boreMarkPatch(const BoreMarks& marks, const Profile
             const vtkIdType quad[4] = {a, a + nc, b + nc, b}; // facing the axis
             polys->InsertNextCell(4, quad);
         }
-    // Normals from the grid, toward the axis: the axial difference crossed with the
-    // circumferential one.
-    auto normals = vtkSmartPointer<vtkFloatArray>::New();
-    normals->SetNumberOfComponents(3);
-    normals->SetNumberOfTuples(points->GetNumberOfPoints());
-    for (vtkIdType i = 0; i < nr; ++i)
-        for (int c = 0; c < nc; ++c) {
-            double p0[3], p1[3], q0[3], q1[3];
-            points->GetPoint((i > 0 ? i - 1 : i) * nc + c, p0);
-            points->GetPoint((i + 1 < nr ? i + 1 : i) * nc + c, p1);
-            points->GetPoint(i * nc + (c > 0 ? c - 1 : c), q0);
-            points->GetPoint(i * nc + (c + 1 < nc ? c + 1 : c), q1);
-            const double a[3] = {p1[0] - p0[0], p1[1] - p0[1], p1[2] - p0[2]};
-            const double b[3] = {q1[0] - q0[0], q1[1] - q0[1], q1[2] - q0[2]};
-            double n[3] = {a[1] * b[2] - a[2] * b[1], a[2] * b[0] - a[0] * b[2],
-                           a[0] * b[1] - a[1] * b[0]};
-            const double len = std::sqrt(n[0] * n[0] + n[1] * n[1] + n[2] * n[2]);
-            if (len > 0)
-                for (double& v : n)
-                    v /= len;
-            normals->SetTuple(i * nc + c, n);
-        }
+    // Normals from the grid, toward the axis (a patch: no wrap around).
+    const auto normals = gridNormals(points, nr, nc, false, true);
     pd->SetPoints(points);
     pd->SetPolys(polys);
     pd->GetPointData()->SetNormals(normals);

@@ -40,6 +40,33 @@ double slopeAt(const Profile& p, std::size_t i) {
 
 } // namespace
 
+vtkSmartPointer<vtkFloatArray> gridNormals(vtkPoints* points, vtkIdType nr, int nc, bool wraps,
+                                           bool towardAxis) {
+    auto normals = vtkSmartPointer<vtkFloatArray>::New();
+    normals->SetNumberOfComponents(3);
+    normals->SetNumberOfTuples(points->GetNumberOfPoints());
+    for (vtkIdType i = 0; i < nr; ++i)
+        for (int c = 0; c < nc; ++c) {
+            double p0[3], p1[3], q0[3], q1[3];
+            points->GetPoint((i > 0 ? i - 1 : i) * nc + c, p0);
+            points->GetPoint((i + 1 < nr ? i + 1 : i) * nc + c, p1);
+            points->GetPoint(i * nc + (wraps ? (c + nc - 1) % nc : (c > 0 ? c - 1 : c)), q0);
+            points->GetPoint(i * nc + (wraps ? (c + 1) % nc : (c + 1 < nc ? c + 1 : c)), q1);
+            // a: along the axis, b: around it; b × a points out of the part, a × b toward the axis.
+            const double a[3] = {p1[0] - p0[0], p1[1] - p0[1], p1[2] - p0[2]};
+            const double b[3] = {q1[0] - q0[0], q1[1] - q0[1], q1[2] - q0[2]};
+            const double sign = towardAxis ? 1.0 : -1.0;
+            double n[3] = {sign * (a[1] * b[2] - a[2] * b[1]), sign * (a[2] * b[0] - a[0] * b[2]),
+                           sign * (a[0] * b[1] - a[1] * b[0])};
+            const double len = std::sqrt(n[0] * n[0] + n[1] * n[1] + n[2] * n[2]);
+            if (len > 0)
+                for (double& v : n)
+                    v /= len;
+            normals->SetTuple(i * nc + c, n);
+        }
+    return normals;
+}
+
 vtkSmartPointer<vtkPolyData> revolve(const Profile& profile, const std::vector<std::size_t>& rows,
                                      const std::vector<double>* scalars, int nPhi, double phi0,
                                      double phiSpan, bool inward) {
@@ -157,27 +184,8 @@ vtkSmartPointer<vtkPolyData> feedMarkPatch(const FeedMarkSurface& surface, const
             const vtkIdType quad[4] = {a, b, b + nc, a + nc};
             polys->InsertNextCell(4, quad);
         }
-    // Normals from the grid: the circumferential difference crossed with the axial one.
-    auto normals = vtkSmartPointer<vtkFloatArray>::New();
-    normals->SetNumberOfComponents(3);
-    normals->SetNumberOfTuples(points->GetNumberOfPoints());
-    for (vtkIdType i = 0; i < nr; ++i)
-        for (int c = 0; c < nc; ++c) {
-            double p0[3], p1[3], q0[3], q1[3];
-            points->GetPoint((i > 0 ? i - 1 : i) * nc + c, p0);
-            points->GetPoint((i + 1 < nr ? i + 1 : i) * nc + c, p1);
-            points->GetPoint(i * nc + (c + nc - 1) % nc, q0);
-            points->GetPoint(i * nc + (c + 1) % nc, q1);
-            const double a[3] = {p1[0] - p0[0], p1[1] - p0[1], p1[2] - p0[2]};
-            const double b[3] = {q1[0] - q0[0], q1[1] - q0[1], q1[2] - q0[2]};
-            double n[3] = {b[1] * a[2] - b[2] * a[1], b[2] * a[0] - b[0] * a[2],
-                           b[0] * a[1] - b[1] * a[0]};
-            const double len = std::sqrt(n[0] * n[0] + n[1] * n[1] + n[2] * n[2]);
-            if (len > 0)
-                for (double& v : n)
-                    v /= len;
-            normals->SetTuple(i * nc + c, n);
-        }
+    // Normals from the grid, outward: around the part it wraps.
+    const auto normals = gridNormals(points, nr, nc, true, false);
     pd->SetPoints(points);
     pd->SetPolys(polys);
     pd->GetPointData()->SetNormals(normals);

@@ -8,12 +8,20 @@
 #include "swarf/sim/scene.h"
 #include "swarf/viewer/trace.h"
 
+#include <vtkFloatArray.h>
+#include <vtkPoints.h>
 #include <vtkPolyData.h>
 #include <vtkSmartPointer.h>
 
 #include <vector>
 
 namespace swarf::viewer::detail {
+
+/// Unit normals of a grid of nr rows (along the axis) by nc columns (around it), by central
+/// differences (one-sided at the edges; around the part when `wraps`): out of the part, or
+/// toward the axis when `towardAxis` (a bore seen from inside).
+vtkSmartPointer<vtkFloatArray> gridNormals(vtkPoints* points, vtkIdType nr, int nc, bool wraps,
+                                           bool towardAxis);
 
 /// Surface of revolution of `profile` over the given rows, φ from phi0 over phiSpan (rad) in
 /// nPhi steps. Point scalars "deviation" (display units, NaN off the drawing) if given. With
